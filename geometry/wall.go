@@ -1,0 +1,128 @@
+package geometry
+
+// System is the unit system a wall is entered and reported in.
+type System int
+
+const (
+	US System = iota // ft, in, kip, psi; a bare length is in feet
+	SI               // m, mm, kN, MPa; a bare length is in metres
+)
+
+// Support is the rotational restraint at the top of a wall or a pier.
+type Support int
+
+const (
+	Cantilever Support = iota // fixed base, free top
+	Fixed                     // fixed base, top kept from rotating (fixed-fixed)
+)
+
+// MaterialKind selects how E and E_v are found from the strength.
+type MaterialKind int
+
+const (
+	ConcreteMasonry MaterialKind = iota // E_m = 900 f'm (TMS 402)
+	ClayMasonry                         // E_m = 700 f'm (TMS 402)
+	Concrete                            // E_c = 57,000 √f'c psi (ACI 318)
+	Custom                              // E (and E_v) given by the user
+)
+
+// Material is what the user said about the wall's material. Zero Modulus or
+// ShearModulus means "use the rule of the kind"; the pier package turns this
+// into moduli and says where each one came from.
+type Material struct {
+	Kind         MaterialKind
+	Strength     Stress // f'm for masonry, f'c for concrete; may be zero for Custom
+	Modulus      Stress // E; required for Custom, an override otherwise
+	ShearModulus Stress // E_v; default 0.4 E
+}
+
+// Load is the in-plane shear at the top of the wall; zero means no load given.
+type Load struct {
+	Shear Force
+}
+
+// Stiffness holds the user's stiffness modifiers for cracking (default 1 each):
+// Flexure multiplies I (kf), Shear multiplies the shear area (kv).
+type Stiffness struct {
+	Flexure float64
+	Shear   float64
+}
+
+// Drift holds the storey-drift check settings: δ = Cd·δe/Ie against Limit·h.
+type Drift struct {
+	Cd     float64 // deflection amplification factor; default 1
+	Ie     float64 // importance factor; default 1
+	Preset string  // name of a limit preset ("" when Limit was typed)
+	Limit  float64 // allowable drift as a fraction of the height; 0 = no check
+}
+
+// Check holds the finite-element check settings.
+type Check struct {
+	Mesh    Length // maximum element size; 0 = the default
+	Element string // element name; "" = the default element
+}
+
+// Opening is a door or a window in the wall elevation. X is from the wall's
+// left end to the opening's left edge, Sill from the wall's base to the
+// opening's bottom edge.
+type Opening struct {
+	Name   string
+	X      Length
+	Sill   Length
+	Width  Length
+	Height Length
+}
+
+// IsDoor reports whether the opening reaches the base of the wall.
+func (o Opening) IsDoor() bool { return o.Sill <= 0 }
+
+// Rect returns the opening's outline in wall coordinates (metres).
+func (o Opening) Rect() Rect {
+	return Rect{X0: float64(o.X), Y0: float64(o.Sill), X1: float64(o.X + o.Width), Y1: float64(o.Sill + o.Height)}
+}
+
+// Layout is one named arrangement of the openings of a wall (a variant).
+type Layout struct {
+	Name     string
+	Openings []Opening
+}
+
+// Wall is one wall elevation with all its layouts. The active layout is the
+// one that is solved, drawn and reported.
+type Wall struct {
+	Title     string
+	Units     System
+	Length    Length
+	Height    Length
+	Thickness Length
+	Support   Support
+	Material  Material
+	Load      Load
+	Stiffness Stiffness
+	Drift     Drift
+	Check     Check
+	Layouts   []Layout // at least one; Layouts[0] holds the file's top-level openings
+	Active    int      // index into Layouts
+}
+
+// Openings returns the openings of the active layout.
+func (w *Wall) Openings() []Opening {
+	if w.Active < 0 || w.Active >= len(w.Layouts) {
+		return nil
+	}
+	return w.Layouts[w.Active].Openings
+}
+
+// Rect returns the wall's outline in wall coordinates (metres).
+func (w *Wall) Rect() Rect {
+	return Rect{X1: float64(w.Length), Y1: float64(w.Height)}
+}
+
+// Rect is an axis-aligned rectangle in metres, X0 < X1 and Y0 < Y1.
+type Rect struct {
+	X0, Y0, X1, Y1 float64
+}
+
+// W and H return the width and the height.
+func (r Rect) W() float64 { return r.X1 - r.X0 }
+func (r Rect) H() float64 { return r.Y1 - r.Y0 }

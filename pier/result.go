@@ -1,0 +1,87 @@
+package pier
+
+import "pierwise/geometry"
+
+// Parts is a relative deflection (E = 1, t = 1) split into its bending and
+// shear terms. Total = Bending + Shear.
+type Parts struct {
+	Bending float64
+	Shear   float64
+}
+
+// Total returns the whole relative deflection.
+func (p Parts) Total() float64 { return p.Bending + p.Shear }
+
+// Moduli are the elastic moduli used for a wall and where they came from.
+type Moduli struct {
+	E      geometry.Stress // E_m or E_c
+	Ev     geometry.Stress // shear modulus E_v (G)
+	Source string          // e.g. "E_m = 900 f'm (TMS 402 §1.8.2.2)"
+}
+
+// StepKind says what a decomposition step did to the running deflection.
+type StepKind int
+
+const (
+	StepSolid  StepKind = iota // the region as if it had no openings: d = formula
+	StepStrip                  // a band's solid strip removed: d -= formula
+	StepPiers                  // the band's piers restored in parallel: d += 1/Σ(1/d_i)
+)
+
+// Step is one line of the classic method's working, for the report.
+type Step struct {
+	Kind       StepKind
+	Region     string // "wall" or the pier that contains this step, e.g. "P2"
+	Rect       geometry.Rect
+	Support    geometry.Support
+	Deflection float64 // relative deflection this step adds or removes (always ≥ 0)
+	Piers      []string // for StepPiers: the piers combined
+}
+
+// Pier is one pier of the decomposition. Shares and forces are fractions of,
+// and parts of, the wall's shear.
+type Pier struct {
+	Name     string        // P1, P2, … ; P2.1 for a pier inside P2
+	Parent   string        // "" at the top level
+	Rect     geometry.Rect // metres
+	Support  geometry.Support
+	Leaf     bool    // no opening inside
+	Parts    Parts   // the pier's own relative deflection (for a leaf: the formula)
+	Rigidity float64 // relative rigidity 1/Parts.Total() (for a non-leaf, of its own decomposition)
+	Share    float64 // fraction of the wall shear, 0–1
+	Shear    geometry.Force // V_i = Share·V; zero without a load
+	Moment   float64        // M_i in N·m; zero without a load
+}
+
+// H, L and Ratio give the pier's height, length and h/L.
+func (p Pier) H() float64     { return p.Rect.H() }
+func (p Pier) L() float64     { return p.Rect.W() }
+func (p Pier) Ratio() float64 { return p.Rect.H() / p.Rect.W() }
+
+// DriftCheck is the storey-drift check of the wall's top deflection.
+type DriftCheck struct {
+	Elastic   geometry.Length // δe, the top deflection under the wall's shear
+	Design    geometry.Length // δ = Cd·δe/Ie
+	Allowable geometry.Length // Limit·h; zero when no limit is set
+	Ratio     float64         // δ/h
+	OK        bool            // δ ≤ allowable (true when no limit is set)
+}
+
+// Result is the classic method's answer for one wall layout. The report and
+// the editor are two views of it; neither recomputes anything.
+type Result struct {
+	Deflection float64 // relative deflection, 1/(E t)
+	Rigidity   float64 // relative rigidity = 1/Deflection
+	Split      Parts   // the wall's deflection split into bending and shear
+	Steps      []Step
+	Piers      []Pier // every pier, parents before children, in name order
+
+	// Known when the material gives moduli (Moduli.E > 0).
+	Moduli         Moduli
+	RigidityAbs    float64         // N/m: Rigidity·E·t
+	HasLoad        bool            // the wall has a shear load
+	DeflectionAbs  geometry.Length // top deflection under the load
+	Drift          DriftCheck      // filled when HasLoad
+
+	Warnings []string // where the method's assumptions are weak
+}
