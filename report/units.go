@@ -1,0 +1,50 @@
+package report
+
+import "pierwise/geometry"
+
+// Units are the units results are reported in for one unit system: forces
+// in kip or kN, deflections in in or mm, rigidities in kip/in or kN/mm,
+// moments in kip·ft or kN·m, coordinates in ft or m. Every view (report,
+// table, JSON, editor) converts through these, so a unit lives in one place.
+type Units struct {
+	Force      string
+	Deflection string
+	Rigidity   string
+	Moment     string
+	Coord      string
+	Stress     string
+
+	force      geometry.Force
+	deflection geometry.Length
+	moment     float64 // N·m per unit
+	coord      geometry.Length
+}
+
+// UnitsFor returns the report units of a unit system.
+func UnitsFor(sys geometry.System) Units {
+	if sys == geometry.SI {
+		return Units{
+			Force: "kN", Deflection: "mm", Rigidity: "kN/mm", Moment: "kN·m", Coord: "m", Stress: "MPa",
+			force: geometry.Kilonewton, deflection: geometry.Millimetre, moment: 1000, coord: geometry.Metre,
+		}
+	}
+	return Units{
+		Force: "kip", Deflection: "in", Rigidity: "kip/in", Moment: "kip·ft", Coord: "ft", Stress: "psi",
+		force: geometry.Kip, deflection: geometry.Inch, moment: float64(geometry.Kip) * float64(geometry.Foot), coord: geometry.Foot,
+	}
+}
+
+// ForceOf converts a force to the report unit.
+func (u Units) ForceOf(f geometry.Force) float64 { return float64(f / u.force) }
+
+// DeflectionOf converts a deflection to the report unit.
+func (u Units) DeflectionOf(l geometry.Length) float64 { return float64(l / u.deflection) }
+
+// RigidityOf converts a rigidity in N/m to the report unit.
+func (u Units) RigidityOf(k float64) float64 { return k * float64(u.deflection) / float64(u.force) }
+
+// MomentOf converts a moment in N·m to the report unit.
+func (u Units) MomentOf(m float64) float64 { return m / u.moment }
+
+// CoordOf converts a coordinate or size in metres to the base unit (ft or m).
+func (u Units) CoordOf(x float64) float64 { return x / float64(u.coord) }
