@@ -45,7 +45,9 @@ func chroniclesPiers() *pier.Result {
 	s21 := s2 * (1 / dP21) / (1/dP21 + 1/dP22)
 	s22 := s2 - s21
 	m := float64(ft)
-	rect := func(x0, y0, x1, y1 float64) geometry.Rect { return geometry.Rect{X0: x0 * m, Y0: y0 * m, X1: x1 * m, Y1: y1 * m} }
+	rect := func(x0, y0, x1, y1 float64) geometry.Rect {
+		return geometry.Rect{X0: x0 * m, Y0: y0 * m, X1: x1 * m, Y1: y1 * m}
+	}
 	return &pier.Result{Piers: []pier.Pier{
 		{Name: "P1", Rect: rect(0, 0, 4, 8), Support: geometry.Fixed, Leaf: true, Share: s1},
 		{Name: "P2", Rect: rect(8, 0, 18, 8), Support: geometry.Fixed, Share: s2},
