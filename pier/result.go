@@ -17,15 +17,18 @@ type Moduli struct {
 	E      geometry.Stress // E_m or E_c
 	Ev     geometry.Stress // shear modulus E_v (G)
 	Source string          // e.g. "E_m = 900 f'm (TMS 402 §1.8.2.2)"
+
+	ESource  string // where E came from
+	EvSource string // where E_v came from
 }
 
 // StepKind says what a decomposition step did to the running deflection.
 type StepKind int
 
 const (
-	StepSolid  StepKind = iota // the region as if it had no openings: d = formula
-	StepStrip                  // a band's solid strip removed: d -= formula
-	StepPiers                  // the band's piers restored in parallel: d += 1/Σ(1/d_i)
+	StepSolid StepKind = iota // the region as if it had no openings: d = formula
+	StepStrip                 // a band's solid strip removed: d -= formula
+	StepPiers                 // the band's piers restored in parallel: d += 1/Σ(1/d_i)
 )
 
 // Step is one line of the classic method's working, for the report.
@@ -34,7 +37,7 @@ type Step struct {
 	Region     string // "wall" or the pier that contains this step, e.g. "P2"
 	Rect       geometry.Rect
 	Support    geometry.Support
-	Deflection float64 // relative deflection this step adds or removes (always ≥ 0)
+	Deflection float64  // relative deflection this step adds or removes (always ≥ 0)
 	Piers      []string // for StepPiers: the piers combined
 }
 
@@ -45,12 +48,15 @@ type Pier struct {
 	Parent   string        // "" at the top level
 	Rect     geometry.Rect // metres
 	Support  geometry.Support
-	Leaf     bool    // no opening inside
-	Parts    Parts   // the pier's own relative deflection (for a leaf: the formula)
-	Rigidity float64 // relative rigidity 1/Parts.Total() (for a non-leaf, of its own decomposition)
-	Share    float64 // fraction of the wall shear, 0–1
+	Leaf     bool           // no opening inside
+	Parts    Parts          // the pier's own relative deflection (for a leaf: the formula)
+	Rigidity float64        // relative rigidity 1/Parts.Total() (for a non-leaf, of its own decomposition)
+	Share    float64        // fraction of the wall shear, 0–1
 	Shear    geometry.Force // V_i = Share·V; zero without a load
 	Moment   float64        // M_i in N·m; zero without a load
+
+	BandShare float64 // fraction of its band's shear (Share = BandShare × parent's Share)
+	Cut       bool    // openings inside leave no load path: no rigidity, no share
 }
 
 // H, L and Ratio give the pier's height, length and h/L.
@@ -77,11 +83,11 @@ type Result struct {
 	Piers      []Pier // every pier, parents before children, in name order
 
 	// Known when the material gives moduli (Moduli.E > 0).
-	Moduli         Moduli
-	RigidityAbs    float64         // N/m: Rigidity·E·t
-	HasLoad        bool            // the wall has a shear load
-	DeflectionAbs  geometry.Length // top deflection under the load
-	Drift          DriftCheck      // filled when HasLoad
+	Moduli        Moduli
+	RigidityAbs   float64         // N/m: Rigidity·E·t
+	HasLoad       bool            // the wall has a shear load
+	DeflectionAbs geometry.Length // top deflection under the load
+	Drift         DriftCheck      // filled when HasLoad
 
 	Warnings []string // where the method's assumptions are weak
 }

@@ -1,0 +1,557 @@
+package pier
+
+import (
+	"errors"
+	"fmt"
+	"math"
+	"slices"
+	"strconv"
+
+	"pierwise/geometry"
+)
+
+// tolerance is the relative tolerance (of the wall's larger dimension) for
+// "touches", "reaches the top" and "spans the band": coordinates that come
+// from sums of typed lengths differ by rounding only.
+const tolerance = 1e-9
+
+// opening is an opening clipped to the region being solved.
+type opening struct {
+	r    geometry.Rect
+	name string
+}
+
+// solver holds the working of one Solve.
+type solver struct {
+	p      Params
+	eps    float64 // absolute tolerance, metres
+	thick  float64 // wall thickness, metres (0 when unknown)
+	res    *Result
+	parent []int // per pier: index of the parent pier, -1 at the top level
+	warned map[string]bool
+}
+
+// Solve runs the classic method of DESIGN §3 on the active layout of w. It
+// returns a *CutError when the openings cut the wall (no load path from base
+// to top, or a full-height cut that splits it in two), a *StaggeredError
+// when a band has no pier, and a plain error for a wall it cannot solve
+// (non-positive or non-finite sizes, openings outside the wall or
+// overlapping, bad material or modifiers). A Result never holds NaN or Inf.
+func Solve(w *geometry.Wall) (*Result, error) {
+	if w == nil {
+		return nil, errors.New("pier: no wall")
+	}
+	ops, err := checkWall(w)
+	if err != nil {
+		return nil, err
+	}
+	var mod Moduli
+	if materialGiven(w.Material) {
+		if mod, err = MaterialModuliFor(w.Material, w.Units); err != nil {
+			return nil, err
+		}
+	}
+	p := ParamsFor(w, mod)
+	if err := p.validate(); err != nil {
+		return nil, err
+	}
+
+	wall := w.Rect()
+	s := &solver{
+		p:      p,
+		eps:    tolerance * math.Max(wall.W(), wall.H()),
+		thick:  float64(w.Thickness),
+		res:    &Result{Moduli: mod},
+		warned: map[string]bool{},
+	}
+	if name, cut := s.cutAcross(wall, ops); cut {
+		return nil, &CutError{Region: "wall", Opening: name}
+	}
+	if name, cut := s.cutUpright(wall, ops); cut {
+		return nil, &CutError{Region: "wall", Opening: name}
+	}
+	d, cut, err := s.region(wall, w.Support, ops, "wall", -1)
+	if err != nil {
+		return nil, err
+	}
+	if cut || !(d.Total() > 0) || math.IsInf(d.Total(), 0) {
+		// The checks above should have caught every wall without a load
+		// path; this is the last guard against an infinite deflection.
+		name := ""
+		if len(ops) > 0 {
+			name = ops[0].name
+		}
+		return nil, &CutError{Region: "wall", Opening: name}
+	}
+	r := s.res
+	r.Deflection = d.Total()
+	r.Rigidity = 1 / r.Deflection
+	r.Split = d
+	for i := range r.Piers {
+		share := 1.0
+		if s.parent[i] >= 0 {
+			share = r.Piers[s.parent[i]].Share
+		}
+		r.Piers[i].Share = r.Piers[i].BandShare * share
+	}
+	if err := s.loads(w); err != nil {
+		return nil, err
+	}
+	s.assumptions(w, ops)
+	if err := r.checkFinite(); err != nil {
+		return nil, err
+	}
+	return r, nil
+}
+
+// Leaves returns the leaf piers (no opening inside) in name order. Their
+// shares are the fractions of the wall shear that reach the base through
+// each of them, level by level.
+func (r *Result) Leaves() []Pier {
+	var out []Pier
+	for _, p := range r.Piers {
+		if p.Leaf {
+			out = append(out, p)
+		}
+	}
+	return out
+}
+
+// region returns the relative deflection of rect with the openings ops
+// (clipped to it) under the given support: §3 steps 1–4. name is "wall" or
+// the pier's name, self the pier's index (-1 for the wall). cut reports a
+// region with no load path (no rigidity); its steps and sub-piers are
+// dropped.
+func (s *solver) region(rect geometry.Rect, sup geometry.Support, ops []opening, name string, self int) (d Parts, cut bool, err error) {
+	solid := Element(rect.H(), rect.W(), sup, s.p)
+	if len(ops) == 0 {
+		return solid, false, nil // step 1
+	}
+	if self >= 0 { // step 2 (the wall was checked by Solve)
+		if op, cut := s.cutAcross(rect, ops); cut {
+			s.warn(fmt.Sprintf("pier %s: opening %s leaves no load path through it; it is given no rigidity and no share", name, op))
+			return Parts{}, true, nil
+		}
+	}
+	stepMark, pierMark := len(s.res.Steps), len(s.res.Piers)
+	undo := func() {
+		s.res.Steps = s.res.Steps[:stepMark]
+		s.res.Piers = s.res.Piers[:pierMark]
+		s.parent = s.parent[:pierMark]
+	}
+	s.step(StepSolid, name, rect, sup, solid.Total(), nil)
+	d = solid
+	prefix := "P"
+	if self >= 0 {
+		prefix = name + "."
+	}
+	count := 0
+	bands := s.bands(ops)
+	for bi, b := range bands {
+		bandSup := geometry.Fixed
+		if sup == geometry.Cantilever && b.y1 >= rect.Y1-s.eps {
+			bandSup = geometry.Cantilever
+		}
+		bandRect := geometry.Rect{X0: rect.X0, Y0: b.y0, X1: rect.X1, Y1: b.y1}
+		strip := Element(b.y1-b.y0, rect.W(), bandSup, s.p)
+		d.Bending -= strip.Bending
+		d.Shear -= strip.Shear
+		s.step(StepStrip, name, bandRect, bandSup, strip.Total(), nil)
+
+		spans := s.piersOf(rect, b, ops)
+		if len(spans) == 0 {
+			return Parts{}, false, &StaggeredError{Region: name, Y0: b.y0, Y1: b.y1, Openings: b.names}
+		}
+		s.spandrels(rect, bands, bi, name)
+
+		idx := make([]int, 0, len(spans))
+		names := make([]string, 0, len(spans))
+		var sumK float64
+		for _, sp := range spans {
+			count++
+			pname := prefix + strconv.Itoa(count)
+			parentName := ""
+			if self >= 0 {
+				parentName = name
+			}
+			k := len(s.res.Piers)
+			s.res.Piers = append(s.res.Piers, Pier{
+				Name: pname, Parent: parentName, Rect: sp.rect, Support: bandSup, Leaf: len(sp.ops) == 0,
+			})
+			s.parent = append(s.parent, self)
+			pd, pcut, err := s.region(sp.rect, bandSup, sp.ops, pname, k)
+			if err != nil {
+				return Parts{}, false, err
+			}
+			pr := &s.res.Piers[k] // re-taken: the recursion may have grown the slice
+			if pcut {
+				pr.Cut = true
+			} else {
+				pr.Parts = pd
+				pr.Rigidity = 1 / pd.Total()
+				sumK += pr.Rigidity
+			}
+			idx = append(idx, k)
+			names = append(names, pname)
+		}
+		if !(sumK > 0) {
+			undo()
+			return Parts{}, true, nil
+		}
+		// The band's deflection 1/Σk is split into bending and shear by
+		// strain energy: the band stores V²·d_band/2 = Σ V_i²·d_i/2 with
+		// V_i = share_i·V and share_i = d_band/d_i, of which Σ V_i²·b_i/2 is
+		// bending, so the bending fraction is Σ share_i²·b_i/d_band =
+		// Σ share_i·(b_i/d_i).
+		dBand := 1 / sumK
+		var bendFrac float64
+		for _, k := range idx {
+			pr := &s.res.Piers[k]
+			pr.BandShare = pr.Rigidity / sumK
+			if !pr.Cut {
+				bendFrac += pr.BandShare * pr.Parts.Bending / pr.Parts.Total()
+			}
+		}
+		d.Bending += dBand * bendFrac
+		d.Shear += dBand * (1 - bendFrac)
+		s.step(StepPiers, name, bandRect, bandSup, dBand, names)
+	}
+	return d, false, nil
+}
+
+func (s *solver) step(kind StepKind, region string, r geometry.Rect, sup geometry.Support, d float64, piers []string) {
+	s.res.Steps = append(s.res.Steps, Step{Kind: kind, Region: region, Rect: r, Support: sup, Deflection: d, Piers: piers})
+}
+
+// band is a merged vertical projection of openings: [y0, y1] and the
+// indexes of its openings.
+type band struct {
+	y0, y1 float64
+	ops    []int
+	names  []string
+}
+
+// bands projects the openings on the vertical axis and merges overlapping
+// or touching intervals, lowest first.
+func (s *solver) bands(ops []opening) []band {
+	order := make([]int, len(ops))
+	for i := range order {
+		order[i] = i
+	}
+	slices.SortStableFunc(order, func(a, b int) int { return cmpFloat(ops[a].r.Y0, ops[b].r.Y0) })
+	var out []band
+	for _, i := range order {
+		o := ops[i].r
+		if n := len(out); n > 0 && o.Y0 <= out[n-1].y1+s.eps {
+			out[n-1].y1 = math.Max(out[n-1].y1, o.Y1)
+			out[n-1].ops = append(out[n-1].ops, i)
+			out[n-1].names = append(out[n-1].names, ops[i].name)
+			continue
+		}
+		out = append(out, band{y0: o.Y0, y1: o.Y1, ops: []int{i}, names: []string{ops[i].name}})
+	}
+	return out
+}
+
+// span is a pier of a band: its outline and the openings inside it.
+type span struct {
+	rect geometry.Rect
+	ops  []opening
+}
+
+// piersOf returns the piers of band b of region rect, left to right: the
+// parts of the band between its cuts (the openings that span the band's
+// full height, or all its openings when none does). Zero-width piers
+// between touching openings are skipped.
+func (s *solver) piersOf(rect geometry.Rect, b band, ops []opening) []span {
+	spanning := func(o geometry.Rect) bool { return o.Y0 <= b.y0+s.eps && o.Y1 >= b.y1-s.eps }
+	anySpans := false
+	for _, k := range b.ops {
+		if spanning(ops[k].r) {
+			anySpans = true
+			break
+		}
+	}
+	isCut := func(o geometry.Rect) bool { return !anySpans || spanning(o) }
+
+	var cuts []geometry.Rect
+	var inner []opening
+	for _, k := range b.ops {
+		if isCut(ops[k].r) {
+			cuts = append(cuts, ops[k].r)
+		} else {
+			inner = append(inner, ops[k])
+		}
+	}
+	slices.SortFunc(cuts, func(a, c geometry.Rect) int { return cmpFloat(a.X0, c.X0) })
+
+	var out []span
+	add := func(x0, x1 float64) {
+		if x1-x0 <= s.eps {
+			return // zero-width pier between touching openings
+		}
+		sp := span{rect: geometry.Rect{X0: x0, Y0: b.y0, X1: x1, Y1: b.y1}}
+		for _, o := range inner {
+			if o.r.X0 < x1-s.eps && o.r.X1 > x0+s.eps {
+				c := o
+				c.r.X0 = math.Max(c.r.X0, x0)
+				c.r.X1 = math.Min(c.r.X1, x1)
+				sp.ops = append(sp.ops, c)
+			}
+		}
+		out = append(out, sp)
+	}
+	x := rect.X0
+	for _, c := range cuts {
+		if c.X0 > x {
+			add(x, c.X0)
+		}
+		x = math.Max(x, c.X1)
+	}
+	add(x, rect.X1)
+	return out
+}
+
+// cutAcross reports whether a chain of openings that touch one another
+// (even at a corner) links the region's left end to its right end: then
+// no solid path leads from the region's base to its top. It names the
+// opening that completes the chain.
+func (s *solver) cutAcross(rect geometry.Rect, ops []opening) (string, bool) {
+	n := len(ops)
+	uf := newUnionFind(n + 2)
+	left, right := n, n+1
+	for i, o := range ops {
+		if o.r.X0 <= rect.X0+s.eps {
+			uf.union(i, left)
+		}
+		if o.r.X1 >= rect.X1-s.eps {
+			uf.union(i, right)
+		}
+		for j := range i {
+			if s.touch(o.r, ops[j].r) {
+				uf.union(i, j)
+			}
+		}
+		if uf.find(left) == uf.find(right) {
+			return o.name, true
+		}
+	}
+	return "", false
+}
+
+// cutUpright reports whether a chain of touching openings runs from the
+// wall's base to its top away from both ends, splitting the wall into two
+// walls (a full-height door, say). A chain at an end only shortens the wall
+// and is left to the classic method.
+func (s *solver) cutUpright(rect geometry.Rect, ops []opening) (string, bool) {
+	n := len(ops)
+	uf := newUnionFind(n)
+	for i := range ops {
+		for j := range i {
+			if s.touch(ops[i].r, ops[j].r) {
+				uf.union(i, j)
+			}
+		}
+	}
+	const (
+		base = 1 << iota
+		top
+		end
+	)
+	flags := make([]int, n)
+	for i, o := range ops {
+		f := 0
+		if o.r.Y0 <= rect.Y0+s.eps {
+			f |= base
+		}
+		if o.r.Y1 >= rect.Y1-s.eps {
+			f |= top
+		}
+		if o.r.X0 <= rect.X0+s.eps || o.r.X1 >= rect.X1-s.eps {
+			f |= end
+		}
+		flags[uf.find(i)] |= f
+	}
+	for i, o := range ops {
+		if flags[uf.find(i)] == base|top {
+			return o.name, true
+		}
+	}
+	return "", false
+}
+
+// touch reports whether two closed rectangles meet (share a point).
+func (s *solver) touch(a, b geometry.Rect) bool {
+	return a.X0 <= b.X1+s.eps && b.X0 <= a.X1+s.eps && a.Y0 <= b.Y1+s.eps && b.Y0 <= a.Y1+s.eps
+}
+
+type unionFind []int
+
+func newUnionFind(n int) unionFind {
+	u := make(unionFind, n)
+	for i := range u {
+		u[i] = i
+	}
+	return u
+}
+
+func (u unionFind) find(i int) int {
+	for u[i] != i {
+		u[i] = u[u[i]]
+		i = u[i]
+	}
+	return i
+}
+
+func (u unionFind) union(a, b int) { u[u.find(a)] = u.find(b) }
+
+func cmpFloat(a, b float64) int {
+	switch {
+	case a < b:
+		return -1
+	case a > b:
+		return 1
+	}
+	return 0
+}
+
+// checkWall validates what Solve needs (whether or not Validate has run)
+// and returns the active layout's openings.
+func checkWall(w *geometry.Wall) ([]opening, error) {
+	pos := func(what string, v float64) error {
+		if !(v > 0) || math.IsInf(v, 0) {
+			return fmt.Errorf("pier: wall %s must be a positive length, got %g m", what, v)
+		}
+		return nil
+	}
+	if err := pos("length", float64(w.Length)); err != nil {
+		return nil, err
+	}
+	if err := pos("height", float64(w.Height)); err != nil {
+		return nil, err
+	}
+	if t := float64(w.Thickness); t < 0 || math.IsInf(t, 0) || math.IsNaN(t) {
+		return nil, fmt.Errorf("pier: wall thickness must be a positive length, got %g m", t)
+	}
+	if len(w.Layouts) > 0 && (w.Active < 0 || w.Active >= len(w.Layouts)) {
+		return nil, fmt.Errorf("pier: active layout %d does not exist (the wall has %d)", w.Active, len(w.Layouts))
+	}
+	if w.Support != geometry.Cantilever && w.Support != geometry.Fixed {
+		return nil, fmt.Errorf("pier: unknown support %d", w.Support)
+	}
+	eps := tolerance * math.Max(float64(w.Length), float64(w.Height))
+	src := w.Openings()
+	ops := make([]opening, len(src))
+	for i, o := range src {
+		name := o.Name
+		if name == "" {
+			name = "#" + strconv.Itoa(i+1)
+		}
+		r := o.Rect()
+		for _, v := range []float64{r.X0, r.Y0, r.X1, r.Y1} {
+			if math.IsNaN(v) || math.IsInf(v, 0) {
+				return nil, fmt.Errorf("pier: opening %s has a size or position that is not a number", name)
+			}
+		}
+		if !(o.Width > 0) || !(o.Height > 0) {
+			return nil, fmt.Errorf("pier: opening %s must have a positive width and height", name)
+		}
+		if r.X0 < -eps || r.Y0 < -eps || r.X1 > float64(w.Length)+eps || r.Y1 > float64(w.Height)+eps {
+			return nil, fmt.Errorf("pier: opening %s is not inside the wall", name)
+		}
+		r.X0, r.Y0 = math.Max(r.X0, 0), math.Max(r.Y0, 0)
+		r.X1, r.Y1 = math.Min(r.X1, float64(w.Length)), math.Min(r.Y1, float64(w.Height))
+		ops[i] = opening{r: r, name: name}
+		for j := range i {
+			q := ops[j].r
+			if r.X0 < q.X1-eps && q.X0 < r.X1-eps && r.Y0 < q.Y1-eps && q.Y0 < r.Y1-eps {
+				return nil, fmt.Errorf("pier: openings %s and %s overlap", ops[j].name, name)
+			}
+		}
+	}
+	return ops, nil
+}
+
+// loads fills the absolute rigidity, the pier forces, the deflection under
+// the load and the drift check.
+func (s *solver) loads(w *geometry.Wall) error {
+	r := s.res
+	E := float64(r.Moduli.E)
+	if E > 0 && s.thick > 0 {
+		r.RigidityAbs = r.Rigidity * E * s.thick
+	}
+	V := float64(w.Load.Shear)
+	if math.IsNaN(V) || math.IsInf(V, 0) || V < 0 {
+		return fmt.Errorf("pier: the wall shear must be a positive force, got %g N", V)
+	}
+	if V == 0 {
+		return nil
+	}
+	r.HasLoad = true
+	for i := range r.Piers {
+		p := &r.Piers[i]
+		if !p.Leaf {
+			continue
+		}
+		p.Shear = geometry.Force(p.Share * V)
+		arm := p.H()
+		if p.Support == geometry.Fixed {
+			arm /= 2 // inflection point at mid-height
+		}
+		p.Moment = p.Share * V * arm
+	}
+	if !(E > 0 && s.thick > 0) {
+		return nil
+	}
+	r.DeflectionAbs = geometry.Length(V / (E * s.thick) * r.Deflection)
+
+	dr := w.Drift
+	cd, ie := dr.Cd, dr.Ie
+	if cd == 0 {
+		cd = 1
+	}
+	if ie == 0 {
+		ie = 1
+	}
+	if !(cd > 0) || math.IsInf(cd, 0) || !(ie > 0) || math.IsInf(ie, 0) {
+		return fmt.Errorf("pier: drift factors Cd and Ie must be positive numbers, got %g and %g", cd, ie)
+	}
+	if !(dr.Limit >= 0) || math.IsInf(dr.Limit, 0) {
+		return fmt.Errorf("pier: the drift limit must be a positive fraction of the height, got %g", dr.Limit)
+	}
+	h := float64(w.Height)
+	design := cd * float64(r.DeflectionAbs) / ie
+	r.Drift = DriftCheck{
+		Elastic:   r.DeflectionAbs,
+		Design:    geometry.Length(design),
+		Allowable: geometry.Length(dr.Limit * h),
+		Ratio:     design / h,
+		OK:        dr.Limit == 0 || design <= dr.Limit*h,
+	}
+	return nil
+}
+
+// checkFinite is the last guard of the promise that a Result holds no NaN
+// or Inf (extreme proportions could overflow the cubes).
+func (r *Result) checkFinite() error {
+	bad := false
+	chk := func(vs ...float64) {
+		for _, v := range vs {
+			if math.IsNaN(v) || math.IsInf(v, 0) {
+				bad = true
+			}
+		}
+	}
+	chk(r.Deflection, r.Rigidity, r.Split.Bending, r.Split.Shear, r.RigidityAbs,
+		float64(r.DeflectionAbs), float64(r.Drift.Design), r.Drift.Ratio)
+	for _, p := range r.Piers {
+		chk(p.Parts.Bending, p.Parts.Shear, p.Rigidity, p.Share, p.BandShare, float64(p.Shear), p.Moment)
+	}
+	for _, st := range r.Steps {
+		chk(st.Deflection)
+	}
+	if bad {
+		return errors.New("pier: the wall's proportions are beyond the range the method can compute")
+	}
+	return nil
+}

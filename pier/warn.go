@@ -1,0 +1,88 @@
+package pier
+
+import (
+	"fmt"
+	"strings"
+
+	"pierwise/geometry"
+)
+
+// Thresholds of the warnings about the method's assumptions.
+const (
+	// SlenderRatio: beyond h/L = 4 a pier is a slender column rather than
+	// a wall pier; its share hangs on end fixity the method assumes.
+	SlenderRatio = 4.0
+	// SliverLength: a pier shorter than this many wall thicknesses is a
+	// sliver left by an opening close to an edge or to another opening.
+	SliverLength = 2.0
+	// sliverRatio stands in for SliverLength when the thickness is unknown.
+	sliverRatio = 10.0
+)
+
+// warn records a warning once.
+func (s *solver) warn(msg string) {
+	if s.warned[msg] {
+		return
+	}
+	s.warned[msg] = true
+	s.res.Warnings = append(s.res.Warnings, msg)
+}
+
+// spandrels warns when the solid above or below band bi of a region is
+// shallower than the band's piers, which the method assumes it fixes
+// against rotation.
+func (s *solver) spandrels(rect geometry.Rect, bands []band, bi int, region string) {
+	b := bands[bi]
+	h := b.y1 - b.y0
+	where := "the wall"
+	if region != "wall" {
+		where = "pier " + region
+	}
+	top := rect.Y1
+	if bi+1 < len(bands) {
+		top = bands[bi+1].y0
+	}
+	if depth := top - b.y1; depth > s.eps && depth < h {
+		s.warn(fmt.Sprintf("in %s the spandrel above the openings %s is %.2f times as deep as the piers beside them are tall: it is assumed to keep them from rotating, which a shallow spandrel does not do, so their rigidity is overestimated",
+			where, s.bandNames(b), depth/h))
+	}
+	if bi > 0 {
+		if depth := b.y0 - bands[bi-1].y1; depth < h {
+			s.warn(fmt.Sprintf("in %s the solid between the openings %s and %s below is %.2f times as deep as the piers above it are tall: it is assumed rigid, which it is not",
+				where, s.bandNames(b), s.bandNames(bands[bi-1]), depth/h))
+		}
+	}
+}
+
+// bandNames lists a band's openings for a warning.
+func (s *solver) bandNames(b band) string {
+	return strings.Join(b.names, ", ")
+}
+
+// assumptions adds the warnings that look at the finished decomposition.
+func (s *solver) assumptions(w *geometry.Wall, ops []opening) {
+	anyFixed := false
+	for _, p := range s.res.Piers {
+		if p.Cut {
+			continue
+		}
+		if p.Support == geometry.Fixed {
+			anyFixed = true
+		}
+		ratio := p.Ratio()
+		switch {
+		case s.thick > 0 && p.L() < SliverLength*s.thick:
+			s.warn(fmt.Sprintf("pier %s is a sliver, only %.1f times as long as the wall is thick: it acts as a column, not as a wall pier; consider moving the opening beside it to the edge or away from it", p.Name, p.L()/s.thick))
+		case s.thick == 0 && ratio > sliverRatio:
+			s.warn(fmt.Sprintf("pier %s is a sliver (h/L = %.1f): it acts as a column, not as a wall pier", p.Name, ratio))
+		case ratio > SlenderRatio:
+			s.warn(fmt.Sprintf("pier %s is slender (h/L = %.1f > %g): the formulas are meant for wall piers; its small share depends on end fixity the method only assumes", p.Name, ratio, SlenderRatio))
+		}
+	}
+	if anyFixed && len(ops) > 0 {
+		s.warn("piers marked fixed are assumed held against rotation at top and bottom by rigid spandrels; hand methods of this kind tend to overestimate the rigidity of walls with large openings: compare with the finite-element check")
+	}
+	if w.Support == geometry.Fixed {
+		s.warn("the wall's top is assumed held against rotation (fixed-fixed): the structure above must provide that restraint")
+	}
+}
