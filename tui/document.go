@@ -1,0 +1,93 @@
+package tui
+
+import (
+	"errors"
+
+	"pierwise/geometry"
+)
+
+// document is the wall being edited, with its file and its history. Every
+// change goes through change, which keeps a snapshot for undo; undo and redo
+// are unlimited. The wall is replaced, never mutated in place, so a snapshot
+// handed to a background command stays valid.
+type document struct {
+	wall *geometry.Wall
+	path string // "" until the wall has a file (the demo)
+
+	version int // of wall; a new number for every change
+	saved   int // version on disk; -1 when the wall has never been saved
+	next    int
+
+	undo, redo []snapshot
+}
+
+type snapshot struct {
+	wall    *geometry.Wall
+	version int
+}
+
+func newDocument(w *geometry.Wall, path string, onDisk bool) *document {
+	d := &document{wall: w, path: path, saved: -1, next: 1}
+	if onDisk {
+		d.saved = 0
+	}
+	return d
+}
+
+// dirty reports whether the wall differs from the file on disk.
+func (d *document) dirty() bool { return d.version != d.saved }
+
+// change applies f to a copy of the wall; when f succeeds the copy becomes
+// the wall and the old one goes on the undo stack. f's error is returned
+// unchanged and leaves everything as it was.
+func (d *document) change(f func(w *geometry.Wall) error) error {
+	w := cloneWall(d.wall)
+	if err := f(w); err != nil {
+		return err
+	}
+	d.undo = append(d.undo, snapshot{d.wall, d.version})
+	d.redo = d.redo[:0]
+	d.wall, d.version = w, d.next
+	d.next++
+	return nil
+}
+
+// undoChange and redoChange step through the history; they report whether
+// there was anything to step to.
+func (d *document) undoChange() bool {
+	if len(d.undo) == 0 {
+		return false
+	}
+	s := d.undo[len(d.undo)-1]
+	d.undo = d.undo[:len(d.undo)-1]
+	d.redo = append(d.redo, snapshot{d.wall, d.version})
+	d.wall, d.version = s.wall, s.version
+	return true
+}
+
+func (d *document) redoChange() bool {
+	if len(d.redo) == 0 {
+		return false
+	}
+	s := d.redo[len(d.redo)-1]
+	d.redo = d.redo[:len(d.redo)-1]
+	d.undo = append(d.undo, snapshot{d.wall, d.version})
+	d.wall, d.version = s.wall, s.version
+	return true
+}
+
+// save writes the wall to path (atomically) and makes it the document's
+// file; an empty path means the current file.
+func (d *document) save(path string) error {
+	if path == "" {
+		path = d.path
+	}
+	if path == "" {
+		return errors.New("no file name yet: use save as")
+	}
+	if err := saveWall(path, d.wall); err != nil {
+		return err
+	}
+	d.path, d.saved = path, d.version
+	return nil
+}

@@ -1,0 +1,104 @@
+package tui
+
+import (
+	"fmt"
+	"strings"
+	"time"
+
+	"github.com/charmbracelet/bubbles/key"
+	tea "github.com/charmbracelet/bubbletea"
+	"github.com/charmbracelet/lipgloss"
+)
+
+// root is the bubbletea model: it owns the window size and a stack of
+// screens, and routes messages to the screen on top (see screen).
+type root struct {
+	c     *common
+	stack []screen
+}
+
+func newRoot(c *common, first screen) *root {
+	return &root{c: c, stack: []screen{first}}
+}
+
+func (m *root) Init() tea.Cmd {
+	if i, ok := m.stack[0].(interface{ init() tea.Cmd }); ok {
+		return i.init()
+	}
+	return nil
+}
+
+func (m *root) top() screen { return m.stack[len(m.stack)-1] }
+
+func (m *root) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
+	switch msg := msg.(type) {
+	case tea.WindowSizeMsg:
+		m.c.width, m.c.height = msg.Width, msg.Height
+		for _, s := range m.stack {
+			s.setSize(msg.Width, msg.Height)
+		}
+		return m, nil
+	case pushScreenMsg:
+		msg.s.setSize(m.c.width, m.c.height)
+		m.stack = append(m.stack, msg.s)
+		return m, nil
+	case popScreenMsg:
+		if len(m.stack) > 1 {
+			m.stack = m.stack[:len(m.stack)-1]
+			return m.route(resumeMsg{})
+		}
+		return m, nil
+	case tea.KeyMsg:
+		if key.Matches(msg, m.c.keys.Quit) {
+			if m.c.doc == nil || !m.c.doc.dirty() {
+				return m, tea.Quit
+			}
+			m.stack = m.stack[:1]
+			return m.route(quitRequestMsg{})
+		}
+	}
+	return m.route(msg)
+}
+
+// route hands msg to the top screen. Answers of background commands that
+// arrive after their screen was closed go to whatever is on top, which
+// ignores messages it does not know.
+func (m *root) route(msg tea.Msg) (tea.Model, tea.Cmd) {
+	s, cmd := m.top().update(msg)
+	m.stack[len(m.stack)-1] = s
+	return m, cmd
+}
+
+func (m *root) View() string {
+	w, h := m.c.width, m.c.height
+	if w == 0 && h == 0 {
+		return "" // no size yet
+	}
+	if w < minWidth || h < minHeight {
+		return tooSmall(w, h)
+	}
+	return m.top().view()
+}
+
+// tooSmall is the notice drawn instead of a screen in a small window.
+func tooSmall(w, h int) string {
+	lines := []string{
+		"The window is too small for pierwise.",
+		fmt.Sprintf("It is %d×%d; make it at least %d×%d.", w, h, minWidth, minHeight),
+		"ctrl+c quits.",
+	}
+	for i, l := range lines {
+		if lipgloss.Width(l) > w {
+			lines[i] = truncate(l, w)
+		}
+	}
+	if len(lines) > h {
+		lines = lines[:max(h, 0)]
+	}
+	return strings.Join(lines, "\n")
+}
+
+// newCommon builds the shared part of the screens.
+func newCommon(doc *document, r *lipgloss.Renderer) *common {
+	return &common{styles: newStyles(r), keys: newCommonKeys(), doc: doc, now: time.Now}
+}
