@@ -1,0 +1,120 @@
+package storey
+
+import (
+	"errors"
+	"os"
+	"path/filepath"
+	"strings"
+	"testing"
+
+	"pierwise/geometry"
+)
+
+func TestParseWorkshop(t *testing.T) {
+	path := filepath.Join("..", "testdata", "storey", "workshop.toml")
+	data, err := os.ReadFile(path)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if !IsStoreyFile(data) {
+		t.Fatal("IsStoreyFile(workshop.toml) = false")
+	}
+	s, err := Parse(path, data)
+	if err != nil {
+		t.Fatal(err)
+	}
+	const ft = float64(geometry.Foot)
+	if !near(float64(s.Shear), 120*float64(geometry.Kip), 1e-12) {
+		t.Errorf("shear %g N, want 120 kip", float64(s.Shear))
+	}
+	if !near(float64(s.Size[0])/ft, 80, 1e-12) || !near(float64(s.Size[1])/ft, 50, 1e-12) {
+		t.Errorf("size %v", s.Size)
+	}
+	if len(s.Walls) != 5 || s.Walls[4].Name != "Partition" || s.Walls[3].Direction != Y || !near(float64(s.Walls[1].Position)/ft, 50, 1e-12) {
+		t.Errorf("walls %+v", s.Walls)
+	}
+	if want := filepath.Join("..", "testdata", "storey", "north.toml"); s.Walls[1].Path != want {
+		t.Errorf("north wall path %q, want %q (relative to the storey file)", s.Walls[1].Path, want)
+	}
+	if !near(s.Accidental, 0.05, 1e-15) {
+		t.Errorf("accidental %g", s.Accidental)
+	}
+}
+
+func TestIsStoreyFile(t *testing.T) {
+	for _, c := range []struct {
+		text string
+		want bool
+	}{
+		{"title = \"a\"\n[storey]\nshear = \"1kip\"\n", true},
+		{"[[wall]]\nfile = \"a.toml\"\n", true},
+		{"[[wall]]\nfile = \"a.toml\n", true}, // broken TOML, still a storey file
+		{"title = \"wall\"\nlength = \"10ft\"\n[[opening]]\nx = 1\n", false},
+		{"", false},
+	} {
+		if got := IsStoreyFile([]byte(c.text)); got != c.want {
+			t.Errorf("IsStoreyFile(%q) = %v, want %v", c.text, got, c.want)
+		}
+	}
+}
+
+const goodStorey = `title = "t"
+units = "us"
+
+[storey]
+shear = "100kip"
+mass_center = ["20ft", "10ft"]
+size = ["40ft", "20ft"]
+
+[[wall]]
+file = "a.toml"
+direction = "x"
+position = "0ft"
+
+[[wall]]
+file = "b.toml"
+direction = "y"
+position = "40ft"
+`
+
+// Every bad input is an error that names the file, the line and the key.
+func TestParseErrors(t *testing.T) {
+	for _, c := range []struct {
+		name, old, new string
+		line           int
+		key, msg       string
+	}{
+		{"unknown top key", `title = "t"`, `title = "t"` + "\nheight = 3", 2, "height", "unknown key"},
+		{"unknown storey key", `shear = "100kip"`, `shear = "100kip"` + "\nsheer = 1", 6, "storey.sheer", "unknown key"},
+		{"unknown wall key", `direction = "x"`, `direction = "x"` + "\nside = 2", 12, "wall[1].side", "unknown key"},
+		{"bad force", `shear = "100kip"`, `shear = "100 bananas"`, 5, "storey.shear", "bananas"},
+		{"negative shear", `shear = "100kip"`, `shear = "-5kip"`, 5, "storey.shear", "positive"},
+		{"bad pair", `size = ["40ft", "20ft"]`, `size = ["40ft"]`, 7, "storey.size", "pair"},
+		{"mass centre off the plan", `mass_center = ["20ft", "10ft"]`, `mass_center = ["20ft", "30ft"]`, 6, "storey.mass_center", "off the plan"},
+		{"wall off the plan", `position = "40ft"`, `position = "41ft"`, 17, "wall[2].position", "off the plan"},
+		{"bad direction", `direction = "x"`, `direction = "z"`, 11, "wall[1].direction", `"x" or "y"`},
+		{"missing file", `file = "b.toml"`, ``, 14, "wall[2].file", "missing"},
+		{"missing storey", "[storey]", "[stor]", 4, "stor", "unknown key"},
+		{"bad accidental", `size = ["40ft", "20ft"]`, `size = ["40ft", "20ft"]` + "\naccidental = 5", 8, "storey.accidental", "fraction"},
+		{"bad units", `units = "us"`, `units = "imperial"`, 2, "units", `"us" or "si"`},
+		{"toml syntax", `position = "0ft"`, `position = "0ft`, 12, "", ""},
+	} {
+		t.Run(c.name, func(t *testing.T) {
+			text := strings.Replace(goodStorey, c.old, c.new, 1)
+			_, err := Parse("plan.toml", []byte(text))
+			if err == nil {
+				t.Fatalf("no error for\n%s", text)
+			}
+			var e *Error
+			if !errors.As(err, &e) {
+				t.Fatalf("error %v is not a *geometry.Error", err)
+			}
+			if e.File != "plan.toml" || e.Line != c.line || (c.key != "" && e.Key != c.key) || !strings.Contains(e.Msg, c.msg) {
+				t.Errorf("got %q (line %d key %q), want line %d key %q with %q", err, e.Line, e.Key, c.line, c.key, c.msg)
+			}
+		})
+	}
+	if _, err := Parse("plan.toml", []byte(goodStorey)); err != nil {
+		t.Errorf("good storey: %v", err)
+	}
+}
