@@ -39,6 +39,12 @@ type Step struct {
 	Support    geometry.Support
 	Deflection float64  // relative deflection this step adds or removes (always ≥ 0)
 	Piers      []string // for StepPiers: the piers combined
+
+	// AllCuts is set on a StepPiers step whose band has no opening that
+	// spans its full height: every opening was taken as a cut and every
+	// pier as the band's full height (§3), a conservative reading of
+	// staggered openings.
+	AllCuts bool
 }
 
 // Pier is one pier of the decomposition. Shares and forces are fractions of,

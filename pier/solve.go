@@ -158,7 +158,7 @@ func (s *solver) region(rect geometry.Rect, sup geometry.Support, ops []opening,
 		d.Shear -= strip.Shear
 		s.step(StepStrip, name, bandRect, bandSup, strip.Total(), nil)
 
-		spans := s.piersOf(rect, b, ops)
+		spans, allCuts := s.piersOf(rect, b, ops)
 		if len(spans) == 0 {
 			return Parts{}, false, &StaggeredError{Region: name, Y0: b.y0, Y1: b.y1, Openings: b.names}
 		}
@@ -215,6 +215,10 @@ func (s *solver) region(rect geometry.Rect, sup geometry.Support, ops []opening,
 		d.Bending += dBand * bendFrac
 		d.Shear += dBand * (1 - bendFrac)
 		s.step(StepPiers, name, bandRect, bandSup, dBand, names)
+		if allCuts {
+			s.res.Steps[len(s.res.Steps)-1].AllCuts = true
+			s.warn(fmt.Sprintf("in %s no opening of %s spans the full height of their band: each is taken as a cut and the piers between them as the band's full height, a rough reading of staggered openings", regionName(name), s.bandNames(b)))
+		}
 	}
 	return d, false, nil
 }
@@ -263,7 +267,7 @@ type span struct {
 // parts of the band between its cuts (the openings that span the band's
 // full height, or all its openings when none does). Zero-width piers
 // between touching openings are skipped.
-func (s *solver) piersOf(rect geometry.Rect, b band, ops []opening) []span {
+func (s *solver) piersOf(rect geometry.Rect, b band, ops []opening) (out []span, allCuts bool) {
 	spanning := func(o geometry.Rect) bool { return o.Y0 <= b.y0+s.eps && o.Y1 >= b.y1-s.eps }
 	anySpans := false
 	for _, k := range b.ops {
@@ -285,7 +289,6 @@ func (s *solver) piersOf(rect geometry.Rect, b band, ops []opening) []span {
 	}
 	slices.SortFunc(cuts, func(a, c geometry.Rect) int { return cmpFloat(a.X0, c.X0) })
 
-	var out []span
 	add := func(x0, x1 float64) {
 		if x1-x0 <= s.eps {
 			return // zero-width pier between touching openings
@@ -309,7 +312,7 @@ func (s *solver) piersOf(rect geometry.Rect, b band, ops []opening) []span {
 		x = math.Max(x, c.X1)
 	}
 	add(x, rect.X1)
-	return out
+	return out, !anySpans && len(b.ops) > 1
 }
 
 // cutAcross reports whether a chain of openings that touch one another
