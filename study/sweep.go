@@ -1,0 +1,215 @@
+package study
+
+import (
+	"errors"
+	"fmt"
+	"math"
+	"strings"
+
+	"pierwise/geometry"
+	"pierwise/pier"
+)
+
+// Axis is the direction an opening moves in a sweep.
+type Axis int
+
+const (
+	AlongX Axis = iota // the opening's left edge moves; sill fixed
+	AlongY             // the opening's sill moves; left edge fixed
+)
+
+func (a Axis) String() string {
+	if a == AlongY {
+		return "y"
+	}
+	return "x"
+}
+
+// ParseAxis reads "x" or "y".
+func ParseAxis(s string) (Axis, error) {
+	switch strings.ToLower(strings.TrimSpace(s)) {
+	case "x", "":
+		return AlongX, nil
+	case "y":
+		return AlongY, nil
+	}
+	return 0, fmt.Errorf("axis %q: want x or y", s)
+}
+
+// MaxPoints bounds the number of positions of one sweep, so that a tiny step
+// on a long wall is an error rather than a long wait.
+const MaxPoints = 5000
+
+// PierShare is one leaf pier's share of the wall shear at a sweep position.
+type PierShare struct {
+	Name  string
+	Share float64 // fraction of the wall shear, 0–1
+}
+
+// Point is the wall solved with the swept opening at one position.
+type Point struct {
+	X, Y     geometry.Length // the opening's left edge and sill here
+	Rigidity float64         // the wall's relative rigidity (E = 1, t = 1)
+	Piers    []PierShare     // leaf piers in name order
+
+	// The leaf pier with the highest shear stress: StressIndex = share/L
+	// (1/m), which ranks positions with or without a load; MaxStress =
+	// V_i/(L_i·t) when the wall has a load, else zero.
+	StressPier  string
+	StressIndex float64
+	MaxStress   geometry.Stress
+
+	Current bool // the opening's position in the wall as given
+	Best    bool // the lowest StressIndex of the sweep (first such point)
+
+	Result *pier.Result // the full answer; nil when Err is set
+	Err    error        // the classic method has no answer here
+}
+
+// Pos returns the position that moves along the axis: X or Y.
+func (p Point) Pos(a Axis) geometry.Length {
+	if a == AlongY {
+		return p.Y
+	}
+	return p.X
+}
+
+// Sweep moves the opening called name along the axis in steps of step,
+// through every position where it fits (Wall.CheckOpening), and solves the
+// active layout at each. Positions lie on the grid through the opening's
+// current position, so the current position is always one of them. Points
+// come in order of increasing position. A position the classic method
+// cannot solve is a point with Err set. The error is for bad arguments: an
+// unknown opening, a step that is not positive or would make more than
+// MaxPoints positions.
+func Sweep(w *geometry.Wall, name string, axis Axis, step geometry.Length) ([]Point, error) {
+	ops := w.Openings()
+	idx := -1
+	for i, o := range ops {
+		if o.Name == name {
+			idx = i
+			break
+		}
+	}
+	if idx < 0 {
+		names := make([]string, len(ops))
+		for i, o := range ops {
+			names[i] = o.Name
+		}
+		if len(names) == 0 {
+			return nil, fmt.Errorf("no opening %q: the layout has no openings", name)
+		}
+		return nil, fmt.Errorf("no opening %q; the openings are %s", name, strings.Join(names, ", "))
+	}
+	s := float64(step)
+	if !(s > 0) || math.IsInf(s, 0) {
+		return nil, errors.New("the sweep step must be a positive length")
+	}
+	o := ops[idx]
+	cur, span := float64(o.X), float64(w.Length-o.Width)
+	if axis == AlongY {
+		cur, span = float64(o.Sill), float64(w.Height-o.Height)
+	}
+	if span < 0 {
+		return nil, fmt.Errorf("opening %s is larger than the wall", name)
+	}
+	// k runs over the grid cur + k·step inside [0, span]; a tolerance of a
+	// micrometre keeps the ends that floating-point rounding nudges out.
+	const tol = 1e-6
+	kmin := int(math.Ceil((-cur - tol) / s))
+	kmax := int(math.Floor((span - cur + tol) / s))
+	if kmax-kmin+1 > MaxPoints {
+		return nil, fmt.Errorf("a step of %s makes %d positions; use a larger step (at most %d positions)",
+			geometry.FormatLength(step, w.Units), kmax-kmin+1, MaxPoints)
+	}
+
+	// One private copy of the active layout's openings, edited in place.
+	work := *w
+	work.Layouts = append([]geometry.Layout(nil), w.Layouts...)
+	moved := append([]geometry.Opening(nil), ops...)
+	work.Layouts[w.Active].Openings = moved
+
+	var pts []Point
+	for k := kmin; k <= kmax; k++ {
+		pos := math.Min(math.Max(cur+float64(k)*s, 0), span)
+		if k == 0 {
+			pos = cur
+		}
+		m := o
+		if axis == AlongY {
+			m.Sill = geometry.Length(pos)
+		} else {
+			m.X = geometry.Length(pos)
+		}
+		if w.CheckOpening(idx, m) != nil {
+			continue
+		}
+		moved[idx] = m
+		pts = append(pts, solvePoint(&work, m, k == 0))
+	}
+	markBest(pts)
+	return pts, nil
+}
+
+func solvePoint(w *geometry.Wall, o geometry.Opening, current bool) Point {
+	p := Point{X: o.X, Y: o.Sill, Current: current}
+	res, err := pier.Solve(w)
+	if err != nil {
+		p.Err = err
+		return p
+	}
+	p.Result, p.Rigidity = res, res.Rigidity
+	p.StressIndex = -1
+	for _, lp := range res.Leaves() {
+		p.Piers = append(p.Piers, PierShare{Name: lp.Name, Share: lp.Share})
+		if lp.L() <= 0 {
+			continue
+		}
+		if idx := lp.Share / lp.L(); idx > p.StressIndex {
+			p.StressIndex, p.StressPier = idx, lp.Name
+			p.MaxStress, _ = ShearStress(lp, w)
+		}
+	}
+	if p.StressIndex < 0 {
+		p.StressIndex = 0
+	}
+	return p
+}
+
+// markBest sets Best on the first solved point with the lowest StressIndex.
+func markBest(pts []Point) {
+	best := -1
+	for i, p := range pts {
+		if p.Err != nil {
+			continue
+		}
+		// A relative tolerance keeps ties (mirror positions) on the first.
+		if best < 0 || p.StressIndex < pts[best].StressIndex*(1-1e-9) {
+			best = i
+		}
+	}
+	if best >= 0 {
+		pts[best].Best = true
+	}
+}
+
+// BestIndex returns the index of the best point, or -1.
+func BestIndex(pts []Point) int {
+	for i, p := range pts {
+		if p.Best {
+			return i
+		}
+	}
+	return -1
+}
+
+// CurrentIndex returns the index of the current position, or -1 (the
+// opening's current position does not fit, e.g. the layout is invalid).
+func CurrentIndex(pts []Point) int {
+	for i, p := range pts {
+		if p.Current {
+			return i
+		}
+	}
+	return -1
+}
