@@ -1,0 +1,375 @@
+package report
+
+import (
+	"fmt"
+	"io"
+	"math"
+	"path/filepath"
+	"strings"
+	"time"
+	"unicode/utf8"
+
+	"pierwise/geometry"
+	"pierwise/pier"
+	"pierwise/sketch"
+	"pierwise/study"
+)
+
+// CompareInfo is what the comparison report says about its making.
+type CompareInfo struct {
+	Now     time.Time
+	Version string
+}
+
+// cmpCaution is the safety caution every printed result carries.
+const cmpCaution = "Results support, and do not replace, the judgement of a licensed engineer; local codes govern."
+
+// cmpDash stands for a value that does not exist on one side.
+const cmpDash = "-"
+
+// CompareReport writes the text report of a comparison of two layouts: title
+// block, both elevations side by side, the differences table, the pier
+// table with piers matched by position, warnings and the caution. It
+// computes nothing: every number comes from c.
+func CompareReport(out io.Writer, c *study.Comparison, info CompareInfo) error {
+	w := &writer{out: out}
+	b, a := &c.Before, &c.After
+	sys := b.Wall.Units
+	w.title("Comparison of opening layouts")
+	if t := b.Wall.Title; t != "" {
+		w.kv("Wall", t)
+	}
+	if a.Wall.Title != b.Wall.Title && a.Wall.Title != "" {
+		w.kv("Other wall", a.Wall.Title)
+	}
+	w.kv("Before", cmpSideName(b))
+	w.kv("After", cmpSideName(a))
+	if !info.Now.IsZero() {
+		w.kv("Date", info.Now.UTC().Format("2006-01-02 15:04 UTC"))
+	}
+	if info.Version != "" {
+		w.kv("Program", "pierwise "+info.Version)
+	}
+	u := UnitsFor(sys)
+	w.kv("Units", fmt.Sprintf("%s (lengths in %s, forces in %s, rigidity in %s)", cmpSysName(sys), u.Coord, u.Force, u.Rigidity))
+	w.kv("Method", "classic pier method, relative values with E = 1 and t = 1")
+
+	w.section("Elevations")
+	w.para(CompareElevations(c, width, 14))
+
+	w.section("Differences")
+	t := &table{head: []string{"", "before", "after", "change"}, right: []bool{false, true, true, true}}
+	for _, r := range CompareRows(c) {
+		t.add(r.Quantity, r.Before, r.After, r.Change)
+	}
+	t.write(w, "  ")
+
+	w.section("Leaf piers, matched by position")
+	if len(c.Piers) == 0 {
+		w.line("  No pier table: the classic method has no answer for one of the layouts.")
+	} else {
+		pt := &table{
+			head:  []string{"before", "after", "share", "share", "change", "V before", "V after", "note"},
+			right: []bool{false, false, true, true, true, true, true, false},
+		}
+		for _, r := range ComparePierRows(c) {
+			pt.add(r.Before, r.After, r.ShareBefore, r.ShareAfter, r.Change, r.ShearBefore, r.ShearAfter, r.Note)
+		}
+		pt.write(w, "  ")
+		w.blank()
+		w.wrapped("  ", "Shares are fractions of the wall shear. Change is in percentage points. "+
+			"A pier of one layout matches the pier of the other that overlaps it most; "+
+			"the names P1, P2, ... are given left to right in each layout and may differ.")
+	}
+
+	w.section("Warnings")
+	warn := CompareWarnings(c)
+	if len(warn) == 0 {
+		w.line("  None.")
+	}
+	for _, s := range warn {
+		w.wrapped("  - ", s)
+	}
+
+	w.section("Caution")
+	w.wrapped("  ", cmpCaution)
+	return w.err
+}
+
+func cmpSideName(s *study.Side) string {
+	name := fmt.Sprintf("layout %q", s.Layout())
+	if s.Path != "" {
+		name = filepath.Base(s.Path) + ", " + name
+	}
+	return name
+}
+
+func cmpSysName(s geometry.System) string {
+	if s == geometry.SI {
+		return "SI"
+	}
+	return "US"
+}
+
+// CompareElevations draws the two layouts side by side in at most cols
+// columns and rows rows (each under a heading with its label).
+func CompareElevations(c *study.Comparison, cols, rows int) string {
+	const gap = 4
+	half := (cols - gap) / 2
+	left := cmpElevation(&c.Before, half, rows-1)
+	right := cmpElevation(&c.After, half, rows-1)
+	n := max(len(left), len(right))
+	var sb strings.Builder
+	for i := 0; i < n; i++ {
+		var l, r string
+		if i < len(left) {
+			l = left[i]
+		}
+		if i < len(right) {
+			r = right[i]
+		}
+		pad := half + gap - utf8.RuneCountInString(l)
+		sb.WriteString(strings.TrimRight(l+strings.Repeat(" ", max(pad, 1))+r, " "))
+		sb.WriteByte('\n')
+	}
+	return sb.String()
+}
+
+func cmpElevation(s *study.Side, cols, rows int) []string {
+	head := cmpClip(s.Label, cols)
+	g := sketch.Elevation(s.Wall, s.Result, cols, rows)
+	lines := []string{head}
+	if g.Rows > 0 {
+		lines = append(lines, strings.Split(g.String(), "\n")...)
+	}
+	if !s.OK() {
+		lines = append(lines, cmpClip("(no classic answer)", cols))
+	}
+	return lines
+}
+
+func cmpClip(s string, n int) string {
+	if utf8.RuneCountInString(s) <= n {
+		return s
+	}
+	r := []rune(s)
+	return string(r[:max(n-3, 0)]) + "..."
+}
+
+// CompareRow is one line of the differences table, already formatted.
+type CompareRow struct {
+	Quantity, Before, After, Change string
+}
+
+// CompareRows returns the differences table of a comparison: wall sizes when
+// they differ, relative rigidity, rigidity, relative deflection, deflection,
+// design drift and its check. The editor shows the same rows.
+func CompareRows(c *study.Comparison) []CompareRow {
+	b, a := &c.Before, &c.After
+	sys := b.Wall.Units
+	u := UnitsFor(sys)
+	var rows []CompareRow
+	add := func(q, vb, va, ch string) { rows = append(rows, CompareRow{q, vb, va, ch}) }
+
+	rows = append(rows, CompareRow{"Layout", b.Layout(), a.Layout(), ""})
+	lengthRow := func(q string, lb, la geometry.Length) {
+		if math.Abs(float64(lb-la)) > 1e-9 {
+			add(q, geometry.FormatLength(lb, sys), geometry.FormatLength(la, sys), cmpPct(float64(lb), float64(la)))
+		}
+	}
+	lengthRow("Wall length", b.Wall.Length, a.Wall.Length)
+	lengthRow("Wall height", b.Wall.Height, a.Wall.Height)
+	lengthRow("Thickness", b.Wall.Thickness, a.Wall.Thickness)
+	add("Openings", fmt.Sprint(len(b.Wall.Openings())), fmt.Sprint(len(a.Wall.Openings())), "")
+
+	rb, ra := b.Result, a.Result
+	val := func(r *pier.Result, f func(*pier.Result) (float64, bool), format func(float64) string) (string, float64, bool) {
+		if r == nil {
+			return "no answer", 0, false
+		}
+		v, ok := f(r)
+		if !ok {
+			return cmpDash, 0, false
+		}
+		return format(v), v, true
+	}
+	row := func(q string, f func(*pier.Result) (float64, bool), format func(float64) string) {
+		sb, vb, okb := val(rb, f, format)
+		sa, va, oka := val(ra, f, format)
+		ch := ""
+		if okb && oka {
+			ch = cmpPct(vb, va)
+		}
+		if sb == cmpDash && sa == cmpDash {
+			return
+		}
+		add(q, sb, sa, ch)
+	}
+	sig := func(v float64) string { return cmpSig(v, 4) }
+	row("Relative rigidity (E t)", func(r *pier.Result) (float64, bool) { return r.Rigidity, true }, sig)
+	row("Rigidity, "+u.Rigidity, func(r *pier.Result) (float64, bool) { return u.RigidityOf(r.RigidityAbs), r.RigidityAbs > 0 }, sig)
+	row("Relative deflection", func(r *pier.Result) (float64, bool) { return r.Deflection, true }, sig)
+	row("Deflection, "+u.Deflection, func(r *pier.Result) (float64, bool) {
+		return u.DeflectionOf(r.DeflectionAbs), r.HasLoad && r.DeflectionAbs > 0
+	}, func(v float64) string { return cmpSig(v, 3) })
+	row("Design drift, "+u.Deflection, func(r *pier.Result) (float64, bool) {
+		return u.DeflectionOf(r.Drift.Design), r.HasLoad && r.Drift.Design > 0
+	}, func(v float64) string { return cmpSig(v, 3) })
+	if (rb != nil && rb.HasLoad && rb.Drift.Allowable > 0) || (ra != nil && ra.HasLoad && ra.Drift.Allowable > 0) {
+		check := func(r *pier.Result) string {
+			switch {
+			case r == nil:
+				return "no answer"
+			case !r.HasLoad || r.Drift.Allowable <= 0:
+				return cmpDash
+			case r.Drift.OK:
+				return fmt.Sprintf("OK, limit %s", cmpSig(u.DeflectionOf(r.Drift.Allowable), 3))
+			}
+			return fmt.Sprintf("EXCEEDS limit %s", cmpSig(u.DeflectionOf(r.Drift.Allowable), 3))
+		}
+		add("Drift check", check(rb), check(ra), "")
+	}
+	return rows
+}
+
+// ComparePierRow is one line of the pier table, already formatted.
+type ComparePierRow struct {
+	Before, After           string // pier names, "-" when missing
+	ShareBefore, ShareAfter string // "28.1 %"
+	Change                  string // "+1.9 pt"
+	ShearBefore, ShearAfter string // pier shear with unit, "-" without a load
+	Note                    string // "appears at x 12.0-18.0 ft", "vanishes …"
+	Status                  study.Status
+}
+
+// ComparePierRows returns the pier table of a comparison.
+func ComparePierRows(c *study.Comparison) []ComparePierRow {
+	sys := c.Before.Wall.Units
+	u := UnitsFor(sys)
+	var rows []ComparePierRow
+	for _, pc := range c.Piers {
+		r := ComparePierRow{Before: cmpDash, After: cmpDash, ShareBefore: cmpDash, ShareAfter: cmpDash,
+			ShearBefore: cmpDash, ShearAfter: cmpDash, Status: pc.Status()}
+		if p := pc.Before; p != nil {
+			r.Before, r.ShareBefore = p.Name, cmpShare(p.Share)
+			if c.Before.Result.HasLoad {
+				r.ShearBefore = geometry.FormatForce(p.Shear, sys)
+			}
+		}
+		if p := pc.After; p != nil {
+			r.After, r.ShareAfter = p.Name, cmpShare(p.Share)
+			if c.After.Result.HasLoad {
+				r.ShearAfter = geometry.FormatForce(p.Shear, sys)
+			}
+		}
+		r.Change = fmt.Sprintf("%+.1f pt", 100*pc.ShareChange())
+		if r.Change == "-0.0 pt" {
+			r.Change = "+0.0 pt"
+		}
+		switch pc.Status() {
+		case study.Appears:
+			r.Note = "appears, x " + cmpSpan(pc.After.Rect, u)
+		case study.Vanishes:
+			r.Note = "vanishes, x " + cmpSpan(pc.Before.Rect, u)
+		default:
+			if pc.Before.Name != pc.After.Name {
+				r.Note = "renamed"
+			}
+		}
+		rows = append(rows, r)
+	}
+	return rows
+}
+
+// CompareWarnings returns what the reader of a comparison should know: a
+// layout without a classic answer, each layout's own warnings, piers that
+// appear or vanish, a drift check that changes, and walls that differ in
+// more than their openings.
+func CompareWarnings(c *study.Comparison) []string {
+	var out []string
+	for _, s := range []*study.Side{&c.Before, &c.After} {
+		if s.Err != nil {
+			out = append(out, fmt.Sprintf("%s: the classic method has no answer: %v", s.Label, s.Err))
+		}
+	}
+	// A warning both layouts share is said once.
+	var wb, wa []string
+	if c.Before.Result != nil {
+		wb = c.Before.Result.Warnings
+	}
+	if c.After.Result != nil {
+		wa = c.After.Result.Warnings
+	}
+	inB := map[string]bool{}
+	for _, m := range wb {
+		inB[m] = true
+	}
+	inA := map[string]bool{}
+	for _, m := range wa {
+		inA[m] = true
+	}
+	for _, m := range wb {
+		if inA[m] {
+			out = append(out, "Both layouts: "+m)
+		} else {
+			out = append(out, c.Before.Label+": "+m)
+		}
+	}
+	for _, m := range wa {
+		if !inB[m] {
+			out = append(out, c.After.Label+": "+m)
+		}
+	}
+	for _, pc := range c.Piers {
+		switch pc.Status() {
+		case study.Appears:
+			out = append(out, fmt.Sprintf("Pier %s of %s has no counterpart in %s: design it on its own.",
+				pc.After.Name, c.After.Label, c.Before.Label))
+		case study.Vanishes:
+			out = append(out, fmt.Sprintf("Pier %s of %s has no counterpart in %s: its reinforcement is no longer needed there, and its shear has moved to other piers.",
+				pc.Before.Name, c.Before.Label, c.After.Label))
+		}
+	}
+	if rb, ra := c.Before.Result, c.After.Result; rb != nil && ra != nil && rb.HasLoad && ra.HasLoad && rb.Drift.Allowable > 0 {
+		if rb.Drift.OK && !ra.Drift.OK {
+			out = append(out, fmt.Sprintf("The drift check passes for %s and fails for %s.", c.Before.Label, c.After.Label))
+		} else if !rb.Drift.OK && ra.Drift.OK {
+			out = append(out, fmt.Sprintf("The drift check fails for %s and passes for %s.", c.Before.Label, c.After.Label))
+		}
+	}
+	if b, a := c.Before.Wall, c.After.Wall; b.Material != a.Material || b.Support != a.Support || b.Load != a.Load || b.Stiffness != a.Stiffness {
+		out = append(out, "The two walls differ in more than their openings (material, support, load or stiffness modifiers): the change is not due to the openings alone.")
+	}
+	return out
+}
+
+// cmpPct formats the relative change from vb to va.
+func cmpPct(vb, va float64) string {
+	ch, ok := study.Change(vb, va)
+	if !ok {
+		return ""
+	}
+	s := fmt.Sprintf("%+.1f %%", 100*ch)
+	if s == "-0.0 %" {
+		s = "+0.0 %"
+	}
+	return s
+}
+
+func cmpShare(s float64) string { return fmt.Sprintf("%.1f %%", 100*s) }
+
+func cmpSpan(r geometry.Rect, u Units) string {
+	return fmt.Sprintf("%s-%s %s", cmpSig(u.CoordOf(r.X0), 3), cmpSig(u.CoordOf(r.X1), 3), u.Coord)
+}
+
+// cmpSig formats v with sig significant digits in plain notation.
+func cmpSig(v float64, sig int) string {
+	if v == 0 || math.IsNaN(v) || math.IsInf(v, 0) {
+		return fmt.Sprint(v)
+	}
+	dec := sig - 1 - int(math.Floor(math.Log10(math.Abs(v))))
+	if dec < 0 {
+		dec = 0
+	}
+	return fmt.Sprintf("%.*f", dec, v)
+}

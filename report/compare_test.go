@@ -1,0 +1,143 @@
+package report
+
+import (
+	"bytes"
+	"flag"
+	"os"
+	"path/filepath"
+	"strings"
+	"testing"
+	"time"
+
+	"pierwise/geometry"
+	"pierwise/study"
+)
+
+// The -update flag rewrites golden files. Another test file of the package
+// may define it too, so it is registered only when nobody has.
+func init() {
+	if flag.Lookup("update") == nil {
+		flag.Bool("update", false, "rewrite golden files")
+	}
+}
+
+func cmpUpdate() bool {
+	f := flag.Lookup("update")
+	return f != nil && f.Value.String() == "true"
+}
+
+// cmpTestWall is an invented wall (not a published example): 30 ft by 12 ft
+// concrete masonry with a door and two windows, and a variant in which the
+// second window has moved to the right end and become a door.
+func cmpTestWall() *geometry.Wall {
+	ft := geometry.Foot
+	main := []geometry.Opening{
+		{Name: "D1", X: 3 * ft, Width: 3 * ft, Height: 7 * ft},
+		{Name: "W1", X: 10 * ft, Sill: 3 * ft, Width: 5 * ft, Height: 4 * ft},
+		{Name: "W2", X: 19 * ft, Sill: 3 * ft, Width: 5 * ft, Height: 4 * ft},
+	}
+	moved := append([]geometry.Opening(nil), main...)
+	moved[2] = geometry.Opening{Name: "W2", X: 25 * ft, Sill: 0, Width: 5 * ft, Height: 7 * ft}
+	return &geometry.Wall{
+		Title: "Test wall", Units: geometry.US,
+		Length: 30 * ft, Height: 12 * ft, Thickness: 7.625 * geometry.Inch,
+		Support:   geometry.Cantilever,
+		Material:  geometry.Material{Kind: geometry.ConcreteMasonry, Strength: 2000 * geometry.PSI},
+		Load:      geometry.Load{Shear: 30 * geometry.Kip},
+		Stiffness: geometry.Stiffness{Flexure: 1, Shear: 1},
+		Drift:     geometry.Drift{Cd: 3.5, Ie: 1, Limit: 0.010},
+		Layouts:   []geometry.Layout{{Name: "main", Openings: main}, {Name: "W2 at the end", Openings: moved}},
+	}
+}
+
+func cmpGolden(t *testing.T, name string, got []byte) {
+	t.Helper()
+	golden := filepath.Join("testdata", name)
+	if cmpUpdate() {
+		if err := os.MkdirAll("testdata", 0o755); err != nil {
+			t.Fatal(err)
+		}
+		if err := os.WriteFile(golden, got, 0o644); err != nil {
+			t.Fatal(err)
+		}
+	}
+	want, err := os.ReadFile(golden)
+	if err != nil {
+		t.Fatalf("%v (run go test -update to create it)", err)
+	}
+	if string(got) != string(want) {
+		t.Errorf("output differs from %s (check it, then go test -update):\n%s", golden, got)
+	}
+}
+
+func TestCompareReportGolden(t *testing.T) {
+	w := cmpTestWall()
+	c, err := study.Compare(study.WithLayout(w, 0), study.WithLayout(w, 1))
+	if err != nil {
+		t.Fatal(err)
+	}
+	c.Before.Path, c.After.Path = "test.toml", "test.toml"
+	var buf bytes.Buffer
+	if err := CompareReport(&buf, c, CompareInfo{Now: time.Date(2026, 12, 1, 23, 0, 0, 0, time.UTC), Version: "test"}); err != nil {
+		t.Fatal(err)
+	}
+	cmpGolden(t, "compare_test_wall.golden", buf.Bytes())
+	text := strings.Join(strings.Fields(buf.String()), " ")
+	if !strings.Contains(text, "do not replace, the judgement of a licensed engineer; local codes govern") {
+		t.Error("no caution")
+	}
+	// The pier right of W2 vanishes when W2 moves to the wall's end.
+	if !strings.Contains(text, "vanishes") {
+		t.Error("no vanishing pier called out")
+	}
+}
+
+func TestCompareReportCutLayout(t *testing.T) {
+	w := cmpTestWall()
+	cut := w.Clone()
+	cut.Layouts = []geometry.Layout{{Name: "cut", Openings: []geometry.Opening{
+		{Name: "D9", X: 10 * geometry.Foot, Width: 4 * geometry.Foot, Height: 12 * geometry.Foot},
+	}}}
+	cut.Active = 0
+	c, err := study.Compare(w, cut)
+	if err != nil {
+		t.Fatal(err)
+	}
+	var buf bytes.Buffer
+	if err := CompareReport(&buf, c, CompareInfo{}); err != nil {
+		t.Fatal(err)
+	}
+	text := buf.String()
+	for _, want := range []string{"no answer", "D9", "No pier table"} {
+		if !strings.Contains(text, want) {
+			t.Errorf("report of a cut layout lacks %q:\n%s", want, text)
+		}
+	}
+	for _, bad := range []string{"NaN", "Inf"} {
+		if strings.Contains(text, bad) {
+			t.Errorf("report prints %s", bad)
+		}
+	}
+}
+
+// The differences table equals the numbers of the two layouts solved apart.
+func TestCompareRowsMatchResults(t *testing.T) {
+	w := cmpTestWall()
+	c, err := study.Compare(study.WithLayout(w, 0), study.WithLayout(w, 1))
+	if err != nil {
+		t.Fatal(err)
+	}
+	var rel *CompareRow
+	rows := CompareRows(c)
+	for i := range rows {
+		if strings.HasPrefix(rows[i].Quantity, "Relative rigidity") {
+			rel = &rows[i]
+		}
+	}
+	if rel == nil {
+		t.Fatal("no relative rigidity row")
+	}
+	if rel.Before != cmpSig(c.Before.Result.Rigidity, 4) || rel.After != cmpSig(c.After.Result.Rigidity, 4) {
+		t.Errorf("row %+v, results %g %g", *rel, c.Before.Result.Rigidity, c.After.Result.Rigidity)
+	}
+}
