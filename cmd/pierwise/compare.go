@@ -1,0 +1,102 @@
+package main
+
+import (
+	"fmt"
+	"io"
+	"os"
+	"path/filepath"
+	"time"
+
+	"pierwise/geometry"
+	"pierwise/report"
+	"pierwise/study"
+)
+
+func init() {
+	register(command{
+		name:  "compare",
+		args:  "FILE[:VARIANT] FILE[:VARIANT]... [-o OUT]",
+		short: "compare opening layouts side by side (the first against each other; one FILE alone: all its variants)",
+		run:   runCompare,
+	})
+}
+
+func runCompare(e *env, args []string) error {
+	fs := newFlags(e, "compare")
+	outPath := fs.String("o", "", "write the comparison report to `OUT` instead of standard output")
+	pos, err := parseInterleaved(fs, args)
+	if err != nil {
+		return err
+	}
+	if len(pos) == 0 {
+		return usagef("compare: give two or more walls as FILE[:VARIANT], or one FILE with variants")
+	}
+	walls, err := compareWalls(pos)
+	if err != nil {
+		return err
+	}
+	if len(walls) < 2 {
+		return usagef("compare: %s has a single layout; give two or more walls as FILE[:VARIANT]", pos[0])
+	}
+
+	var out io.Writer = e.stdout
+	var file *os.File
+	if *outPath != "" {
+		file, err = os.Create(*outPath)
+		if err != nil {
+			return err
+		}
+		out = file
+	}
+	info := report.CompareInfo{Now: time.Now(), Version: version}
+	for i := 1; i < len(walls); i++ {
+		c, err := study.Compare(walls[0].wall, walls[i].wall)
+		if err != nil {
+			return err
+		}
+		c.Before.Path, c.Before.Label = walls[0].path, walls[0].label
+		c.After.Path, c.After.Label = walls[i].path, walls[i].label
+		if i > 1 {
+			fmt.Fprint(out, "\n\f\n")
+		}
+		if err := report.CompareReport(out, c, info); err != nil {
+			return err
+		}
+	}
+	if file != nil {
+		if err := file.Close(); err != nil {
+			return err
+		}
+		fmt.Fprintln(e.stderr, "wrote", *outPath)
+	}
+	return nil
+}
+
+type compareSide struct {
+	path, label string
+	wall        *geometry.Wall
+}
+
+// compareWalls opens the arguments; a single FILE without a variant stands
+// for all of its layouts.
+func compareWalls(args []string) ([]compareSide, error) {
+	var out []compareSide
+	for _, a := range args {
+		w, err := study.Open(a)
+		if err != nil {
+			return nil, err
+		}
+		path, _ := study.SplitArg(a)
+		lw := func(w *geometry.Wall) compareSide {
+			return compareSide{path: path, label: filepath.Base(path) + ":" + w.Layouts[w.Active].Name, wall: w}
+		}
+		if _, variant := study.SplitArg(a); len(args) == 1 && variant == "" {
+			for i := range w.Layouts {
+				out = append(out, lw(study.WithLayout(w, i)))
+			}
+			continue
+		}
+		out = append(out, lw(w))
+	}
+	return out, nil
+}

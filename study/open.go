@@ -1,0 +1,26 @@
+package study
+
+import (
+	"fmt"
+
+	"pierwise/geometry"
+)
+
+// Open loads a wall file given as FILE[:VARIANT] and makes the named variant
+// the active layout. Without a variant the file's own active layout stays.
+// An unknown variant is an error that lists the variants the file has.
+func Open(arg string) (*geometry.Wall, error) {
+	path, variant := SplitArg(arg)
+	w, err := geometry.LoadFile(path)
+	if err != nil {
+		return nil, err
+	}
+	if variant == "" {
+		return w, nil
+	}
+	if err := Select(w, variant); err != nil {
+		return nil, fmt.Errorf("%s: %w", path, err)
+	}
+	return w, nil
+}
+
