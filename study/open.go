@@ -23,4 +23,3 @@ func Open(arg string) (*geometry.Wall, error) {
 	}
 	return w, nil
 }
-
