@@ -1,0 +1,79 @@
+// Package geometry knows walls, openings and what people type about them:
+// lengths, forces and stresses with their units, the wall file, and the
+// rules a wall must follow before it is solved. It computes no mechanics.
+//
+// # Units
+//
+// Every value is stored in SI base units whatever the wall's unit system:
+// Length in metres, Force in newtons, Stress in pascals. The System (US or
+// SI) only decides how values are read and shown: a bare number is feet or
+// metres for lengths, kip or kN for forces, psi or MPa for stresses.
+// ParseLength accepts in, ft, mm, cm, m and feet-inches (12'-6", 12'6",
+// 12' 6 1/2", 6"); ParseForce lb, kip, N, kN; ParseStress psi, ksi, Pa,
+// kPa, MPa, GPa. The conversion factors are exact by definition (1 in =
+// 25.4 mm, 1 lbf = 4.448 221 615 260 5 N; NIST SP 811, Appendix B).
+// FormatLength, FormatForce and FormatStress round for people; they are not
+// meant to be read back. Marshal writes values that read back exactly.
+//
+// # Coordinates
+//
+// Wall coordinates have x along the wall from its left end and y up from its
+// base. An opening's X and Sill place its lower left corner; its outline is
+// [X, X+Width] × [Sill, Sill+Height].
+//
+// # Invariants of a valid wall (Validate)
+//
+//   - length, height and thickness are finite and positive; so are the
+//     strength (except for a custom material), the stiffness modifiers and
+//     C_d and I_e; moduli and the shear are finite and not negative;
+//   - a custom material gives its modulus; a drift limit is a known preset
+//     or a fraction in (0, 0.1], or 0 for no check;
+//   - there is at least one layout, Active names one of them, and layout
+//     names are unique;
+//   - every opening has positive finite sizes, lies inside the wall (it may
+//     reach the base and the top edge), has a name unique in its layout, and
+//     overlaps no other opening of its layout (touching edges and corners
+//     are allowed; edges within a nanometre count as touching).
+//
+// Validate reports every broken rule at once as an ErrorList. Parse adds the
+// file name and the line of each key. Nothing a user can type makes this
+// package panic.
+//
+// # The wall file
+//
+// TOML, as in DESIGN.md §6, plus:
+//
+//	layout = "as drawn"      # name of the top-level [[opening]] layout; default "main"
+//	active = "door moved"    # the layout to solve; default the top-level one
+//
+//	[stiffness]              # cracking modifiers, default 1 and 1
+//	flexure = 0.35
+//	shear = 1.0
+//
+//	[drift]                  # δ = cd·δe/ie against limit·h; default 1, 1, no limit
+//	cd = 4.0
+//	ie = 1.0
+//	limit = "masonry-cantilever"   # a DriftPresets name, or a number such as 0.01
+//
+//	[check]                  # finite-element check
+//	mesh = "6in"             # largest element size; default chosen by the solver
+//	element = "q4"           # "qm6" (default) or "q4"
+//
+//	[[variant]]              # another layout of the same wall
+//	name = "door moved"
+//	[[variant.opening]]      # same keys as [[opening]]
+//	x = "22ft"
+//	width = "3ft"
+//	height = "7ft"
+//
+// An opening's sill defaults to 0 (a door) and its name to the next free D1,
+// D2… for doors or W1, W2… for windows. Unknown keys are errors. In error
+// keys the tables of an array are counted from 1: opening[2] is the second
+// [[opening]] of the top-level layout, variant[1].opening[3] the third
+// opening of the first [[variant]].
+//
+// Marshal writes a tidy file in the wall's units; Parse(Marshal(w)) gives
+// back w exactly (every float64 bit for bit) for every valid wall. Save
+// writes atomically through a temporary file in the same directory.
+// Comments of the original file are not kept.
+package geometry
