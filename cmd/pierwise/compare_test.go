@@ -1,0 +1,92 @@
+package main
+
+import (
+	"bytes"
+	"fmt"
+	"math"
+	"path/filepath"
+	"strings"
+	"testing"
+
+	"pierwise/demo"
+	"pierwise/geometry"
+	"pierwise/pier"
+	"pierwise/report"
+)
+
+// studyFile saves the demo wall (two layouts: "main", "wide entrance").
+func studyFile(t *testing.T) string {
+	t.Helper()
+	path := filepath.Join(t.TempDir(), "annex.toml")
+	if err := geometry.Save(path, demo.Wall()); err != nil {
+		t.Fatal(err)
+	}
+	return path
+}
+
+func runCmd(args ...string) (int, string, string) {
+	var out, errb bytes.Buffer
+	code := run(&env{stdout: &out, stderr: &errb, stdin: strings.NewReader("")}, args)
+	return code, out.String(), errb.String()
+}
+
+func TestCompareCommand(t *testing.T) {
+	path := studyFile(t)
+	code, out, errs := runCmd("compare", path+":main", path+":wide entrance")
+	if code != exitOK {
+		t.Fatalf("exit %d: %s", code, errs)
+	}
+	// The rigidities printed are those of the layouts solved on their own.
+	w := demo.Wall()
+	u := report.UnitsFor(w.Units)
+	for i := range w.Layouts {
+		w.Active = i
+		r, err := pier.Solve(w)
+		if err != nil {
+			t.Fatal(err)
+		}
+		for _, want := range []string{
+			fmtSig4(r.Rigidity),
+			fmtSig4(u.RigidityOf(r.RigidityAbs)),
+		} {
+			if !strings.Contains(out, want) {
+				t.Errorf("layout %q: %s not in the output", w.Layouts[i].Name, want)
+			}
+		}
+	}
+	for _, want := range []string{"annex.toml:main", "annex.toml:wide entrance", "licensed engineer"} {
+		if !strings.Contains(out, want) {
+			t.Errorf("%q not in the output", want)
+		}
+	}
+	// One file alone compares its layouts.
+	code, out2, _ := runCmd("compare", path)
+	if code != exitOK || !strings.Contains(out2, "annex.toml:wide entrance") {
+		t.Errorf("one file: exit %d", code)
+	}
+}
+
+// fmtSig4 formats v with four significant digits, as the report does.
+func fmtSig4(v float64) string {
+	dec := max(0, 3-int(math.Floor(math.Log10(math.Abs(v)))))
+	return fmt.Sprintf("%.*f", dec, v)
+}
+
+func TestCompareCommandErrors(t *testing.T) {
+	path := studyFile(t)
+	for _, tc := range []struct {
+		args []string
+		code int
+		msg  string
+	}{
+		{[]string{"compare"}, exitUsage, "two or more"},
+		{[]string{"compare", path + ":nope", path}, exitInput, `"main", "wide entrance"`},
+		{[]string{"compare", filepath.Join(t.TempDir(), "missing.toml"), path}, exitInput, "missing.toml"},
+		{[]string{"compare", path, "--bogus"}, exitUsage, "bogus"},
+	} {
+		code, _, errs := runCmd(tc.args...)
+		if code != tc.code || !strings.Contains(errs, tc.msg) {
+			t.Errorf("%v: exit %d, %q; want %d and %q", tc.args, code, errs, tc.code, tc.msg)
+		}
+	}
+}
