@@ -1,0 +1,153 @@
+package report
+
+import (
+	"fmt"
+	"io"
+	"sort"
+	"strconv"
+	"strings"
+
+	"pierwise/geometry"
+	"pierwise/study"
+)
+
+// SweepTable writes the table of a sweep (study.Sweep) of the opening called
+// name: for every position the opening's left edge and sill, the wall's
+// relative rigidity and its change from the current position, each leaf
+// pier's share, the highest pier shear stress (or share/L without a load)
+// and marks for the current and the best position.
+func SweepTable(out io.Writer, w *geometry.Wall, name string, axis study.Axis, step geometry.Length, pts []study.Point) error {
+	u := UnitsFor(w.Units)
+	layout := w.Layouts[w.Active].Name
+	fmt.Fprintf(out, "Sweep of %s along %s in steps of %s: %s, layout %q\n", name, axis, geometry.FormatLength(step, w.Units), w.Title, layout)
+	if len(pts) == 0 {
+		_, err := fmt.Fprintln(out, "The opening fits nowhere else along this axis.")
+		return err
+	}
+	names := sweepPierNames(pts)
+	cur := study.CurrentIndex(pts)
+	head := []string{"x (" + u.Coord + ")", "sill (" + u.Coord + ")", "rel. rigidity", "change"}
+	for _, n := range names {
+		head = append(head, n)
+	}
+	stressHead := "max share/L (1/" + u.Coord + ")"
+	if w.Load.Shear > 0 && w.Thickness > 0 {
+		stressHead = "max stress (" + u.Stress + ")"
+	}
+	head = append(head, stressHead, "")
+	rows := [][]string{head}
+	for _, p := range pts {
+		r := []string{
+			strconv.FormatFloat(u.CoordOf(float64(p.X)), 'f', 2, 64),
+			strconv.FormatFloat(u.CoordOf(float64(p.Y)), 'f', 2, 64),
+		}
+		if p.Err != nil {
+			r = append(r, "no answer", "")
+			for range names {
+				r = append(r, "")
+			}
+			r = append(r, "", p.Err.Error())
+			rows = append(rows, r)
+			continue
+		}
+		ch := ""
+		if cur >= 0 && pts[cur].Err == nil {
+			if c, ok := study.Change(pts[cur].Rigidity, p.Rigidity); ok {
+				ch = fmt.Sprintf("%+.1f %%", 100*c)
+			}
+		}
+		r = append(r, strconv.FormatFloat(p.Rigidity, 'f', 4, 64), ch)
+		shares := map[string]float64{}
+		for _, ps := range p.Piers {
+			shares[ps.Name] = ps.Share
+		}
+		for _, n := range names {
+			if s, ok := shares[n]; ok {
+				r = append(r, fmt.Sprintf("%.1f%%", 100*s))
+			} else {
+				r = append(r, "")
+			}
+		}
+		var st string
+		if p.MaxStress > 0 {
+			st = fmt.Sprintf("%.3g %s", float64(p.MaxStress)/float64(w.Units.BaseStress()), p.StressPier)
+		} else {
+			st = fmt.Sprintf("%.3g %s", p.StressIndex*float64(w.Units.BaseLength()), p.StressPier)
+		}
+		var marks []string
+		if p.Current {
+			marks = append(marks, "current")
+		}
+		if p.Best {
+			marks = append(marks, "best")
+		}
+		r = append(r, st, strings.Join(marks, ", "))
+		rows = append(rows, r)
+	}
+	sweepAlign(out, rows)
+	_, err := fmt.Fprintln(out, "\nShares are fractions of the wall shear. Best: lowest highest pier shear stress V_i/(L_i t).\n"+
+		"Results support, and do not replace, the judgement of a licensed engineer; local codes govern.")
+	return err
+}
+
+// sweepPierNames returns every leaf pier name of the sweep in name order
+// (P2 before P10).
+func sweepPierNames(pts []study.Point) []string {
+	seen := map[string]bool{}
+	var names []string
+	for _, p := range pts {
+		for _, ps := range p.Piers {
+			if !seen[ps.Name] {
+				seen[ps.Name] = true
+				names = append(names, ps.Name)
+			}
+		}
+	}
+	sort.Slice(names, func(i, j int) bool { return sweepNameLess(names[i], names[j]) })
+	return names
+}
+
+// sweepNameLess orders pier names by their numbers: P2 < P10, P2 < P2.1.
+func sweepNameLess(a, b string) bool {
+	pa := strings.Split(strings.TrimPrefix(a, "P"), ".")
+	pb := strings.Split(strings.TrimPrefix(b, "P"), ".")
+	for i := 0; i < len(pa) && i < len(pb); i++ {
+		na, ea := strconv.Atoi(pa[i])
+		nb, eb := strconv.Atoi(pb[i])
+		if ea == nil && eb == nil && na != nb {
+			return na < nb
+		}
+		if pa[i] != pb[i] {
+			return pa[i] < pb[i]
+		}
+	}
+	return len(pa) < len(pb)
+}
+
+// sweepAlign prints rows as columns: numbers right-aligned, the last column
+// (marks and errors) left-aligned.
+func sweepAlign(out io.Writer, rows [][]string) {
+	n := len(rows[0])
+	wid := make([]int, n)
+	for _, r := range rows {
+		for i, c := range r {
+			if i < n-1 && len([]rune(c)) > wid[i] {
+				wid[i] = len([]rune(c))
+			}
+		}
+	}
+	for _, r := range rows {
+		var b strings.Builder
+		for i, c := range r {
+			if i > 0 {
+				b.WriteString("  ")
+			}
+			if i == n-1 {
+				b.WriteString(c)
+			} else {
+				b.WriteString(strings.Repeat(" ", wid[i]-len([]rune(c))) + c)
+			}
+		}
+		fmt.Fprintln(out, strings.TrimRight(b.String(), " "))
+	}
+}
