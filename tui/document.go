@@ -15,7 +15,7 @@ type document struct {
 	path string // "" until the wall has a file (the demo)
 
 	version int // of wall; a new number for every change
-	saved   int // version on disk; -1 when the wall has never been saved
+	saved   int // version last saved (or opened)
 	next    int
 
 	undo, redo []snapshot
@@ -27,11 +27,10 @@ type snapshot struct {
 }
 
 func newDocument(w *geometry.Wall, path string, onDisk bool) *document {
-	d := &document{wall: w, path: path, saved: -1, next: 1}
-	if onDisk {
-		d.saved = 0
-	}
-	return d
+	// A wall opened from its file, and the demo, start clean: quitting
+	// without a change asks nothing.
+	_ = onDisk
+	return &document{wall: w, path: path, next: 1}
 }
 
 // dirty reports whether the wall differs from the file on disk.

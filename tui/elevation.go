@@ -1,0 +1,606 @@
+package tui
+
+import (
+	"errors"
+	"fmt"
+	"path/filepath"
+	"strconv"
+	"strings"
+	"time"
+
+	"github.com/charmbracelet/bubbles/help"
+	"github.com/charmbracelet/bubbles/key"
+	tea "github.com/charmbracelet/bubbletea"
+
+	"pierwise/geometry"
+	"pierwise/pier"
+	"pierwise/pier/fe"
+)
+
+// elevation is the main screen: the wall drawn to scale with its piers'
+// shares, the results panel and the pier table. Every edit re-solves the
+// classic method at once; the FE check follows in the background.
+type elevation struct {
+	c    *common
+	keys KeyMap
+	help help.Model
+
+	width, height int
+	mode          elevationMode
+	form          *form
+
+	sel  int // selected opening of the active layout, -1 for none
+	step int // index into steps()
+
+	res      *pier.Result
+	solveErr error
+	version  int // document version res belongs to
+
+	msg    string
+	msgBad bool
+
+	fe feState
+
+	confirm confirmKeys
+}
+
+type elevationMode int
+
+const (
+	modeNormal elevationMode = iota
+	modeHelp
+	modeForm
+	modeConfirmQuit
+)
+
+// feState is the finite-element check: on or off, and its latest answer.
+// id grows with every edit; answers tagged with an older id are dropped.
+type feState struct {
+	on      bool
+	id      int
+	running bool
+	res     *fe.Result
+	err     error
+}
+
+// feDelay lets a burst of key presses settle before the FE check starts.
+const feDelay = 250 * time.Millisecond
+
+type (
+	feStartMsg struct{ id int }
+	feDoneMsg  struct {
+		id  int
+		res *fe.Result
+		err error
+	}
+)
+
+type confirmKeys struct {
+	SaveQuit, Quit, Stay key.Binding
+}
+
+func newElevation(c *common) *elevation {
+	e := &elevation{c: c, keys: newKeyMap(), help: help.New(), sel: -1}
+	e.help.ShortSeparator = "  "
+	e.confirm = confirmKeys{
+		SaveQuit: key.NewBinding(key.WithKeys("s"), key.WithHelp("s", "save and quit")),
+		Quit:     key.NewBinding(key.WithKeys("y"), key.WithHelp("y", "quit without saving")),
+		Stay:     key.NewBinding(key.WithKeys("n", "esc"), key.WithHelp("n", "stay")),
+	}
+	e.fe.on = true
+	e.step = defaultStep(c.doc.wall.Units)
+	if len(c.doc.wall.Openings()) > 0 {
+		e.sel = 0
+	}
+	e.resolve()
+	return e
+}
+
+func (e *elevation) init() tea.Cmd { return e.scheduleFE() }
+
+func (e *elevation) setSize(w, h int) {
+	e.width, e.height = w, h
+	e.help.Width = w
+	if e.form != nil {
+		e.form.setWidth(w)
+	}
+}
+
+// steps are the move and resize steps of the wall's unit system: the US list
+// includes the 8 in module of concrete masonry units.
+func steps(sys geometry.System) []geometry.Length {
+	if sys == geometry.SI {
+		return []geometry.Length{10 * geometry.Millimetre, 100 * geometry.Millimetre, 200 * geometry.Millimetre}
+	}
+	return []geometry.Length{geometry.Inch, 4 * geometry.Inch, 8 * geometry.Inch, geometry.Foot}
+}
+
+func defaultStep(sys geometry.System) int {
+	if sys == geometry.SI {
+		return 1 // 100 mm
+	}
+	return 3 // 1 ft
+}
+
+func (e *elevation) stepLength() geometry.Length {
+	s := steps(e.wall().Units)
+	return s[min(e.step, len(s)-1)]
+}
+
+func (e *elevation) wall() *geometry.Wall { return e.c.doc.wall }
+
+// resolve re-solves the classic method for the document's wall and clamps
+// the selection. It is the only place the editor asks pier for answers.
+func (e *elevation) resolve() {
+	w := e.wall()
+	e.res, e.solveErr = solveWall(w)
+	e.version = e.c.doc.version
+	n := len(w.Openings())
+	if e.sel >= n {
+		e.sel = n - 1
+	}
+	if e.sel < 0 && n > 0 {
+		e.sel = 0
+	}
+	e.fe.id++
+	e.fe.res, e.fe.err, e.fe.running = nil, nil, false
+}
+
+// scheduleFE starts the FE check after feDelay unless another edit comes.
+func (e *elevation) scheduleFE() tea.Cmd {
+	if !e.fe.on {
+		return nil
+	}
+	id := e.fe.id
+	e.fe.running = true
+	return tea.Tick(feDelay, func(time.Time) tea.Msg { return feStartMsg{id} })
+}
+
+// runFE solves the FE model in the background on the wall and classic
+// result of this moment (both are never mutated: edits replace them).
+func runFE(id int, w *geometry.Wall, classic *pier.Result) tea.Cmd {
+	return func() tea.Msg {
+		r, err := fe.Solve(w, classic, fe.Options{Mesh: w.Check.Mesh, Element: w.Check.Element})
+		return feDoneMsg{id: id, res: r, err: err}
+	}
+}
+
+func (e *elevation) say(format string, a ...any) {
+	e.msg, e.msgBad = fmt.Sprintf(format, a...), false
+}
+
+func (e *elevation) refuse(format string, a ...any) {
+	e.msg, e.msgBad = fmt.Sprintf(format, a...), true
+}
+
+func (e *elevation) update(msg tea.Msg) (screen, tea.Cmd) {
+	switch msg := msg.(type) {
+	case feStartMsg:
+		if msg.id != e.fe.id || !e.fe.on {
+			return e, nil
+		}
+		return e, runFE(msg.id, e.wall(), e.res)
+	case feDoneMsg:
+		if msg.id != e.fe.id {
+			return e, nil // an answer for a wall that has changed since
+		}
+		e.fe.res, e.fe.err, e.fe.running = msg.res, msg.err, false
+		return e, nil
+	case resumeMsg:
+		if e.version != e.c.doc.version {
+			e.resolve()
+			return e, e.scheduleFE()
+		}
+		return e, nil
+	case quitRequestMsg:
+		e.mode = modeConfirmQuit
+		return e, nil
+	case tea.MouseMsg:
+		if e.mode == modeNormal {
+			return e, e.mouse(msg)
+		}
+		return e, nil
+	case tea.KeyMsg:
+		switch e.mode {
+		case modeHelp:
+			if key.Matches(msg, e.keys.Help, e.c.keys.Back, e.keys.Quit) {
+				e.mode = modeNormal
+			}
+			return e, nil
+		case modeForm:
+			done, cmd := e.form.update(msg)
+			if done {
+				e.mode, e.form = modeNormal, nil
+				return e, tea.Batch(cmd, e.afterEdit())
+			}
+			return e, cmd
+		case modeConfirmQuit:
+			return e, e.confirmQuit(msg)
+		}
+		return e, e.key(msg)
+	}
+	if e.mode == modeForm {
+		_, cmd := e.form.update(msg)
+		return e, cmd
+	}
+	return e, nil
+}
+
+// afterEdit re-solves when the document changed (by an edit, undo or redo).
+func (e *elevation) afterEdit() tea.Cmd {
+	if e.version == e.c.doc.version {
+		return nil
+	}
+	e.resolve()
+	return e.scheduleFE()
+}
+
+func (e *elevation) confirmQuit(msg tea.KeyMsg) tea.Cmd {
+	switch {
+	case key.Matches(msg, e.confirm.SaveQuit):
+		if e.c.doc.path == "" {
+			e.mode = modeNormal
+			e.openSaveAs(true)
+			return nil
+		}
+		if err := e.c.doc.save(""); err != nil {
+			e.mode = modeNormal
+			e.refuse("not saved: %v", err)
+			return nil
+		}
+		return tea.Quit
+	case key.Matches(msg, e.confirm.Quit):
+		return tea.Quit
+	case key.Matches(msg, e.confirm.Stay):
+		e.mode = modeNormal
+		e.msg = ""
+	}
+	return nil
+}
+
+// key handles a key press in the normal mode.
+func (e *elevation) key(msg tea.KeyMsg) tea.Cmd {
+	k := e.keys
+	e.msg = ""
+	d := e.stepLength()
+	switch {
+	case key.Matches(msg, k.Quit):
+		if !e.c.doc.dirty() {
+			return tea.Quit
+		}
+		e.mode = modeConfirmQuit
+	case key.Matches(msg, k.Help):
+		e.mode = modeHelp
+	case key.Matches(msg, k.Next):
+		e.selectBy(1)
+	case key.Matches(msg, k.Prev):
+		e.selectBy(-1)
+	case key.Matches(msg, k.Left):
+		e.reshape("move", func(o *geometry.Opening) { o.X -= d })
+	case key.Matches(msg, k.Right):
+		e.reshape("move", func(o *geometry.Opening) { o.X += d })
+	case key.Matches(msg, k.Up):
+		e.reshape("move", func(o *geometry.Opening) { o.Sill += d })
+	case key.Matches(msg, k.Down):
+		e.reshape("move", func(o *geometry.Opening) { o.Sill -= d })
+	case key.Matches(msg, k.Narrower):
+		e.reshape("narrow", func(o *geometry.Opening) { o.Width -= d })
+	case key.Matches(msg, k.Wider):
+		e.reshape("widen", func(o *geometry.Opening) { o.Width += d })
+	case key.Matches(msg, k.Taller):
+		e.reshape("heighten", func(o *geometry.Opening) { o.Height += d })
+	case key.Matches(msg, k.Shorter):
+		e.reshape("shorten", func(o *geometry.Opening) { o.Height -= d })
+	case key.Matches(msg, k.Step):
+		e.step = (e.step + 1) % len(steps(e.wall().Units))
+		e.say("step %s", geometry.FormatLength(e.stepLength(), e.wall().Units))
+	case key.Matches(msg, k.AddDoor):
+		e.add(true)
+	case key.Matches(msg, k.AddWindow):
+		e.add(false)
+	case key.Matches(msg, k.Copy):
+		e.duplicate()
+	case key.Matches(msg, k.Delete):
+		e.deleteOpening()
+	case key.Matches(msg, k.EditOpening):
+		e.openOpeningForm()
+	case key.Matches(msg, k.EditWall):
+		e.openWallForm()
+	case key.Matches(msg, k.Undo):
+		if !e.c.doc.undoChange() {
+			e.refuse("nothing to undo")
+		} else {
+			e.say("undone")
+		}
+	case key.Matches(msg, k.Redo):
+		if !e.c.doc.redoChange() {
+			e.refuse("nothing to redo")
+		} else {
+			e.say("redone")
+		}
+	case key.Matches(msg, k.Save):
+		if e.c.doc.path == "" {
+			e.openSaveAs(false)
+		} else if err := e.c.doc.save(""); err != nil {
+			e.refuse("not saved: %v", err)
+		} else {
+			e.say("saved %s", e.c.doc.path)
+		}
+	case key.Matches(msg, k.SaveAs):
+		e.openSaveAs(false)
+	case key.Matches(msg, k.NextLayout):
+		e.switchLayout(1)
+	case key.Matches(msg, k.PrevLayout):
+		e.switchLayout(-1)
+	case key.Matches(msg, k.NewLayout):
+		e.newLayout()
+	case key.Matches(msg, k.RenameLayout):
+		e.openRenameForm()
+	case key.Matches(msg, k.DelLayout):
+		e.deleteLayout()
+	case key.Matches(msg, k.FE):
+		e.fe.on = !e.fe.on
+		e.fe.id++
+		e.fe.res, e.fe.err, e.fe.running = nil, nil, false
+		if e.fe.on {
+			e.say("finite-element check on")
+			return e.scheduleFE()
+		}
+		e.say("finite-element check off")
+	case key.Matches(msg, k.Snapshot):
+		e.snapshot()
+	default:
+		for _, s := range screenEntries {
+			if key.Matches(msg, s.key) {
+				next, cmd := s.open(e.c)
+				if next == nil {
+					return cmd
+				}
+				return tea.Batch(pushScreen(next), cmd)
+			}
+		}
+	}
+	return e.afterEdit()
+}
+
+func (e *elevation) selectBy(d int) {
+	n := len(e.wall().Openings())
+	if n == 0 {
+		e.refuse("no openings: d adds a door, w a window")
+		return
+	}
+	e.sel = ((e.sel+d)%n + n) % n
+}
+
+// reshape applies f to the selected opening when the result is a valid
+// opening of the wall, and says why not otherwise.
+func (e *elevation) reshape(verb string, f func(o *geometry.Opening)) {
+	w := e.wall()
+	if e.sel < 0 || e.sel >= len(w.Openings()) {
+		e.refuse("no opening selected: d adds a door, w a window")
+		return
+	}
+	o := w.Openings()[e.sel]
+	f(&o)
+	err := e.c.doc.change(func(w *geometry.Wall) error {
+		if err := checkOpening(w, e.sel, o); err != nil {
+			return err
+		}
+		w.Layouts[w.Active].Openings[e.sel] = o
+		return nil
+	})
+	if err != nil {
+		e.refuse("can't %s %s: %s", verb, o.Name, shortReason(err))
+	}
+}
+
+// shortReason turns a validation error into a few words for the status line.
+func shortReason(err error) string {
+	s := err.Error()
+	if i := strings.LastIndex(s, ": "); i >= 0 && i+2 < len(s) {
+		s = s[i+2:]
+	}
+	return s
+}
+
+// newOpening is a door or window of a common size for the wall's units,
+// shrunk to fit a small wall.
+func newOpening(w *geometry.Wall, door bool) geometry.Opening {
+	ft := geometry.Foot
+	var o geometry.Opening
+	switch {
+	case door && w.Units == geometry.SI:
+		o = geometry.Opening{Width: 0.9, Height: 2.1}
+	case door:
+		o = geometry.Opening{Width: 3 * ft, Height: 7 * ft}
+	case w.Units == geometry.SI:
+		o = geometry.Opening{Sill: 0.9, Width: 1.2, Height: 1.2}
+	default:
+		o = geometry.Opening{Sill: 3 * ft, Width: 4 * ft, Height: 4 * ft}
+	}
+	if top := 0.8 * w.Height; o.Sill+o.Height > top {
+		o.Height = top - o.Sill
+		if o.Height <= 0 {
+			o.Sill, o.Height = 0.2*w.Height, 0.4*w.Height
+		}
+	}
+	o.Width = min(o.Width, 0.3*w.Length)
+	o.X = 0.05 * w.Length
+	o.Name = nextName(w, door)
+	return o
+}
+
+// nextName is the first unused D<n> or W<n> of the active layout.
+func nextName(w *geometry.Wall, door bool) string {
+	p := "W"
+	if door {
+		p = "D"
+	}
+	used := map[string]bool{}
+	for _, o := range w.Openings() {
+		used[o.Name] = true
+	}
+	for i := 1; ; i++ {
+		if n := p + strconv.Itoa(i); !used[n] {
+			return n
+		}
+	}
+}
+
+func (e *elevation) add(door bool) {
+	w := e.wall()
+	o, ok := freeSpot(w, newOpening(w, door))
+	if !ok {
+		e.refuse("no free place for a %s: make room or edit its size (e)", kindName(door))
+		return
+	}
+	e.insert(o)
+}
+
+func (e *elevation) insert(o geometry.Opening) {
+	err := e.c.doc.change(func(w *geometry.Wall) error {
+		if err := checkOpening(w, -1, o); err != nil {
+			return err
+		}
+		w.Layouts[w.Active].Openings = append(w.Layouts[w.Active].Openings, o)
+		return nil
+	})
+	if err != nil {
+		e.refuse("can't add %s: %s", o.Name, shortReason(err))
+		return
+	}
+	e.sel = len(e.wall().Openings()) - 1
+	e.say("added %s %s", kindName(o.IsDoor()), o.Name)
+}
+
+func kindName(door bool) string {
+	if door {
+		return "door"
+	}
+	return "window"
+}
+
+func (e *elevation) duplicate() {
+	w := e.wall()
+	if e.sel < 0 || e.sel >= len(w.Openings()) {
+		e.refuse("no opening selected")
+		return
+	}
+	o := w.Openings()[e.sel]
+	o.Name = nextName(w, o.IsDoor())
+	o.X += o.Width
+	o, ok := freeSpot(w, o)
+	if !ok {
+		e.refuse("no free place for a copy of %s", w.Openings()[e.sel].Name)
+		return
+	}
+	e.insert(o)
+}
+
+func (e *elevation) deleteOpening() {
+	w := e.wall()
+	if e.sel < 0 || e.sel >= len(w.Openings()) {
+		e.refuse("no opening selected")
+		return
+	}
+	i := e.sel
+	name := w.Openings()[i].Name
+	_ = e.c.doc.change(func(w *geometry.Wall) error {
+		l := &w.Layouts[w.Active]
+		l.Openings = append(l.Openings[:i], l.Openings[i+1:]...)
+		return nil
+	})
+	if i > 0 {
+		e.sel = i - 1
+	}
+	e.say("deleted %s (u undoes)", name)
+}
+
+func (e *elevation) switchLayout(d int) {
+	w := e.wall()
+	n := len(w.Layouts)
+	if n < 2 {
+		e.refuse("only one layout: n makes a copy of it")
+		return
+	}
+	next := ((w.Active+d)%n + n) % n
+	_ = e.c.doc.change(func(w *geometry.Wall) error { w.Active = next; return nil })
+	e.sel = 0
+	e.say("layout %q", e.wall().Layouts[next].Name)
+}
+
+func (e *elevation) newLayout() {
+	w := e.wall()
+	name := uniqueLayoutName(w, w.Layouts[w.Active].Name+" copy")
+	_ = e.c.doc.change(func(w *geometry.Wall) error {
+		cur := w.Layouts[w.Active]
+		w.Layouts = append(w.Layouts, geometry.Layout{Name: name, Openings: append([]geometry.Opening(nil), cur.Openings...)})
+		w.Active = len(w.Layouts) - 1
+		return nil
+	})
+	e.say("new layout %q (r renames it)", name)
+}
+
+func uniqueLayoutName(w *geometry.Wall, base string) string {
+	used := map[string]bool{}
+	for _, l := range w.Layouts {
+		used[l.Name] = true
+	}
+	name := base
+	for i := 2; used[name]; i++ {
+		name = base + " " + strconv.Itoa(i)
+	}
+	return name
+}
+
+func (e *elevation) deleteLayout() {
+	w := e.wall()
+	if len(w.Layouts) < 2 {
+		e.refuse("can't delete the only layout")
+		return
+	}
+	name := w.Layouts[w.Active].Name
+	_ = e.c.doc.change(func(w *geometry.Wall) error {
+		i := w.Active
+		w.Layouts = append(w.Layouts[:i], w.Layouts[i+1:]...)
+		w.Active = max(0, i-1)
+		return nil
+	})
+	e.sel = 0
+	e.say("deleted layout %q (u undoes)", name)
+}
+
+// snapshot writes the text report of the current layout next to the wall
+// file.
+func (e *elevation) snapshot() {
+	path := e.c.doc.path
+	if path == "" {
+		path = "demo.toml"
+	}
+	out := strings.TrimSuffix(path, filepath.Ext(path)) + ".report.txt"
+	var feRes *fe.Result
+	if e.fe.on && !e.fe.running {
+		feRes = e.fe.res
+	}
+	if err := writeReport(out, path, e.wall(), e.res, e.solveErr, feRes, e.c.now()); err != nil {
+		e.refuse("no report: %v", err)
+		return
+	}
+	e.say("report written to %s", out)
+}
+
+func (e *elevation) mouse(msg tea.MouseMsg) tea.Cmd {
+	if msg.Action != tea.MouseActionPress || msg.Button != tea.MouseButtonLeft {
+		return nil
+	}
+	l := e.layout()
+	g := e.grid(l)
+	cell := g.At(msg.X-l.elevX, msg.Y-l.elevY)
+	if cell.Opening >= 0 {
+		e.sel = cell.Opening
+		e.msg = ""
+	}
+	return nil
+}
+
+var errNoName = errors.New("a name is required")

@@ -1,0 +1,563 @@
+package tui
+
+import (
+	"fmt"
+	"math"
+	"path/filepath"
+	"strconv"
+	"strings"
+
+	"github.com/charmbracelet/bubbles/key"
+	"github.com/charmbracelet/lipgloss"
+
+	"pierwise/geometry"
+	"pierwise/pier/fe"
+	"pierwise/report"
+	"pierwise/sketch"
+)
+
+// elevLayout places the parts of the elevation screen; the view and the
+// mouse both use it.
+type elevLayout struct {
+	bodyY, bodyH int // below the title bar, above the status and hint lines
+	topH         int // elevation and results panel
+	areaW        int // the elevation's share of the width
+	sumX, sumW   int // the results panel
+	elevX, elevY int // top-left cell of the sketch
+	elevW, elevH int // the box the sketch is fitted in
+	tableY       int
+	tableH       int
+}
+
+func (e *elevation) layout() elevLayout {
+	var l elevLayout
+	l.bodyY, l.bodyH = 1, max(0, e.height-3)
+	l.sumW = 34
+	if e.width >= 120 {
+		l.sumW = 42
+	}
+	l.areaW = e.width - l.sumW - 1
+	l.sumX = l.areaW + 1
+	rows := 0
+	if e.res != nil {
+		rows = len(e.res.Piers)
+	}
+	want := 2 + rows // header, rows, a blank line above
+	l.topH = max(12, l.bodyH-want)
+	l.topH = min(l.topH, l.bodyH)
+	l.tableY = l.bodyY + l.topH + 1
+	l.tableH = max(0, l.bodyH-l.topH-1)
+	hLabel := geometry.FormatLength(e.wall().Height, e.wall().Units)
+	l.elevX, l.elevY = 1, l.bodyY
+	l.elevW = max(3, l.areaW-l.elevX-(4+len(hLabel)))
+	l.elevH = max(3, l.topH-2)
+	return l
+}
+
+func (e *elevation) grid(l elevLayout) *sketch.Grid {
+	return sketch.Elevation(e.wall(), e.res, l.elevW, l.elevH)
+}
+
+func (e *elevation) view() string {
+	st := e.c.styles
+	l := e.layout()
+	var body string
+	switch e.mode {
+	case modeHelp:
+		body = e.helpView(l)
+	case modeForm:
+		body = e.form.view(st, e.width, l.bodyH)
+	default:
+		top := lipgloss.JoinHorizontal(lipgloss.Top,
+			fit(e.elevationView(l), l.areaW, l.topH), " ", fit(e.summaryView(l), l.sumW, l.topH))
+		body = top
+		if l.tableH > 0 {
+			body += "\n\n" + fit(e.tableView(l), e.width, l.tableH)
+		}
+	}
+	parts := []string{
+		fit(e.titleView(), e.width, 1),
+		fit(body, e.width, l.bodyH),
+		fit(e.statusView(), e.width, 1),
+		fit(e.hintView(), e.width, 1),
+	}
+	return strings.Join(parts, "\n")
+}
+
+func (e *elevation) titleView() string {
+	w := e.wall()
+	d := e.c.doc
+	file := "demo, not saved"
+	if d.path != "" {
+		file = filepath.Base(d.path)
+	}
+	if d.dirty() {
+		file += " [modified]"
+	}
+	title := w.Title
+	if title == "" {
+		title = "untitled wall"
+	}
+	lay := fmt.Sprintf("layout %d/%d %q", w.Active+1, len(w.Layouts), w.Layouts[w.Active].Name)
+	step := "step " + geometry.FormatLength(e.stepLength(), w.Units)
+	s := " " + file + " | " + lay + " | " + step + " | " + title + " | pierwise "
+	return e.c.styles.title.Render(padRight(truncate(s, e.width), e.width))
+}
+
+// paint is a style split into the escape codes before and after its text,
+// so the elevation can be drawn cell by cell without rendering each one.
+type paint struct{ pre, post string }
+
+func paintOf(s lipgloss.Style) paint {
+	r := s.Render("\x01")
+	i := strings.IndexByte(r, '\x01')
+	if i < 0 {
+		return paint{}
+	}
+	return paint{r[:i], r[i+1:]}
+}
+
+// elevationView draws the sketch with tints, the selection and the scales.
+func (e *elevation) elevationView(l elevLayout) string {
+	st := e.c.styles
+	g := e.grid(l)
+	plain := paint{}
+	wallP := paintOf(st.wall)
+	openP := paintOf(st.opening)
+	openLabelP := paintOf(st.opening.Bold(true))
+	selP := paintOf(st.selected)
+	boldP := paintOf(st.key)
+	var tintP, tintLabelP [5]paint
+	for i := range st.tint {
+		tintP[i] = paintOf(st.tint[i])
+		tintLabelP[i] = paintOf(st.tint[i].Bold(true))
+	}
+	level := func(p int) int {
+		if e.res == nil || p < 0 || p >= len(e.res.Piers) {
+			return 0
+		}
+		return tintLevel(e.res.Piers[p].Share)
+	}
+
+	var b strings.Builder
+	margin := strings.Repeat(" ", l.elevX)
+	hLabel := geometry.FormatLength(e.wall().Height, e.wall().Units)
+	for r := 0; r < g.Rows; r++ {
+		b.WriteString(margin)
+		cur := paint{}
+		for c := 0; c < g.Cols; c++ {
+			cell := g.Cells[r][c]
+			ch := cell.Ch
+			p := plain
+			switch cell.Kind {
+			case sketch.WallEdge:
+				p = wallP
+			case sketch.OpeningEdge, sketch.OpeningSpace:
+				p = openP
+				if cell.Opening == e.sel {
+					// Doubled lines mark the selection without colour too.
+					p = selP
+					switch ch {
+					case '-':
+						ch = '='
+					case '|':
+						ch = '#'
+					}
+				}
+			case sketch.OpeningLabel:
+				p = openLabelP
+				if cell.Opening == e.sel {
+					p = selP
+				}
+			case sketch.PierFill:
+				if st.mono {
+					ch = tintTexture[level(cell.Pier)]
+				} else {
+					p = tintP[level(cell.Pier)]
+				}
+			case sketch.PierLabel:
+				if st.mono {
+					p = boldP
+				} else {
+					p = tintLabelP[level(cell.Pier)]
+				}
+			}
+			if p != cur {
+				b.WriteString(cur.post)
+				b.WriteString(p.pre)
+				cur = p
+			}
+			b.WriteRune(ch)
+		}
+		b.WriteString(cur.post)
+		// The height scale on the right.
+		switch {
+		case r == 0 || r == g.Rows-1:
+			b.WriteString(" -+")
+		case r == g.Rows/2:
+			b.WriteString("  | " + hLabel)
+		default:
+			b.WriteString("  |")
+		}
+		b.WriteByte('\n')
+	}
+	// The length scale, then the selected opening's offset and width.
+	w := e.wall()
+	b.WriteString(margin + dimension(g.Cols, geometry.FormatLength(w.Length, w.Units)) + "\n")
+	if e.sel >= 0 && e.sel < len(w.Openings()) {
+		o := w.Openings()[e.sel]
+		c0, c1 := g.Col(float64(o.X)), g.Col(float64(o.X+o.Width))
+		line := ""
+		if c0 > 0 {
+			line = dimension(c0+1, geometry.FormatLength(o.X, w.Units))
+			line = line[:len(line)-1]
+		}
+		line += dimension(c1-c0+1, geometry.FormatLength(o.Width, w.Units))
+		b.WriteString(margin + line)
+	}
+	return b.String()
+}
+
+// dimension draws a dimension line n cells long, |--- label ---|, leaving
+// the label out when it does not fit.
+func dimension(n int, label string) string {
+	switch {
+	case n <= 0:
+		return ""
+	case n == 1:
+		return "|"
+	case n < len(label)+4:
+		return "|" + strings.Repeat("-", n-2) + "|"
+	}
+	rest := n - 2 - len(label) - 2
+	a := rest / 2
+	return "|" + strings.Repeat("-", a) + " " + label + " " + strings.Repeat("-", rest-a) + "|"
+}
+
+// summaryView is the results panel: the wall's numbers and the FE check.
+func (e *elevation) summaryView(l elevLayout) string {
+	st := e.c.styles
+	w := e.wall()
+	u := report.UnitsFor(w.Units)
+	var lines []string
+	kv := func(k, v string) { lines = append(lines, padRight(k, 12)+v) }
+	lines = append(lines, st.heading.Render("Results")+st.dim.Render(" (classic method)"))
+	if e.solveErr != nil {
+		lines = append(lines, st.errText.Render("No answer:"))
+		lines = append(lines, wrap(e.solveErr.Error(), l.sumW)...)
+	} else if r := e.res; r != nil {
+		if r.RigidityAbs > 0 {
+			kv("rigidity", num(u.RigidityOf(r.RigidityAbs))+" "+u.Rigidity)
+		} else {
+			kv("rigidity", st.dim.Render("needs E (E: wall)"))
+		}
+		kv("relative", num(r.Rigidity)+" x E t")
+		switch {
+		case !r.HasLoad:
+			kv("deflection", st.dim.Render("no shear given"))
+		case r.DeflectionAbs > 0:
+			kv("deflection", num(u.DeflectionOf(r.DeflectionAbs))+" "+u.Deflection)
+		default:
+			kv("deflection", st.dim.Render("needs E"))
+		}
+		if r.HasLoad && r.DeflectionAbs > 0 {
+			d := r.Drift
+			if d.Allowable > 0 {
+				verdict := st.pass.Render("PASS")
+				rel := "<="
+				if !d.OK {
+					verdict, rel = st.fail.Render("FAIL"), ">"
+				}
+				kv("drift", num3(u.DeflectionOf(d.Design))+" "+rel+" "+num3(u.DeflectionOf(d.Allowable))+" "+u.Deflection+" "+verdict)
+				kv("", st.dim.Render(fmt.Sprintf("Cd %s, limit %s h", input(max(w.Drift.Cd, 1)), input(w.Drift.Limit))))
+			} else {
+				kv("drift", num3(u.DeflectionOf(d.Design))+" "+u.Deflection+st.dim.Render(" (no limit)"))
+			}
+		}
+		if t := r.Split.Total(); t > 0 {
+			kv("bend/shear", fmt.Sprintf("%.0f%% / %.0f%%", 100*r.Split.Bending/t, 100*r.Split.Shear/t))
+		}
+		if r.Moduli.E > 0 {
+			kv("E, E_v", geometry.FormatStress(r.Moduli.E, w.Units)+", "+geometry.FormatStress(r.Moduli.Ev, w.Units))
+		}
+		if w.Load.Shear > 0 {
+			kv("shear V", geometry.FormatForce(w.Load.Shear, w.Units))
+		}
+	}
+	lines = append(lines, "")
+	lines = append(lines, e.feLines(l)...)
+	// Warnings last: on a small screen they are what gets cut (the report
+	// has them all).
+	if e.res != nil {
+		for _, warn := range e.res.Warnings {
+			lines = append(lines, "")
+			lines = append(lines, wrap("! "+warn, l.sumW)...)
+		}
+	}
+	return strings.Join(lines, "\n")
+}
+
+// feLines is the FE check's part of the results panel.
+func (e *elevation) feLines(l elevLayout) []string {
+	st := e.c.styles
+	head := st.heading.Render("FE check") + st.dim.Render(" (plane stress)")
+	f := e.fe
+	switch {
+	case !f.on:
+		return []string{head, st.dim.Render("off: f turns it on")}
+	case f.err != nil:
+		return append([]string{head, st.errText.Render("No answer:")}, wrap(f.err.Error(), l.sumW)...)
+	case f.res == nil:
+		return []string{head, st.dim.Render("solving...")}
+	}
+	r := f.res
+	lines := []string{head}
+	kv := func(k, v string) { lines = append(lines, padRight(k, 12)+v) }
+	kv("relative", num(r.Rigidity)+" x E t")
+	if e.res != nil && r.Rigidity > 0 {
+		d := r.Difference
+		word := "stiffer"
+		if d < 0 {
+			word = "softer"
+		}
+		text := fmt.Sprintf("%+.1f%% %s", 100*d, word)
+		if math.Abs(d) > fe.WarnDifference {
+			text = st.fail.Render(text + " !")
+		}
+		kv("classic is", text)
+	}
+	kv("mesh", fmt.Sprintf("%s %s, %d el.", geometry.FormatLength(r.Mesh, e.wall().Units), r.Element, r.Elements))
+	return lines
+}
+
+// tableView is the pier table: every pier when there is room, else the
+// leaf piers (the ones that carry forces).
+func (e *elevation) tableView(l elevLayout) string {
+	st := e.c.styles
+	r := e.res
+	if r == nil {
+		return strings.Join(wrap("No pier table: the classic method has no answer for this layout (see Results). The FE check still runs.", e.width), "\n")
+	}
+	w := e.wall()
+	u := report.UnitsFor(w.Units)
+	fl := func(x float64) string { return geometry.FormatLength(geometry.Length(x), w.Units) }
+	piers := r.Piers
+	if len(piers)+1 > l.tableH {
+		piers = r.Leaves()
+	}
+	head := []string{"pier", "h", "L", "h/L", "support", "share", "V " + u.Force, "M " + u.Moment, "bend/shear"}
+	left := []bool{true, false, false, false, true, true, false, false, false}
+	rows := [][]string{}
+	for _, p := range piers {
+		name := p.Name
+		if len(piers) == len(r.Piers) {
+			name = strings.Repeat(" ", strings.Count(p.Name, ".")) + name
+		}
+		sup := "cantilever"
+		if p.Support == geometry.Fixed {
+			sup = "fixed"
+		}
+		v, m, split := "", "", ""
+		if p.Leaf {
+			if r.HasLoad {
+				v, m = num(u.ForceOf(p.Shear)), num(u.MomentOf(p.Moment))
+			}
+			if t := p.Parts.Total(); t > 0 {
+				split = fmt.Sprintf("%.0f/%.0f", 100*p.Parts.Bending/t, 100*p.Parts.Shear/t)
+			}
+		}
+		rows = append(rows, []string{name, fl(p.H()), fl(p.L()), fmt.Sprintf("%.2f", p.Ratio()), sup, "", v, m, split})
+	}
+	widths := make([]int, len(head))
+	total := 0
+	for i := range head {
+		widths[i] = lipgloss.Width(head[i])
+		for _, row := range rows {
+			widths[i] = max(widths[i], lipgloss.Width(row[i]))
+		}
+		if i != 5 {
+			total += widths[i] + 2
+		}
+	}
+	barW := max(4, min(30, e.width-total-5-1))
+	widths[5] = 5 + barW
+	for k, p := range piers {
+		n := int(math.Round(p.Share * float64(barW)))
+		rows[k][5] = fmt.Sprintf("%3.0f%% ", 100*p.Share) + strings.Repeat("#", n) + strings.Repeat(".", barW-n)
+	}
+	line := func(cells []string) string {
+		var b strings.Builder
+		for i, c := range cells {
+			if i > 0 {
+				b.WriteString("  ")
+			}
+			if left[i] {
+				b.WriteString(padRight(c, widths[i]))
+			} else {
+				b.WriteString(padLeft(c, widths[i]))
+			}
+		}
+		return strings.TrimRight(b.String(), " ")
+	}
+	lines := []string{st.heading.Render(line(head))}
+	room := l.tableH - 1
+	for k, p := range piers {
+		if len(lines) >= room && k < len(piers)-1 {
+			lines = append(lines, st.dim.Render(fmt.Sprintf("... %d more piers (p writes the full report)", len(piers)-k)))
+			break
+		}
+		text := line(rows[k])
+		if !p.Leaf {
+			text = st.dim.Render(text)
+		}
+		lines = append(lines, text)
+	}
+	return strings.Join(lines, "\n")
+}
+
+func (e *elevation) statusView() string {
+	st := e.c.styles
+	if e.mode == modeConfirmQuit {
+		return st.errText.Render("Unsaved changes.") + " " + keyHint(st, e.confirm.SaveQuit, e.confirm.Quit, e.confirm.Stay)
+	}
+	if e.msg != "" {
+		if e.msgBad {
+			return st.errText.Render("! " + e.msg)
+		}
+		return st.note.Render(e.msg)
+	}
+	w := e.wall()
+	if e.sel < 0 || e.sel >= len(w.Openings()) {
+		return st.dim.Render("no openings: d adds a door, w a window")
+	}
+	o := w.Openings()[e.sel]
+	fl := func(l geometry.Length) string { return geometry.FormatLength(l, w.Units) }
+	return st.key.Render(o.Name) + fmt.Sprintf(" %s: x %s, sill %s, %s wide, %s high (%d of %d)",
+		kindName(o.IsDoor()), fl(o.X), fl(o.Sill), fl(o.Width), fl(o.Height), e.sel+1, len(w.Openings()))
+}
+
+func (e *elevation) hintView() string {
+	switch e.mode {
+	case modeForm:
+		return e.help.ShortHelpView(e.form.keys.ShortHelp())
+	case modeHelp:
+		return e.help.ShortHelpView([]key.Binding{e.keys.Help, e.c.keys.Back})
+	}
+	return e.help.ShortHelpView(e.keys.ShortHelp())
+}
+
+// keyHint renders bindings as "k action · k action".
+func keyHint(st *styles, bs ...key.Binding) string {
+	var parts []string
+	for _, b := range bs {
+		h := b.Help()
+		parts = append(parts, st.key.Render(h.Key)+" "+h.Desc)
+	}
+	return strings.Join(parts, "  ")
+}
+
+// helpView lists every key in as many columns as fit.
+func (e *elevation) helpView(l elevLayout) string {
+	st := e.c.styles
+	var items []key.Binding
+	for _, g := range e.keys.FullHelp() {
+		items = append(items, g...)
+	}
+	kw, dw := 0, 0
+	for _, b := range items {
+		kw = max(kw, lipgloss.Width(b.Help().Key))
+		dw = max(dw, lipgloss.Width(b.Help().Desc))
+	}
+	colW := kw + 1 + dw + 3
+	ncol := max(1, e.width/colW)
+	nrow := (len(items) + ncol - 1) / ncol
+	lines := []string{st.heading.Render("Keys") + st.dim.Render("  (? or esc closes)"), ""}
+	for r := 0; r < nrow; r++ {
+		var b strings.Builder
+		for c := 0; c < ncol; c++ {
+			i := c*nrow + r
+			if i >= len(items) {
+				break
+			}
+			h := items[i].Help()
+			b.WriteString(st.key.Render(padRight(h.Key, kw)) + " " + padRight(h.Desc, dw) + "   ")
+		}
+		lines = append(lines, b.String())
+	}
+	lines = append(lines, "",
+		"Elevation: piers are shaded by their share of the wall shear "+tintLegend(st)+".",
+		"The selected opening is shown in reverse video. Lengths in "+unitName(e.wall().Units)+".")
+	return strings.Join(lines, "\n")
+}
+
+func tintLegend(st *styles) string {
+	var parts []string
+	lo := 0.0
+	for i, b := range tintBounds {
+		label := fmt.Sprintf("%.0f-%.0f%%", 100*lo, math.Min(100, 100*b))
+		sample := st.tint[i].Render("  ")
+		if st.mono {
+			sample = strings.Repeat(string(tintTexture[i]), 2)
+		}
+		parts = append(parts, "["+sample+"] "+label)
+		lo = b
+	}
+	return "(" + strings.Join(parts, ", ") + ")"
+}
+
+func unitName(s geometry.System) string {
+	if s == geometry.SI {
+		return "metres"
+	}
+	return "feet and inches"
+}
+
+// num3 formats a result with three significant digits.
+func num3(v float64) string {
+	if v == 0 || math.IsNaN(v) || math.IsInf(v, 0) || math.Abs(v) >= 1000 {
+		return num(v)
+	}
+	d := 2 - int(math.Floor(math.Log10(math.Abs(v))))
+	return fmt.Sprintf("%.*f", max(0, d), v)
+}
+
+// input formats a value the user typed, as typed.
+func input(v float64) string { return strconv.FormatFloat(v, 'g', -1, 64) }
+
+// num formats a result with four significant digits.
+func num(v float64) string {
+	if v == 0 || math.IsNaN(v) || math.IsInf(v, 0) {
+		return fmt.Sprint(v)
+	}
+	a := math.Abs(v)
+	switch {
+	case a >= 10000:
+		return fmt.Sprintf("%.0f", v)
+	case a >= 0.001:
+		d := 3 - int(math.Floor(math.Log10(a)))
+		return fmt.Sprintf("%.*f", max(0, d), v)
+	}
+	return fmt.Sprintf("%.3g", v)
+}
+
+// wrap breaks s into lines of at most w cells at spaces.
+func wrap(s string, w int) []string {
+	var lines []string
+	var cur string
+	for _, word := range strings.Fields(s) {
+		switch {
+		case cur == "":
+			cur = word
+		case len(cur)+1+len(word) <= w:
+			cur += " " + word
+		default:
+			lines = append(lines, cur)
+			cur = word
+		}
+	}
+	if cur != "" {
+		lines = append(lines, cur)
+	}
+	return lines
+}
+

@@ -1,0 +1,83 @@
+package tui
+
+import (
+	"errors"
+	"fmt"
+	"io/fs"
+
+	tea "github.com/charmbracelet/bubbletea"
+
+	"pierwise/geometry"
+)
+
+// Options say what the editor opens.
+type Options struct {
+	Path    string // the wall's file; "" for a wall without one (the demo)
+	OnDisk  bool   // the wall is what the file holds (not modified yet)
+	Message string // shown in the status line at the start
+
+	Program []tea.ProgramOption // extra bubbletea options (tests: input, output)
+}
+
+// Edit runs the editor on w until the user quits.
+func Edit(w *geometry.Wall, opt Options) error {
+	m := newModel(w, opt)
+	opts := append([]tea.ProgramOption{tea.WithAltScreen(), tea.WithMouseCellMotion()}, opt.Program...)
+	_, err := tea.NewProgram(m, opts...).Run()
+	return err
+}
+
+// newModel builds the root model with the elevation screen on w.
+func newModel(w *geometry.Wall, opt Options) *root {
+	c := newCommon(newDocument(w, opt.Path, opt.OnDisk), nil)
+	e := newElevation(c)
+	if opt.Message != "" {
+		e.say("%s", opt.Message)
+	}
+	return newRoot(c, e)
+}
+
+// EditFile opens the wall file at path in the editor; a missing file is
+// created first with NewWall.
+func EditFile(path string, opts ...tea.ProgramOption) error {
+	w, err := loadWall(path)
+	msg := ""
+	switch {
+	case errors.Is(err, fs.ErrNotExist):
+		w = NewWall(geometry.US)
+		if err := saveWall(path, w); err != nil {
+			return err
+		}
+		msg = fmt.Sprintf("created %s with a plain wall: w adds a window, d a door, E edits the wall", path)
+	case err != nil:
+		return err
+	}
+	return Edit(w, Options{Path: path, OnDisk: true, Message: msg, Program: opts})
+}
+
+// NewWall is the wall a new file starts with: a plain 24 ft × 12 ft
+// (7.2 m × 3.6 m) cantilever of 8 in (200 mm) concrete masonry, f'm
+// 2000 psi (13.8 MPa), no openings and no load, drift limit of masonry
+// cantilever shear walls.
+func NewWall(sys geometry.System) *geometry.Wall {
+	w := &geometry.Wall{
+		Title:     "New wall",
+		Units:     sys,
+		Length:    24 * geometry.Foot,
+		Height:    12 * geometry.Foot,
+		Thickness: 7.625 * geometry.Inch,
+		Support:   geometry.Cantilever,
+		Material:  geometry.Material{Kind: geometry.ConcreteMasonry, Strength: 2000 * geometry.PSI},
+		Stiffness: geometry.Stiffness{Flexure: 1, Shear: 1},
+		Drift:     geometry.Drift{Cd: 1, Ie: 1},
+		Layouts:   []geometry.Layout{{Name: "main"}},
+	}
+	if sys == geometry.SI {
+		w.Length, w.Height, w.Thickness = 7.2, 3.6, 190*geometry.Millimetre
+		w.Material.Strength = 13.8 * geometry.Megapascal
+	}
+	if p, ok := geometry.FindDriftPreset("masonry-cantilever"); ok {
+		w.Drift.Preset, w.Drift.Limit = p.Name, p.Limit
+	}
+	return w
+}
