@@ -560,4 +560,3 @@ func wrap(s string, w int) []string {
 	}
 	return lines
 }
-
