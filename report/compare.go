@@ -158,6 +158,7 @@ func cmpClip(s string, n int) string {
 
 // CompareRow is one line of the differences table, already formatted.
 type CompareRow struct {
+	Key                             string // what the row is, for views that pick rows: "layout", "openings", "length", "height", "thickness", "rigidity_relative", "rigidity", "deflection_relative", "deflection", "drift", "drift_check"
 	Quantity, Before, After, Change string
 }
 
@@ -169,18 +170,18 @@ func CompareRows(c *study.Comparison) []CompareRow {
 	sys := b.Wall.Units
 	u := UnitsFor(sys)
 	var rows []CompareRow
-	add := func(q, vb, va, ch string) { rows = append(rows, CompareRow{q, vb, va, ch}) }
+	add := func(k, q, vb, va, ch string) { rows = append(rows, CompareRow{k, q, vb, va, ch}) }
 
-	rows = append(rows, CompareRow{"Layout", b.Layout(), a.Layout(), ""})
-	lengthRow := func(q string, lb, la geometry.Length) {
+	add("layout", "Layout", b.Layout(), a.Layout(), "")
+	lengthRow := func(k, q string, lb, la geometry.Length) {
 		if math.Abs(float64(lb-la)) > 1e-9 {
-			add(q, geometry.FormatLength(lb, sys), geometry.FormatLength(la, sys), cmpPct(float64(lb), float64(la)))
+			add(k, q, geometry.FormatLength(lb, sys), geometry.FormatLength(la, sys), cmpPct(float64(lb), float64(la)))
 		}
 	}
-	lengthRow("Wall length", b.Wall.Length, a.Wall.Length)
-	lengthRow("Wall height", b.Wall.Height, a.Wall.Height)
-	lengthRow("Thickness", b.Wall.Thickness, a.Wall.Thickness)
-	add("Openings", fmt.Sprint(len(b.Wall.Openings())), fmt.Sprint(len(a.Wall.Openings())), "")
+	lengthRow("length", "Wall length", b.Wall.Length, a.Wall.Length)
+	lengthRow("height", "Wall height", b.Wall.Height, a.Wall.Height)
+	lengthRow("thickness", "Thickness", b.Wall.Thickness, a.Wall.Thickness)
+	add("openings", "Openings", fmt.Sprint(len(b.Wall.Openings())), fmt.Sprint(len(a.Wall.Openings())), "")
 
 	rb, ra := b.Result, a.Result
 	val := func(r *pier.Result, f func(*pier.Result) (float64, bool), format func(float64) string) (string, float64, bool) {
@@ -193,7 +194,7 @@ func CompareRows(c *study.Comparison) []CompareRow {
 		}
 		return format(v), v, true
 	}
-	row := func(q string, f func(*pier.Result) (float64, bool), format func(float64) string) {
+	row := func(k, q string, f func(*pier.Result) (float64, bool), format func(float64) string) {
 		sb, vb, okb := val(rb, f, format)
 		sa, va, oka := val(ra, f, format)
 		ch := ""
@@ -203,16 +204,16 @@ func CompareRows(c *study.Comparison) []CompareRow {
 		if sb == cmpDash && sa == cmpDash {
 			return
 		}
-		add(q, sb, sa, ch)
+		add(k, q, sb, sa, ch)
 	}
 	sig := func(v float64) string { return cmpSig(v, 4) }
-	row("Relative rigidity (E t)", func(r *pier.Result) (float64, bool) { return r.Rigidity, true }, sig)
-	row("Rigidity, "+u.Rigidity, func(r *pier.Result) (float64, bool) { return u.RigidityOf(r.RigidityAbs), r.RigidityAbs > 0 }, sig)
-	row("Relative deflection", func(r *pier.Result) (float64, bool) { return r.Deflection, true }, sig)
-	row("Deflection, "+u.Deflection, func(r *pier.Result) (float64, bool) {
+	row("rigidity_relative", "Relative rigidity (E t)", func(r *pier.Result) (float64, bool) { return r.Rigidity, true }, sig)
+	row("rigidity", "Rigidity, "+u.Rigidity, func(r *pier.Result) (float64, bool) { return u.RigidityOf(r.RigidityAbs), r.RigidityAbs > 0 }, sig)
+	row("deflection_relative", "Relative deflection", func(r *pier.Result) (float64, bool) { return r.Deflection, true }, sig)
+	row("deflection", "Deflection, "+u.Deflection, func(r *pier.Result) (float64, bool) {
 		return u.DeflectionOf(r.DeflectionAbs), r.HasLoad && r.DeflectionAbs > 0
 	}, func(v float64) string { return cmpSig(v, 3) })
-	row("Design drift, "+u.Deflection, func(r *pier.Result) (float64, bool) {
+	row("drift", "Design drift, "+u.Deflection, func(r *pier.Result) (float64, bool) {
 		return u.DeflectionOf(r.Drift.Design), r.HasLoad && r.Drift.Design > 0
 	}, func(v float64) string { return cmpSig(v, 3) })
 	if (rb != nil && rb.HasLoad && rb.Drift.Allowable > 0) || (ra != nil && ra.HasLoad && ra.Drift.Allowable > 0) {
@@ -227,7 +228,7 @@ func CompareRows(c *study.Comparison) []CompareRow {
 			}
 			return fmt.Sprintf("EXCEEDS limit %s", cmpSig(u.DeflectionOf(r.Drift.Allowable), 3))
 		}
-		add("Drift check", check(rb), check(ra), "")
+		add("drift_check", "Drift check", check(rb), check(ra), "")
 	}
 	return rows
 }

@@ -1,0 +1,75 @@
+package tui
+
+import (
+	"errors"
+	"fmt"
+	"io"
+	"io/fs"
+	"os"
+	"path/filepath"
+	"strings"
+	"time"
+)
+
+// ProgramVersion is the version printed in snapshots; cmd/pierwise sets it.
+var ProgramVersion string
+
+// snapshotPath names a new snapshot file beside the wall file: the wall
+// file's name without its extension, the kind ("compare", "sweep-W1") and
+// the time to the second, e.g. annex-compare-20261201-225012.txt. A wall
+// without a file (the demo) writes into the working directory.
+func snapshotPath(wallPath, kind string, now time.Time, n int) string {
+	dir, base := ".", "demo"
+	if wallPath != "" {
+		dir = filepath.Dir(wallPath)
+		base = strings.TrimSuffix(filepath.Base(wallPath), filepath.Ext(wallPath))
+	}
+	name := fmt.Sprintf("%s-%s-%s", base, snapshotKind(kind), now.Format("20060102-150405"))
+	if n > 1 {
+		name += fmt.Sprintf("-%d", n)
+	}
+	return filepath.Join(dir, name+".txt")
+}
+
+// snapshotKind keeps a kind safe in a file name.
+func snapshotKind(kind string) string {
+	return strings.Map(func(r rune) rune {
+		switch {
+		case r >= 'a' && r <= 'z', r >= 'A' && r <= 'Z', r >= '0' && r <= '9', r == '-', r == '.':
+			return r
+		}
+		return '_'
+	}, kind)
+}
+
+// writeSnapshot writes a new snapshot file (never over an existing one) and
+// returns its path. It runs in a tea.Cmd.
+func writeSnapshot(wallPath, kind string, now time.Time, write func(io.Writer) error) (string, error) {
+	for n := 1; n < 100; n++ {
+		path := snapshotPath(wallPath, kind, now, n)
+		f, err := os.OpenFile(path, os.O_WRONLY|os.O_CREATE|os.O_EXCL, 0o644)
+		if errors.Is(err, fs.ErrExist) {
+			continue
+		}
+		if err != nil {
+			return "", err
+		}
+		if err := write(f); err != nil {
+			f.Close()
+			os.Remove(path)
+			return "", err
+		}
+		if err := f.Close(); err != nil {
+			os.Remove(path)
+			return "", err
+		}
+		return path, nil
+	}
+	return "", errors.New("too many snapshots in the same second")
+}
+
+// snapshotSaid is the message that says where a snapshot went: the file
+// name first, so a narrow window still shows it.
+func snapshotSaid(path string) string {
+	return fmt.Sprintf("wrote %s in %s", filepath.Base(path), filepath.Dir(path))
+}
