@@ -1,0 +1,73 @@
+package storey
+
+import (
+	"bytes"
+	"flag"
+	"os"
+	"path/filepath"
+	"strings"
+	"testing"
+	"time"
+)
+
+var update = flag.Bool("update", false, "rewrite the golden files in testdata/")
+
+// The storey report of the invented workshop, compared with a golden file.
+// Its numbers are rounded in the text (2 decimals for forces and distances),
+// so the file does not depend on the last bits of the arithmetic. Run
+// go test ./storey -run TestReportGolden -update after a deliberate change,
+// and read the diff.
+func TestReportGolden(t *testing.T) {
+	Version = "test"
+	var buf bytes.Buffer
+	now := time.Date(2026, 12, 1, 23, 0, 0, 0, time.UTC)
+	if err := WriteReport(&buf, filepath.Join("..", "testdata", "storey", "workshop.toml"), now); err != nil {
+		t.Fatal(err)
+	}
+	golden := filepath.Join("testdata", "workshop.report.txt")
+	if *update {
+		if err := os.MkdirAll("testdata", 0o755); err != nil {
+			t.Fatal(err)
+		}
+		if err := os.WriteFile(golden, buf.Bytes(), 0o644); err != nil {
+			t.Fatal(err)
+		}
+	}
+	want, err := os.ReadFile(golden)
+	if err != nil {
+		t.Fatalf("%v (run with -update to create it)", err)
+	}
+	if got := buf.String(); got != string(want) {
+		gl, wl := strings.Split(got, "\n"), strings.Split(string(want), "\n")
+		for i := 0; i < len(gl) && i < len(wl); i++ {
+			if gl[i] != wl[i] {
+				t.Fatalf("report differs from %s at line %d:\n got: %q\nwant: %q", golden, i+1, gl[i], wl[i])
+			}
+		}
+		t.Fatalf("report differs from %s in length: %d lines, want %d", golden, len(gl), len(wl))
+	}
+	// What the report must say whatever its layout.
+	for _, s := range []string{"licensed", "local codes govern", "ASCE 7-22 §12.8.4.2", "x_R:", "y_R:", "J:", " M ", " R "} {
+		if !strings.Contains(buf.String(), s) {
+			t.Errorf("report lacks %q", s)
+		}
+	}
+}
+
+// A bad storey file: nothing is written and the error names file and line.
+func TestWriteReportError(t *testing.T) {
+	dir := t.TempDir()
+	path := filepath.Join(dir, "s.toml")
+	text := strings.Replace(goodStorey, `file = "b.toml"`, `file = "missing.toml"`, 1)
+	if err := os.WriteFile(path, []byte(text), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	var buf bytes.Buffer
+	err := WriteReport(&buf, path, time.Now())
+	if err == nil || !strings.Contains(err.Error(), path+":15: wall[2].file") || !strings.Contains(err.Error(), "not found") {
+		t.Errorf("got %v, want a missing-file error at line 15", err)
+	}
+	if buf.Len() != 0 {
+		t.Errorf("wrote %d bytes for a bad storey", buf.Len())
+	}
+}
