@@ -337,4 +337,3 @@ func (t *textTable) write(w *textWriter, indent string) {
 		w.line(row(r))
 	}
 }
-
