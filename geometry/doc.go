@@ -9,7 +9,7 @@
 // SI) only decides how values are read and shown: a bare number is feet or
 // metres for lengths, kip or kN for forces, psi or MPa for stresses.
 // ParseLength accepts in, ft, mm, cm, m and feet-inches (12'-6", 12'6",
-// 12' 6 1/2", 6"); ParseForce lb, kip, N, kN; ParseStress psi, ksi, Pa,
+// 12' 6 1/2", 6", 12ft 6in); ParseForce lb, kip, N, kN; ParseStress psi, ksi, Pa,
 // kPa, MPa, GPa. The conversion factors are exact by definition (1 in =
 // 25.4 mm, 1 lbf = 4.448 221 615 260 5 N; NIST SP 811, Appendix B).
 // FormatLength, FormatForce and FormatStress round for people; they are not

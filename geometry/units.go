@@ -128,7 +128,8 @@ const (
 )
 
 // ParseLength reads a length as typed by a person: a number with a unit (in,
-// ft, mm, cm, m), feet-inches (12'-6", 12'6", 12' 6", 12', 6", 6 1/2"), or a
+// ft, mm, cm, m), feet-inches (12'-6", 12'6", 12' 6", 12', 6", 6 1/2",
+// 12ft 6in), or a
 // bare number in the system's base unit (ft for US, m for SI). Spaces between
 // the parts are allowed. Negative values are returned as they are (callers
 // decide whether they make sense); NaN, infinities and overflow are errors.
@@ -149,6 +150,15 @@ func ParseLength(s string, sys System) (Length, error) {
 	}
 	num, unit, msg := splitQuantity(t)
 	if msg != "" {
+		return bad(msg)
+	}
+	if v, ok, msg := feetThenInches(num, unit); ok {
+		if msg != "" {
+			return bad(msg)
+		}
+		return Length(v), nil
+	}
+	if msg := checkUnitText(unit); msg != "" {
 		return bad(msg)
 	}
 	u := sys.BaseLength()
@@ -188,6 +198,9 @@ func parseScaled[T ~float64](s, quantity string, units map[string]T, list string
 		return bad("empty; type a number and a unit (" + list + ")")
 	}
 	num, unit, msg := splitQuantity(t)
+	if msg == "" {
+		msg = checkUnitText(unit)
+	}
 	if msg != "" {
 		return bad(msg)
 	}
@@ -330,13 +343,37 @@ func splitQuantity(t string) (float64, string, string) {
 		if msg != "" {
 			return 0, "", msg
 		}
-		return v, rest, checkUnitText(rest)
+		return v, rest, ""
 	}
 	v, msg := parseNumber(numText)
 	if msg != "" {
 		return 0, "", msg
 	}
-	return v, rest, checkUnitText(rest)
+	return v, rest, ""
+}
+
+// feetThenInches reads the rest of "12ft 6in" or "12 ft 6 1/2 in" after the
+// number of feet; ok is false when unit is not of that form.
+func feetThenInches(feet float64, unit string) (v float64, ok bool, msg string) {
+	i := strings.IndexAny(unit, " 0123456789.")
+	if i <= 0 || lengthUnits[strings.ToLower(unit[:i])] != Foot {
+		return 0, false, ""
+	}
+	in, inUnit, msg := splitQuantity(strings.TrimSpace(unit[i:]))
+	if msg != "" {
+		return 0, true, "inches: " + msg
+	}
+	if lengthUnits[strings.ToLower(inUnit)] != Inch || inUnit == `"` {
+		return 0, true, "after the feet give inches, as in 12ft 6in"
+	}
+	if feet < 0 || in < 0 {
+		return 0, true, "put a minus sign only in front of the whole value"
+	}
+	v = (feet*12 + in) * float64(Inch)
+	if math.IsInf(v, 0) {
+		return 0, true, "out of range"
+	}
+	return v, true, ""
 }
 
 func checkUnitText(u string) string {
