@@ -3,6 +3,7 @@ package tui
 import (
 	"errors"
 	"fmt"
+	"math"
 	"path/filepath"
 	"strconv"
 	"strings"
@@ -380,8 +381,16 @@ func (e *elevation) reshape(verb string, f func(o *geometry.Opening)) {
 		e.refuse("no opening selected: d adds a door, w a window")
 		return
 	}
-	o := w.Openings()[e.sel]
+	was := w.Openings()[e.sel]
+	o := was
 	f(&o)
+	// Steps are exact in the user's units; drop the binary noise of the
+	// sums so that three 1 ft steps off a 3 ft width leave zero, not 1e-16.
+	for k, l := range []*geometry.Length{&o.X, &o.Sill, &o.Width, &o.Height} {
+		if *l != [4]geometry.Length{was.X, was.Sill, was.Width, was.Height}[k] {
+			*l = geometry.Length(math.Round(float64(*l)*1e9) / 1e9)
+		}
+	}
 	err := e.c.doc.change(func(w *geometry.Wall) error {
 		if err := checkOpening(w, e.sel, o); err != nil {
 			return err

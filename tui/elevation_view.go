@@ -172,6 +172,10 @@ func (e *elevation) elevationView(l elevLayout) string {
 			case sketch.PierFill:
 				if st.mono {
 					ch = tintTexture[level(cell.Pier)]
+					// Keep a blank beside a label so it stands out of the texture.
+					if g.At(c-1, r).Kind == sketch.PierLabel || g.At(c+1, r).Kind == sketch.PierLabel {
+						ch = ' '
+					}
 				} else {
 					p = tintP[level(cell.Pier)]
 				}
@@ -345,8 +349,17 @@ func (e *elevation) tableView(l elevLayout) string {
 	if len(piers)+1 > l.tableH {
 		piers = r.Leaves()
 	}
-	head := []string{"pier", "h", "L", "h/L", "support", "share", "V " + u.Force, "M " + u.Moment, "bend/shear"}
-	left := []bool{true, false, false, false, true, true, false, false, false}
+	head := []string{"pier", "h", "L", "h/L", "support", "share", "V " + u.Force, "M " + u.Moment, "bend/shear", "FE share"}
+	left := []bool{true, false, false, false, true, true, false, false, false, false}
+	feShare := map[string]float64{}
+	if f := e.fe.res; e.fe.on && f != nil {
+		for _, p := range f.Piers {
+			feShare[p.Name] = p.Share
+		}
+	}
+	if len(feShare) == 0 {
+		head, left = head[:9], left[:9]
+	}
 	rows := [][]string{}
 	for _, p := range piers {
 		name := p.Name
@@ -366,7 +379,15 @@ func (e *elevation) tableView(l elevLayout) string {
 				split = fmt.Sprintf("%.0f/%.0f", 100*p.Parts.Bending/t, 100*p.Parts.Shear/t)
 			}
 		}
-		rows = append(rows, []string{name, fl(p.H()), fl(p.L()), fmt.Sprintf("%.2f", p.Ratio()), sup, "", v, m, split})
+		row := []string{name, fl(p.H()), fl(p.L()), fmt.Sprintf("%.2f", p.Ratio()), sup, "", v, m, split}
+		if len(head) > 9 {
+			fs := ""
+			if s, ok := feShare[p.Name]; ok {
+				fs = fmt.Sprintf("%.0f%%", 100*s)
+			}
+			row = append(row, fs)
+		}
+		rows = append(rows, row)
 	}
 	widths := make([]int, len(head))
 	total := 0
@@ -484,9 +505,9 @@ func (e *elevation) helpView(l elevLayout) string {
 		}
 		lines = append(lines, b.String())
 	}
-	lines = append(lines, "",
-		"Elevation: piers are shaded by their share of the wall shear "+tintLegend(st)+".",
-		"The selected opening is shown in reverse video. Lengths in "+unitName(e.wall().Units)+".")
+	lines = append(lines, "")
+	lines = append(lines, wrap("Elevation: piers are shaded by their share of the wall shear "+tintLegend(st)+
+		". The selected opening is drawn with doubled lines (= and #) in reverse video. Lengths in "+unitName(e.wall().Units)+".", e.width)...)
 	return strings.Join(lines, "\n")
 }
 

@@ -6,6 +6,7 @@ import (
 	"github.com/charmbracelet/bubbles/key"
 	"github.com/charmbracelet/bubbles/textinput"
 	tea "github.com/charmbracelet/bubbletea"
+	"github.com/charmbracelet/lipgloss"
 )
 
 // form is a small dialog of text fields (bubbles textinput) used to type
@@ -154,11 +155,23 @@ func (f *form) view(st *styles, w, h int) string {
 			label = st.focus.Render(label)
 		}
 		val := fl.input.View()
-		line := mark + label + "  [" + padRight(val, iw) + "]  "
+		line := mark + label + "  [" + padRight(val, iw+1) + "]  "
+		note := fl.hint
 		if fl.err != "" {
-			line += st.errText.Render("! " + fl.err)
-		} else if fl.hint != "" {
-			line += st.dim.Render(fl.hint)
+			note = "! " + fl.err
+		}
+		if fl.err != "" && lipgloss.Width(line)+len(note) > w {
+			// A long error goes on its own line under the field.
+			b.WriteString(line + "\n")
+			for _, l := range wrap(note, max(20, w-lw-4)) {
+				b.WriteString(strings.Repeat(" ", lw+4) + st.errText.Render(l) + "\n")
+			}
+			continue
+		}
+		if fl.err != "" {
+			line += st.errText.Render(note)
+		} else {
+			line += st.dim.Render(note)
 		}
 		b.WriteString(line)
 		b.WriteString("\n")

@@ -83,8 +83,8 @@ func (m *root) View() string {
 // tooSmall is the notice drawn instead of a screen in a small window.
 func tooSmall(w, h int) string {
 	lines := []string{
-		"The window is too small for pierwise.",
-		fmt.Sprintf("It is %d×%d; make it at least %d×%d.", w, h, minWidth, minHeight),
+		"Window too small:",
+		fmt.Sprintf("%d×%d, pierwise needs %d×%d.", w, h, minWidth, minHeight),
 		"ctrl+c quits.",
 	}
 	for i, l := range lines {

@@ -31,7 +31,7 @@ type styles struct {
 // shear, and the texture used instead of the tint in monochrome.
 var (
 	tintBounds  = [5]float64{0.10, 0.25, 0.40, 0.60, 1.01}
-	tintTexture = [5]rune{' ', '.', ':', '=', '#'}
+	tintTexture = [5]rune{' ', '.', ':', 'o', 'O'}
 )
 
 // tintLevel returns the tint level of a share (0–1).

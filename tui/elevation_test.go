@@ -1,0 +1,518 @@
+package tui
+
+import (
+	"fmt"
+	"os"
+	"path/filepath"
+	"reflect"
+	"strings"
+	"testing"
+	"time"
+
+	tea "github.com/charmbracelet/bubbletea"
+	"github.com/charmbracelet/x/ansi"
+
+	"pierwise/demo"
+	"pierwise/geometry"
+	"pierwise/pier"
+)
+
+// Key presses as bubbletea delivers them.
+func runes(s string) tea.KeyMsg { return tea.KeyMsg{Type: tea.KeyRunes, Runes: []rune(s)} }
+
+var (
+	keyTab      = tea.KeyMsg{Type: tea.KeyTab}
+	keyShiftTab = tea.KeyMsg{Type: tea.KeyShiftTab}
+	keyEnter    = tea.KeyMsg{Type: tea.KeyEnter}
+	keyEsc      = tea.KeyMsg{Type: tea.KeyEsc}
+	keyRight    = tea.KeyMsg{Type: tea.KeyRight}
+	keyLeft     = tea.KeyMsg{Type: tea.KeyLeft}
+	keyCtrlU    = tea.KeyMsg{Type: tea.KeyCtrlU}
+	keyBack     = tea.KeyMsg{Type: tea.KeyBackspace}
+)
+
+// editor is a root model on a wall at a size, driven in-process.
+type editor struct {
+	t *testing.T
+	m *root
+}
+
+func newEditor(t *testing.T, w *geometry.Wall, path string, width, height int) *editor {
+	t.Helper()
+	m := newModel(w, Options{Path: path, OnDisk: path != ""})
+	m.c.now = func() time.Time { return time.Date(2026, 12, 1, 12, 0, 0, 0, time.UTC) }
+	m.Update(tea.WindowSizeMsg{Width: width, Height: height})
+	return &editor{t: t, m: m}
+}
+
+// press sends messages and returns the last command.
+func (ed *editor) press(msgs ...tea.Msg) tea.Cmd {
+	var cmd tea.Cmd
+	for _, msg := range msgs {
+		_, cmd = ed.m.Update(msg)
+	}
+	return cmd
+}
+
+func (ed *editor) view() string { return ansi.Strip(ed.m.View()) }
+
+func (ed *editor) elev() *elevation { return ed.m.stack[0].(*elevation) }
+
+func (ed *editor) wall() *geometry.Wall { return ed.m.c.doc.wall }
+
+// typeText clears the focused form field and types s.
+func (ed *editor) typeText(s string) {
+	ed.press(keyCtrlU)
+	for _, r := range s {
+		ed.press(runes(string(r)))
+	}
+}
+
+func checkGolden(t *testing.T, name, got string) {
+	t.Helper()
+	path := filepath.Join("testdata", name)
+	if *update {
+		if err := os.MkdirAll("testdata", 0o755); err != nil {
+			t.Fatal(err)
+		}
+		if err := os.WriteFile(path, []byte(got), 0o644); err != nil {
+			t.Fatal(err)
+		}
+		return
+	}
+	want, err := os.ReadFile(path)
+	if err != nil {
+		t.Fatalf("%v (go test ./tui -update writes it)", err)
+	}
+	if string(want) != got {
+		t.Errorf("%s differs from the view:\n%s\n--- want:\n%s", name, got, want)
+	}
+}
+
+// checkSize: the view fills the window exactly, never more.
+func checkSize(t *testing.T, view string, w, h int) {
+	t.Helper()
+	lines := strings.Split(view, "\n")
+	if len(lines) != h {
+		t.Errorf("view has %d lines, window %d", len(lines), h)
+	}
+	for i, l := range lines {
+		if n := ansi.StringWidth(l); n > w {
+			t.Errorf("line %d is %d wide, window %d: %q", i, n, w, l)
+		}
+	}
+}
+
+// staggered is an invented wall whose openings overlap in height and
+// together cover the whole length of a band: beyond the classic method.
+func staggered() *geometry.Wall {
+	w := NewWall(geometry.US)
+	ft := geometry.Foot
+	w.Layouts[0].Openings = []geometry.Opening{
+		{Name: "W1", X: 0, Sill: 3 * ft, Width: 12 * ft, Height: 4 * ft},
+		{Name: "W2", X: 12 * ft, Sill: 5 * ft, Width: 12 * ft, Height: 4 * ft},
+	}
+	return w
+}
+
+func TestGolden(t *testing.T) {
+	for _, size := range [][2]int{{80, 24}, {160, 48}} {
+		W, H := size[0], size[1]
+		for _, tc := range []struct {
+			name string
+			wall func() *geometry.Wall
+			keys []tea.Msg
+		}{
+			{"demo", demo.Wall, nil},
+			{"moved", demo.Wall, []tea.Msg{keyTab, runes("l"), runes("l"), runes("k")}},
+			{"refused", demo.Wall, []tea.Msg{keyLeft, keyLeft, keyLeft, keyLeft, keyLeft}},
+			{"resized", demo.Wall, []tea.Msg{keyTab, runes("."), runes("L"), runes("L"), runes("K")}},
+			{"help", demo.Wall, []tea.Msg{runes("?")}},
+			{"wallform", demo.Wall, []tea.Msg{runes("E")}},
+			{"openingform_error", demo.Wall, []tea.Msg{runes("e"), keyTab, keyCtrlU, runes("3"), runes("x"), keyEnter}},
+			{"confirm_quit", demo.Wall, []tea.Msg{runes("l"), runes("q")}},
+			{"new_wall", func() *geometry.Wall { return NewWall(geometry.US) }, nil},
+			{"si", func() *geometry.Wall { return NewWall(geometry.SI) }, []tea.Msg{runes("w"), runes("d")}},
+			{"staggered", staggered, nil},
+		} {
+			name := fmt.Sprintf("%s_%dx%d.golden", tc.name, W, H)
+			t.Run(name, func(t *testing.T) {
+				ed := newEditor(t, tc.wall(), "", W, H)
+				ed.press(tc.keys...)
+				v := ed.view()
+				checkSize(t, v, W, H)
+				checkGolden(t, name, v)
+			})
+		}
+	}
+}
+
+// TestGoldenFE shows the FE check's answer, run here synchronously.
+func TestGoldenFE(t *testing.T) {
+	ed := newEditor(t, demo.Wall(), "", 160, 48)
+	e := ed.elev()
+	msg := runFE(e.fe.id, ed.wall(), e.res)()
+	ed.press(msg)
+	if e.fe.res == nil {
+		t.Fatalf("FE answer not taken: %+v", msg)
+	}
+	checkGolden(t, "fe_160x48.golden", ed.view())
+}
+
+func TestTooSmall(t *testing.T) {
+	for _, s := range [][2]int{{79, 24}, {80, 23}, {40, 10}, {20, 2}} {
+		ed := newEditor(t, demo.Wall(), "", s[0], s[1])
+		v := ed.view()
+		if !strings.Contains(v, "too small") {
+			t.Errorf("%v: %q", s, v)
+		}
+		checkSize(t, v, s[0], min(s[1], 3))
+	}
+	ed := newEditor(t, demo.Wall(), "", 40, 10)
+	ed.press(tea.WindowSizeMsg{Width: 100, Height: 30})
+	if v := ed.view(); strings.Contains(v, "too small") || !strings.Contains(v, "Results") {
+		t.Errorf("after growing:\n%s", v)
+	}
+}
+
+// sharesShown reads the share column of the pier table: name → "37%".
+func sharesShown(t *testing.T, view string) map[string]string {
+	t.Helper()
+	got := map[string]string{}
+	in := false
+	for _, line := range strings.Split(view, "\n") {
+		f := strings.Fields(line)
+		if len(f) > 0 && f[0] == "pier" {
+			in = true
+			continue
+		}
+		if !in || len(f) < 6 || !strings.HasPrefix(f[0], "P") {
+			continue
+		}
+		got[f[0]] = f[5]
+	}
+	return got
+}
+
+// TestMoveChangesSharesAsSolver: after moving a window the table shows the
+// shares pier.Solve gives for the moved wall, pier by pier.
+func TestMoveChangesSharesAsSolver(t *testing.T) {
+	ed := newEditor(t, demo.Wall(), "", 160, 48)
+	before := sharesShown(t, ed.view())
+	ed.press(keyTab, runes("l"), runes("l")) // W1 two feet to the right
+	after := sharesShown(t, ed.view())
+
+	w := demo.Wall()
+	w.Layouts[0].Openings[1].X = 14 * geometry.Foot
+	if got := ed.wall().Openings()[1]; got != w.Layouts[0].Openings[1] {
+		t.Fatalf("W1 is %+v, want %+v", got, w.Layouts[0].Openings[1])
+	}
+	res, err := pier.Solve(w)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if len(after) != len(res.Piers) {
+		t.Fatalf("table shows %d piers %v, solver has %d", len(after), after, len(res.Piers))
+	}
+	changed := false
+	for _, p := range res.Piers {
+		want := fmt.Sprintf("%.0f%%", 100*p.Share)
+		if after[p.Name] != want {
+			t.Errorf("%s: table shows %q, pier.Solve gives %s", p.Name, after[p.Name], want)
+		}
+		if before[p.Name] != after[p.Name] {
+			changed = true
+		}
+	}
+	if !changed {
+		t.Errorf("moving W1 changed no share: before %v after %v", before, after)
+	}
+	// The results panel shows the solver's rigidity.
+	if want := num(res.Rigidity); !strings.Contains(ed.view(), "relative    "+want) {
+		t.Errorf("relative rigidity %s not shown", want)
+	}
+}
+
+// TestRefusedMoves: moves off the wall or over another opening leave the
+// wall as it was and say why.
+func TestRefusedMoves(t *testing.T) {
+	ed := newEditor(t, demo.Wall(), "", 100, 30)
+	orig := cloneWall(ed.wall())
+	ed.press(runes("j")) // D1 is a door: it cannot go below the base
+	if !reflect.DeepEqual(ed.wall(), orig) || !ed.elev().msgBad || !strings.Contains(ed.view(), "can't move D1") {
+		t.Errorf("door moved below the base; message %q", ed.elev().msg)
+	}
+	ed.press(runes("l"), runes("l"), runes("l"), runes("l"), runes("l")) // D1 at 4 ft, 3 ft wide; W1 from 12 ft
+	if got := ed.wall().Openings()[0].X; !near(float64(got), float64(9*geometry.Foot)) {
+		t.Errorf("D1 at %v m, want 9 ft: it touches W1's 12 ft edge only above 3 ft sill", got)
+	}
+	// D1 (7 ft high) now spans x 9–12 ft; one more step overlaps W1 (sill 3 ft).
+	ed.press(runes("l"))
+	if got := ed.wall().Openings()[0].X; !near(float64(got), float64(9*geometry.Foot)) || !ed.elev().msgBad {
+		t.Errorf("D1 moved over W1: at %v", got)
+	}
+	n := len(ed.elev().c.doc.undo)
+	for range 20 {
+		ed.press(runes("H")) // narrower until refused
+	}
+	if w := ed.wall().Openings()[0].Width; !(w > 0) {
+		t.Errorf("width went to %v", w)
+	}
+	if len(ed.elev().c.doc.undo) != n+2 { // 3 ft → 2 ft → 1 ft, then refused
+		t.Errorf("%d narrowing steps taken, want 2", len(ed.elev().c.doc.undo)-n)
+	}
+}
+
+func near(a, b float64) bool { return a-b < 1e-9 && b-a < 1e-9 }
+
+// TestUndoRedo: every edit is undone in turn back to the start and redone
+// back to the end.
+func TestUndoRedo(t *testing.T) {
+	ed := newEditor(t, demo.Wall(), "", 100, 30)
+	start := cloneWall(ed.wall())
+	keys := []tea.Msg{keyTab, runes("l"), runes("K"), runes("w"), runes("l"), runes("d"), runes("x"), runes("c"), runes("n"), runes("]"), runes("X")}
+	var states []*geometry.Wall
+	for _, k := range keys {
+		v := ed.m.c.doc.version
+		ed.press(k)
+		if ed.m.c.doc.version != v {
+			states = append(states, cloneWall(ed.wall()))
+		}
+	}
+	if len(states) < 8 {
+		t.Fatalf("only %d edits took effect", len(states))
+	}
+	if !ed.m.c.doc.dirty() {
+		t.Error("edited wall not marked unsaved")
+	}
+	for i := len(states) - 2; i >= -1; i-- {
+		ed.press(runes("u"))
+		want := start
+		if i >= 0 {
+			want = states[i]
+		}
+		if !reflect.DeepEqual(ed.wall(), want) {
+			t.Fatalf("after undo to state %d: wall differs", i)
+		}
+	}
+	if ed.m.c.doc.dirty() {
+		t.Error("undone to the opened wall but still marked unsaved")
+	}
+	ed.press(runes("u"))
+	if !strings.Contains(ed.view(), "nothing to undo") {
+		t.Error("no word when there is nothing to undo")
+	}
+	for range states {
+		ed.press(runes("U"))
+	}
+	if !reflect.DeepEqual(ed.wall(), states[len(states)-1]) {
+		t.Error("redo did not come back to the last state")
+	}
+}
+
+func TestAddDeleteDuplicate(t *testing.T) {
+	ed := newEditor(t, NewWall(geometry.US), "", 100, 30)
+	ed.press(runes("w"), runes("w"), runes("d"))
+	ops := ed.wall().Openings()
+	if len(ops) != 3 || ops[0].Name != "W1" || ops[1].Name != "W2" || ops[2].Name != "D1" || !ops[2].IsDoor() {
+		t.Fatalf("openings %+v", ops)
+	}
+	if err := ed.wall().Validate(); err != nil {
+		t.Fatalf("added openings make an invalid wall: %v", err)
+	}
+	ed.press(runes("c"))
+	if ops := ed.wall().Openings(); len(ops) != 4 || ops[3].Name != "D2" || ops[3].Width != ops[2].Width {
+		t.Fatalf("duplicate: %+v", ops)
+	}
+	ed.press(runes("x"), runes("x"))
+	if ops := ed.wall().Openings(); len(ops) != 2 {
+		t.Fatalf("after two deletes: %+v", ops)
+	}
+	// Fill the wall with windows until there is no room: refused, not stacked.
+	for range 20 {
+		ed.press(runes("w"))
+	}
+	if err := ed.wall().Validate(); err != nil {
+		t.Fatalf("wall full of windows is invalid: %v", err)
+	}
+	if !ed.elev().msgBad || !strings.Contains(ed.elev().msg, "no free place") {
+		t.Errorf("full wall: message %q", ed.elev().msg)
+	}
+}
+
+func TestStepCycle(t *testing.T) {
+	for _, tc := range []struct {
+		sys  geometry.System
+		want []string
+	}{
+		// The US list holds the 8 in module of concrete masonry units
+		// (common practice: 8 in nominal block length).
+		{geometry.US, []string{`1"`, `4"`, `8"`, `1'-0"`}},
+		{geometry.SI, []string{"0.010 m", "0.100 m", "0.200 m"}},
+	} {
+		ed := newEditor(t, NewWall(tc.sys), "", 100, 30)
+		var got []string
+		for range tc.want {
+			ed.press(runes("."))
+			got = append(got, geometry.FormatLength(ed.elev().stepLength(), tc.sys))
+		}
+		// Starting at the default, a full cycle visits every step once.
+		seen := map[string]bool{}
+		for _, s := range got {
+			seen[s] = true
+		}
+		for _, s := range tc.want {
+			if !seen[s] {
+				t.Errorf("%v: step %s never offered (got %v)", tc.sys, s, got)
+			}
+		}
+	}
+	// Moving by the 4 in step.
+	ed := newEditor(t, demo.Wall(), "", 100, 30)
+	ed.press(runes("."), runes("."), runes("l")) // 1 ft → 1 in → 4 in
+	if got := ed.wall().Openings()[0].X; !near(float64(got), float64(4*geometry.Foot+4*geometry.Inch)) {
+		t.Errorf("D1 at %v, want 4'-4\"", geometry.FormatLength(got, geometry.US))
+	}
+}
+
+func TestForms(t *testing.T) {
+	ed := newEditor(t, demo.Wall(), "", 100, 30)
+	// Opening form: a bad width is named in place and nothing changes.
+	ed.press(runes("e"))
+	ed.press(keyTab, keyTab, keyTab)
+	ed.typeText("3 furlongs")
+	ed.press(keyEnter)
+	if ed.elev().mode != modeForm || !strings.Contains(ed.view(), "! ") {
+		t.Fatalf("bad width accepted:\n%s", ed.view())
+	}
+	ed.typeText(`3'-8"`)
+	ed.press(keyEnter)
+	if ed.elev().mode != modeNormal {
+		t.Fatalf("good width refused:\n%s", ed.view())
+	}
+	if w := ed.wall().Openings()[0].Width; !near(float64(w), float64(3*geometry.Foot+8*geometry.Inch)) {
+		t.Errorf("width %v", w)
+	}
+	// An overlapping position is refused by the wall's own check.
+	ed.press(runes("e"), keyTab)
+	ed.typeText("13ft")
+	ed.press(keyEnter)
+	if ed.elev().mode != modeForm || !strings.Contains(ed.view(), "W1") {
+		t.Errorf("overlap accepted:\n%s", ed.view())
+	}
+	ed.press(keyEsc)
+	if x := ed.wall().Openings()[0].X; !near(float64(x), float64(4*geometry.Foot)) {
+		t.Errorf("cancelled form moved D1 to %v", x)
+	}
+	// Wall form: unchanged fields keep their exact values; a changed length
+	// and shear are read in the wall's units.
+	before := cloneWall(ed.wall())
+	ed.press(runes("E"), keyEnter)
+	if !reflect.DeepEqual(ed.wall(), before) {
+		t.Errorf("applying the wall form unchanged changed the wall:\n%+v\n%+v", ed.wall(), before)
+	}
+	ed.press(runes("E"))
+	for range wfLength {
+		ed.press(keyTab)
+	}
+	ed.typeText("44")
+	for range wfShear - wfLength {
+		ed.press(keyTab)
+	}
+	ed.typeText("60")
+	ed.press(keyEnter)
+	if w := ed.wall(); !near(float64(w.Length), float64(44*geometry.Foot)) || !near(float64(w.Load.Shear)/1000, float64(60*geometry.Kip)/1000) {
+		t.Errorf("wall form: length %v, shear %v", w.Length, w.Load.Shear)
+	}
+	// A wall too short for its openings is refused with the reason.
+	ed.press(runes("E"))
+	for range wfLength {
+		ed.press(keyTab)
+	}
+	ed.typeText("10ft")
+	ed.press(keyEnter)
+	if ed.elev().mode != modeForm {
+		t.Errorf("a 10 ft wall with openings beyond 10 ft was accepted")
+	}
+}
+
+// TestQuitAsks: q with unsaved changes asks; n stays, y quits.
+func TestQuitAsks(t *testing.T) {
+	ed := newEditor(t, demo.Wall(), "", 100, 30)
+	if cmd := ed.press(runes("q")); cmd == nil || !isQuit(cmd) {
+		t.Fatal("q on an unchanged wall did not quit")
+	}
+	ed = newEditor(t, demo.Wall(), "", 100, 30)
+	ed.press(runes("l"))
+	if cmd := ed.press(runes("q")); cmd != nil && isQuit(cmd) {
+		t.Fatal("q with unsaved changes quit without asking")
+	}
+	if !strings.Contains(ed.view(), "Unsaved changes") {
+		t.Fatal("no question")
+	}
+	ed.press(runes("n"))
+	if ed.elev().mode != modeNormal {
+		t.Fatal("n did not stay")
+	}
+	ed.press(tea.KeyMsg{Type: tea.KeyCtrlC})
+	if cmd := ed.press(runes("y")); cmd == nil || !isQuit(cmd) {
+		t.Fatal("y did not quit")
+	}
+}
+
+func isQuit(cmd tea.Cmd) bool {
+	_, ok := cmd().(tea.QuitMsg)
+	return ok
+}
+
+// TestStaleFE: an FE answer for an older wall is dropped.
+func TestStaleFE(t *testing.T) {
+	ed := newEditor(t, demo.Wall(), "", 100, 30)
+	e := ed.elev()
+	old := e.fe.id
+	stale := runFE(old, ed.wall(), e.res)()
+	ed.press(runes("l"))
+	ed.press(stale)
+	if e.fe.res != nil {
+		t.Fatal("stale FE answer shown")
+	}
+	ed.press(feStartMsg{id: old})
+	if cmd := ed.press(feStartMsg{id: old}); cmd != nil {
+		t.Fatal("stale FE start ran")
+	}
+	fresh := runFE(e.fe.id, ed.wall(), e.res)()
+	ed.press(fresh)
+	if e.fe.res == nil {
+		t.Fatal("current FE answer dropped")
+	}
+}
+
+// TestSaveAndLayouts: save-as writes a file that reads back as the wall,
+// layouts made in the editor included.
+func TestSaveAndLayouts(t *testing.T) {
+	dir := t.TempDir()
+	path := filepath.Join(dir, "annex.toml")
+	ed := newEditor(t, demo.Wall(), "", 100, 30)
+	ed.press(runes("n"), runes("r"))
+	ed.typeText("door shifted")
+	ed.press(keyEnter, runes("l"))
+	ed.press(runes("s")) // the demo has no file: save as
+	if ed.elev().mode != modeForm {
+		t.Fatal("save without a file did not ask for one")
+	}
+	ed.typeText(path)
+	ed.press(keyEnter)
+	if ed.m.c.doc.dirty() || ed.m.c.doc.path != path {
+		t.Fatalf("not saved: %q, dirty %v; %s", ed.m.c.doc.path, ed.m.c.doc.dirty(), ed.elev().msg)
+	}
+	got, err := geometry.LoadFile(path)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if len(got.Layouts) != 3 || got.Layouts[got.Active].Name != "door shifted" {
+		t.Fatalf("layouts read back: %+v", got.Layouts)
+	}
+	if x := got.Openings()[0].X; !near(float64(x), float64(5*geometry.Foot)) {
+		t.Errorf("D1 read back at %v", x)
+	}
+}
