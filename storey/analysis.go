@@ -10,6 +10,7 @@ import (
 
 	"pierwise/geometry"
 	"pierwise/pier"
+	"pierwise/report"
 )
 
 // Wall is one wall of the storey with its answers.
@@ -206,7 +207,8 @@ func storeyError(s *Storey, err error) error {
 		for _, d := range []Direction{X, Y} {
 			for _, w := range s.Walls {
 				if w.Direction == d {
-					lines = append(lines, fmt.Sprintf("%s-walls on %s = %s", d, d.other(), fmtLen(w.Position, s.Units)))
+					u := report.UnitsFor(s.Units)
+					lines = append(lines, fmt.Sprintf("%s-walls on %s = %s %s", d, d.other(), num(u.CoordOf(float64(w.Position)), 2), u.Coord))
 					break
 				}
 			}

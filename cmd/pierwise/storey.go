@@ -1,0 +1,151 @@
+package main
+
+import (
+	"encoding/json"
+	"fmt"
+	"io"
+	"strings"
+
+	"pierwise/geometry"
+	"pierwise/report"
+	"pierwise/storey"
+)
+
+func init() {
+	storey.Version = version
+	register(command{
+		name:  "storey",
+		args:  "FILE [--json]",
+		short: "share a storey shear among its walls (rigid diaphragm with torsion) and give each wall's piers",
+		run:   runStorey,
+	})
+}
+
+func runStorey(e *env, args []string) error {
+	fs := newFlags(e, "storey")
+	asJSON := fs.Bool("json", false, "print JSON")
+	files, err := parseInterleaved(fs, args)
+	if err != nil {
+		return err
+	}
+	if len(files) != 1 {
+		return usagef("storey needs one FILE (a storey file), got %d", len(files))
+	}
+	a, err := storey.Load(files[0])
+	if err != nil {
+		return err
+	}
+	if *asJSON {
+		enc := json.NewEncoder(e.stdout)
+		enc.SetIndent("", "  ")
+		return enc.Encode(a.JSON())
+	}
+	writeStoreyTables(e.stdout, a)
+	return nil
+}
+
+// writeStoreyTables prints the storey's numbers for people; the full working
+// is in the report (pierwise report FILE).
+func writeStoreyTables(out io.Writer, a *storey.Analysis) {
+	s, d := a.Storey, a.Distribution
+	u := report.UnitsFor(s.Units)
+	title := s.Title
+	if title == "" {
+		title = s.Path
+	}
+	fmt.Fprintf(out, "%s  (%s)\n", title, s.Path)
+	fmt.Fprintf(out, "storey shear %s, mass centre (%.2f, %.2f) %s, centre of rigidity (%.2f, %.2f) %s\n",
+		geometry.FormatForce(s.Shear, s.Units), u.CoordOf(float64(s.MassCenter[0])), u.CoordOf(float64(s.MassCenter[1])), u.Coord,
+		u.CoordOf(d.CenterOfRigidity[0]), u.CoordOf(d.CenterOfRigidity[1]), u.Coord)
+	if a.Absolute {
+		fmt.Fprintf(out, "torsional rigidity J = %.0f %s per radian\n", u.MomentOf(d.J), u.Moment)
+	} else {
+		fmt.Fprintln(out, "rigidities: relative × thickness (not every wall has a modulus)")
+	}
+	for _, c := range d.Cases {
+		fmt.Fprintf(out, "\ncase %s: e = %.2f %s, V·e = %.1f %s\n", c.Name(), u.CoordOf(c.Eccentricity), u.Coord, u.MomentOf(c.Torque), u.Moment)
+		tw := newTextTable("wall", "dir", "R rel", "direct "+u.Force, "torsion "+u.Force, "total "+u.Force)
+		for i, w := range a.Walls {
+			sh := c.Shares[i]
+			direct := "-"
+			if w.Ref.Direction == c.Load {
+				direct = fmt.Sprintf("%.2f", u.ForceOf(geometry.Force(sh.Direct)))
+			}
+			tw.add(w.Name, w.Ref.Direction.String(), fmt.Sprintf("%.4f", w.Unit.Rigidity), direct,
+				fmt.Sprintf("%.2f", u.ForceOf(geometry.Force(sh.Torsional))), fmt.Sprintf("%.2f", u.ForceOf(geometry.Force(sh.Total()))))
+		}
+		tw.write(out)
+	}
+	fmt.Fprintln(out, "\ndesign shears (worst case, never below the direct shear)")
+	tw := newTextTable("wall", "dir", "direct "+u.Force, "design "+u.Force, "governs")
+	for _, w := range a.Walls {
+		tw.add(w.Name, w.Ref.Direction.String(), fmt.Sprintf("%.2f", u.ForceOf(geometry.Force(w.Design.Direct))),
+			fmt.Sprintf("%.2f", u.ForceOf(geometry.Force(w.Design.Shear))), storey.CaseName(d, w.Design.Case))
+	}
+	tw.write(out)
+	for _, w := range a.Walls {
+		fmt.Fprintf(out, "\n%s under %s:\n", w.Name, geometry.FormatForce(geometry.Force(w.Design.Shear), s.Units))
+		leaves := w.Loaded.Leaves()
+		if len(leaves) == 0 {
+			fmt.Fprintln(out, "  solid wall, no piers")
+			continue
+		}
+		tw := newTextTable("pier", "h/L", "support", "share", "V "+u.Force, "M "+u.Moment)
+		for _, p := range leaves {
+			support := "cantilever"
+			if p.Support == geometry.Fixed {
+				support = "fixed"
+			}
+			tw.add(p.Name, fmt.Sprintf("%.2f", p.Ratio()), support, fmt.Sprintf("%.1f%%", 100*p.Share),
+				fmt.Sprintf("%.2f", u.ForceOf(p.Shear)), fmt.Sprintf("%.1f", u.MomentOf(p.Moment)))
+		}
+		tw.write(out)
+	}
+	for _, msg := range a.Warnings {
+		fmt.Fprintln(out, "warning:", msg)
+	}
+	fmt.Fprintln(out, "\nResults support, and do not replace, the judgement of a licensed engineer; local codes govern.")
+}
+
+// textTable is a small left/right aligned table for the storey command:
+// the first column and text columns left, numbers right.
+type textTable struct {
+	head []string
+	rows [][]string
+}
+
+func newTextTable(head ...string) *textTable { return &textTable{head: head} }
+
+func (t *textTable) add(cells ...string) { t.rows = append(t.rows, cells) }
+
+func (t *textTable) write(out io.Writer) {
+	w := make([]int, len(t.head))
+	for i, h := range t.head {
+		w[i] = len([]rune(h))
+	}
+	for _, r := range t.rows {
+		for i, c := range r {
+			w[i] = max(w[i], len([]rune(c)))
+		}
+	}
+	line := func(cells []string) {
+		var b strings.Builder
+		b.WriteString("  ")
+		for i, c := range cells {
+			pad := strings.Repeat(" ", w[i]-len([]rune(c)))
+			if i > 0 {
+				b.WriteString("  ")
+			}
+			if i == 0 || i == 1 || i == 2 && t.head[2] == "support" || t.head[i] == "governs" {
+				b.WriteString(c + pad)
+			} else {
+				b.WriteString(pad + c)
+			}
+		}
+		fmt.Fprintln(out, strings.TrimRight(b.String(), " "))
+	}
+	line(t.head)
+	for _, r := range t.rows {
+		line(r)
+	}
+}

@@ -1,0 +1,113 @@
+package main
+
+import (
+	"encoding/json"
+	"math"
+	"os"
+	"path/filepath"
+	"strings"
+	"testing"
+)
+
+const workshop = "../../testdata/storey/workshop.toml"
+
+// pierwise storey --json on the invented workshop: the keys of issue 6, and
+// the statics of the rigid diaphragm checked on the printed numbers (direct
+// shears of one direction sum to the storey shear, Taly 2nd ed. §7.9; the
+// design shear is never below the direct shear, common practice).
+func TestStoreyJSON(t *testing.T) {
+	code, out, errs := runCLI("storey", workshop, "--json")
+	if code != exitOK {
+		t.Fatalf("exit %d: %s", code, errs)
+	}
+	var s struct {
+		Shear            float64   `json:"shear"`
+		CenterOfRigidity []float64 `json:"center_of_rigidity"`
+		Walls            []struct {
+			Name             string   `json:"name"`
+			Direction        string   `json:"direction"`
+			Position         float64  `json:"position"`
+			RigidityRelative float64  `json:"rigidity_relative"`
+			Rigidity         float64  `json:"rigidity"`
+			DirectShear      *float64 `json:"direct_shear"`
+			DesignShear      *float64 `json:"design_shear"`
+			Piers            []struct {
+				Share float64 `json:"share"`
+				Shear float64 `json:"shear"`
+			} `json:"piers"`
+		} `json:"walls"`
+	}
+	if err := json.Unmarshal([]byte(out), &s); err != nil {
+		t.Fatalf("not JSON: %v\n%s", err, out)
+	}
+	if s.Shear != 120 || len(s.CenterOfRigidity) != 2 || len(s.Walls) != 5 {
+		t.Fatalf("shear %g kip, centre %v, %d walls", s.Shear, s.CenterOfRigidity, len(s.Walls))
+	}
+	sum := map[string]float64{}
+	moment := map[string]float64{}
+	rsum := map[string]float64{}
+	for _, w := range s.Walls {
+		if w.Name == "" || w.DirectShear == nil || w.DesignShear == nil || w.RigidityRelative <= 0 {
+			t.Fatalf("wall %+v lacks a key", w)
+		}
+		sum[w.Direction] += *w.DirectShear
+		moment[w.Direction] += w.Rigidity * w.Position
+		rsum[w.Direction] += w.Rigidity
+		if *w.DesignShear < *w.DirectShear-1e-9 {
+			t.Errorf("%s: design %g below direct %g", w.Name, *w.DesignShear, *w.DirectShear)
+		}
+	}
+	for _, d := range []string{"x", "y"} {
+		if math.Abs(sum[d]-120) > 1e-6 {
+			t.Errorf("direct shears along %s sum to %g kip, want 120", d, sum[d])
+		}
+	}
+	// x_R = Σ R·x / Σ R over the y-walls (DESIGN §10), from the printed values.
+	if xr := moment["y"] / rsum["y"]; math.Abs(xr-s.CenterOfRigidity[0]) > 1e-6 {
+		t.Errorf("center_of_rigidity x %g, want Σ R·x / Σ R = %g", s.CenterOfRigidity[0], xr)
+	}
+	if yr := moment["x"] / rsum["x"]; math.Abs(yr-s.CenterOfRigidity[1]) > 1e-6 {
+		t.Errorf("center_of_rigidity y %g, want Σ R·y / Σ R = %g", s.CenterOfRigidity[1], yr)
+	}
+}
+
+func TestStoreyTable(t *testing.T) {
+	code, out, errs := runCLI("storey", workshop)
+	if code != exitOK {
+		t.Fatalf("exit %d: %s", code, errs)
+	}
+	for _, want := range []string{"centre of rigidity", "case x +acc", "case y -acc", "design shears", "Partition under", "licensed engineer"} {
+		if !strings.Contains(out, want) {
+			t.Errorf("output lacks %q:\n%s", want, out)
+		}
+	}
+}
+
+func TestStoreyExitStatus(t *testing.T) {
+	dir := t.TempDir()
+	bad := filepath.Join(dir, "bad.toml")
+	data, err := os.ReadFile(workshop)
+	if err != nil {
+		t.Fatal(err)
+	}
+	text := strings.Replace(string(data), `direction = "y"`, `direction = "north"`, 1)
+	if err := os.WriteFile(bad, []byte(text), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	for _, c := range []struct {
+		args []string
+		code int
+		msg  string
+	}{
+		{[]string{"storey"}, exitUsage, "one FILE"},
+		{[]string{"storey", workshop, workshop}, exitUsage, "one FILE"},
+		{[]string{"storey", "--bogus", workshop}, exitUsage, "bogus"},
+		{[]string{"storey", bad}, exitInput, bad + ":27: wall[3].direction"},
+		{[]string{"storey", filepath.Join(dir, "none.toml")}, exitInput, "none.toml"},
+	} {
+		code, _, errs := runCLI(c.args...)
+		if code != c.code || !strings.Contains(errs, c.msg) {
+			t.Errorf("%v: exit %d, stderr %q; want %d with %q", c.args, code, errs, c.code, c.msg)
+		}
+	}
+}
