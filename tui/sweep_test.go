@@ -1,0 +1,159 @@
+package tui
+
+import (
+	"fmt"
+	"os"
+	"path/filepath"
+	"strings"
+	"testing"
+
+	tea "github.com/charmbracelet/bubbletea"
+	"github.com/charmbracelet/x/ansi"
+
+	"pierwise/demo"
+	"pierwise/geometry"
+	"pierwise/study"
+)
+
+// sweepRun opens the sweep screen on the cmpCommon wall and runs its
+// command, as the root would.
+func sweepRun(t *testing.T, c *common, w, h int) *sweepScreen {
+	t.Helper()
+	s := newSweepScreen(c)
+	s.setSize(w, h)
+	cmd := s.start()
+	if cmd == nil {
+		t.Fatal("no sweep command")
+	}
+	s.update(cmd())
+	return s
+}
+
+func TestSweepScreenGolden(t *testing.T) {
+	for _, size := range [][2]int{{80, 24}, {120, 36}} {
+		c := cmpCommon("annex.toml")
+		s := sweepRun(t, c, size[0], size[1])
+		s.update(cmpKey("tab")) // W1
+		s.update(s.start()())
+		v := ansi.Strip(s.view())
+		cmpCheckSize(t, v, size[0], size[1])
+		cmpGoldenView(t, fmt.Sprintf("sweep_%dx%d.golden", size[0], size[1]), v)
+	}
+}
+
+func TestSweepScreenPlace(t *testing.T) {
+	c := cmpCommon("annex.toml")
+	s := sweepRun(t, c, 80, 24)
+	s.update(cmpKey("tab")) // W1
+	s.update(s.start()())
+	want, err := study.Sweep(c.doc.wall, "W1", study.AlongX, steps(geometry.US)[defaultStep(geometry.US)])
+	if err != nil {
+		t.Fatal(err)
+	}
+	if len(s.pts) != len(want) {
+		t.Fatalf("%d points, study.Sweep gives %d", len(s.pts), len(want))
+	}
+	s.update(cmpKey("b"))
+	best := study.BestIndex(want)
+	if s.cursor != best {
+		t.Fatalf("b: cursor %d, best %d", s.cursor, best)
+	}
+	_, cmd := s.update(cmpKey("enter"))
+	if cmd == nil {
+		t.Fatal("enter: no sweep after the move")
+	}
+	if got := c.doc.wall.Openings()[1].X; got != want[best].X || !c.doc.dirty() {
+		t.Errorf("W1 at %g (dirty %v), want %g", got, c.doc.dirty(), want[best].X)
+	}
+	s.update(cmd())
+	if cur := study.CurrentIndex(s.pts); cur < 0 || s.pts[cur].X != want[best].X {
+		t.Errorf("after the move the current point is %d", cur)
+	}
+	// Undo on the document brings W1 back.
+	if !c.doc.undoChange() || c.doc.wall.Openings()[1].X != 12*geometry.Foot {
+		t.Errorf("undo: W1 at %g", c.doc.wall.Openings()[1].X)
+	}
+}
+
+func TestSweepScreenStaleAndAxis(t *testing.T) {
+	c := cmpCommon("annex.toml")
+	s := sweepRun(t, c, 80, 24)
+	first := s.start()               // request 1 (D1 along x)
+	_, axis := s.update(cmpKey("a")) // request 2 (D1 along y)
+	if axis == nil {
+		t.Fatal("a: no sweep")
+	}
+	s.update(first()) // stale: dropped
+	if !s.running {
+		t.Error("a stale answer was taken")
+	}
+	s.update(axis())
+	if s.running || len(s.pts) == 0 {
+		t.Fatalf("no points along y")
+	}
+	for _, p := range s.pts {
+		if p.X != 4*geometry.Foot {
+			t.Errorf("along y the left edge moved: %g", p.X)
+		}
+	}
+	v := ansi.Strip(s.view())
+	cmpCheckSize(t, v, 80, 24)
+	if !strings.Contains(v, "axis y") || !strings.Contains(v, "sill") {
+		t.Errorf("view along y:\n%s", v)
+	}
+}
+
+func TestSweepScreenSnapshot(t *testing.T) {
+	dir := t.TempDir()
+	c := cmpCommon(filepath.Join(dir, "annex.toml"))
+	s := sweepRun(t, c, 80, 24)
+	_, cmd := s.update(cmpKey("p"))
+	if cmd == nil {
+		t.Fatal("p: no command")
+	}
+	msg := cmd().(snapshotDoneMsg)
+	if msg.err != nil {
+		t.Fatal(msg.err)
+	}
+	s.update(msg)
+	if filepath.Base(msg.path) != "annex-sweep-D1-x-20261201-233005.txt" {
+		t.Errorf("snapshot at %s", msg.path)
+	}
+	data, err := os.ReadFile(msg.path)
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, want := range []string{"Sweep of D1 along x", "current", "best", "licensed engineer"} {
+		if !strings.Contains(string(data), want) {
+			t.Errorf("snapshot lacks %q:\n%s", want, data)
+		}
+	}
+	if !strings.Contains(ansi.Strip(s.view()), "annex-sweep-D1") {
+		t.Error("the screen does not say where the table went")
+	}
+}
+
+func TestSweepOpensFromElevation(t *testing.T) {
+	m := newModel(demo.Wall(), Options{Path: "annex.toml", OnDisk: true})
+	m.Update(tea.WindowSizeMsg{Width: 80, Height: 24})
+	_, cmd := m.Update(cmpKey("G"))
+	for i := 0; cmd != nil && i < 6; i++ {
+		msg := cmd()
+		if b, ok := msg.(tea.BatchMsg); ok {
+			for _, c := range b {
+				if c != nil {
+					_, cmd = m.Update(c())
+				}
+			}
+			continue
+		}
+		_, cmd = m.Update(msg)
+	}
+	s, ok := m.top().(*sweepScreen)
+	if !ok {
+		t.Fatalf("G did not open the sweep; top is %T", m.top())
+	}
+	if s.running || len(s.pts) == 0 {
+		t.Errorf("the sweep did not run: running %v, %d points", s.running, len(s.pts))
+	}
+}
