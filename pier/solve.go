@@ -6,6 +6,7 @@ import (
 	"math"
 	"slices"
 	"strconv"
+	"strings"
 
 	"pierwise/geometry"
 )
@@ -28,7 +29,6 @@ type solver struct {
 	thick  float64 // wall thickness, metres (0 when unknown)
 	res    *Result
 	parent []int // per pier: index of the parent pier, -1 at the top level
-	warned map[string]bool
 }
 
 // Solve runs the classic method of DESIGN §3 on the active layout of w. It
@@ -58,16 +58,19 @@ func Solve(w *geometry.Wall) (*Result, error) {
 
 	wall := w.Rect()
 	s := &solver{
-		p:      p,
-		eps:    tolerance * math.Max(wall.W(), wall.H()),
-		thick:  float64(w.Thickness),
-		res:    &Result{Moduli: mod},
-		warned: map[string]bool{},
+		p:     p,
+		eps:   tolerance * math.Max(wall.W(), wall.H()),
+		thick: float64(w.Thickness),
+		res: &Result{
+			Moduli: mod,
+			// Typical layouts have about one pier per opening and a few
+			// steps per band; larger ones grow the slices.
+			Piers: make([]Pier, 0, len(ops)+len(ops)/2+2),
+			Steps: make([]Step, 0, len(ops)/2+4),
+		},
+		parent: make([]int, 0, len(ops)+len(ops)/2+2),
 	}
-	if name, cut := s.cutAcross(wall, ops); cut {
-		return nil, &CutError{Region: "wall", Opening: name}
-	}
-	if name, cut := s.cutUpright(wall, ops); cut {
+	if name, cut := s.cutWall(wall, ops); cut {
 		return nil, &CutError{Region: "wall", Opening: name}
 	}
 	d, cut, err := s.region(wall, w.Support, ops, "wall", -1)
@@ -160,9 +163,9 @@ func (s *solver) region(rect geometry.Rect, sup geometry.Support, ops []opening,
 
 		spans, allCuts := s.piersOf(rect, b, ops)
 		if len(spans) == 0 {
-			return Parts{}, false, &StaggeredError{Region: name, Y0: b.y0, Y1: b.y1, Openings: b.names}
+			return Parts{}, false, &StaggeredError{Region: name, Y0: b.y0, Y1: b.y1, Openings: bandNames(b, ops)}
 		}
-		s.spandrels(rect, bands, bi, name)
+		s.spandrels(rect, bands, bi, name, ops)
 
 		idx := make([]int, 0, len(spans))
 		names := make([]string, 0, len(spans))
@@ -217,7 +220,7 @@ func (s *solver) region(rect geometry.Rect, sup geometry.Support, ops []opening,
 		s.step(StepPiers, name, bandRect, bandSup, dBand, names)
 		if allCuts {
 			s.res.Steps[len(s.res.Steps)-1].AllCuts = true
-			s.warn(fmt.Sprintf("in %s no opening of %s spans the full height of their band: each is taken as a cut and the piers between them as the band's full height, a rough reading of staggered openings", regionName(name), s.bandNames(b)))
+			s.warn(fmt.Sprintf("in %s no opening of %s spans the full height of their band: each is taken as a cut and the piers between them as the band's full height, a rough reading of staggered openings", regionName(name), strings.Join(bandNames(b, ops), ", ")))
 		}
 	}
 	return d, false, nil
@@ -232,7 +235,6 @@ func (s *solver) step(kind StepKind, region string, r geometry.Rect, sup geometr
 type band struct {
 	y0, y1 float64
 	ops    []int
-	names  []string
 }
 
 // bands projects the openings on the vertical axis and merges overlapping
@@ -244,15 +246,25 @@ func (s *solver) bands(ops []opening) []band {
 	}
 	slices.SortStableFunc(order, func(a, b int) int { return cmpFloat(ops[a].r.Y0, ops[b].r.Y0) })
 	var out []band
-	for _, i := range order {
+	start := 0
+	for k, i := range order {
 		o := ops[i].r
 		if n := len(out); n > 0 && o.Y0 <= out[n-1].y1+s.eps {
 			out[n-1].y1 = math.Max(out[n-1].y1, o.Y1)
-			out[n-1].ops = append(out[n-1].ops, i)
-			out[n-1].names = append(out[n-1].names, ops[i].name)
+			out[n-1].ops = order[start : k+1 : k+1] // a band's openings are consecutive in order
 			continue
 		}
-		out = append(out, band{y0: o.Y0, y1: o.Y1, ops: []int{i}, names: []string{ops[i].name}})
+		start = k
+		out = append(out, band{y0: o.Y0, y1: o.Y1, ops: order[k : k+1 : k+1]})
+	}
+	return out
+}
+
+// bandNames lists the names of a band's openings.
+func bandNames(b band, ops []opening) []string {
+	out := make([]string, len(b.ops))
+	for i, k := range b.ops {
+		out[i] = ops[k].name
 	}
 	return out
 }
@@ -278,29 +290,38 @@ func (s *solver) piersOf(rect geometry.Rect, b band, ops []opening) (out []span,
 	}
 	isCut := func(o geometry.Rect) bool { return !anySpans || spanning(o) }
 
-	var cuts []geometry.Rect
+	cuts := make([]geometry.Rect, 0, len(b.ops))
 	var inner []opening
 	for _, k := range b.ops {
 		if isCut(ops[k].r) {
 			cuts = append(cuts, ops[k].r)
 		} else {
+			if inner == nil {
+				inner = make([]opening, 0, len(b.ops))
+			}
 			inner = append(inner, ops[k])
 		}
 	}
 	slices.SortFunc(cuts, func(a, c geometry.Rect) int { return cmpFloat(a.X0, c.X0) })
 
+	out = make([]span, 0, len(cuts)+1)
+	// Each inner opening lies in one pier, so one buffer holds them all.
+	clipped := make([]opening, 0, len(inner))
 	add := func(x0, x1 float64) {
 		if x1-x0 <= s.eps {
 			return // zero-width pier between touching openings
 		}
-		sp := span{rect: geometry.Rect{X0: x0, Y0: b.y0, X1: x1, Y1: b.y1}}
+		start := len(clipped)
 		for _, o := range inner {
 			if o.r.X0 < x1-s.eps && o.r.X1 > x0+s.eps {
-				c := o
-				c.r.X0 = math.Max(c.r.X0, x0)
-				c.r.X1 = math.Min(c.r.X1, x1)
-				sp.ops = append(sp.ops, c)
+				o.r.X0 = math.Max(o.r.X0, x0)
+				o.r.X1 = math.Min(o.r.X1, x1)
+				clipped = append(clipped, o)
 			}
+		}
+		sp := span{rect: geometry.Rect{X0: x0, Y0: b.y0, X1: x1, Y1: b.y1}}
+		if len(clipped) > start {
+			sp.ops = clipped[start:len(clipped):len(clipped)]
 		}
 		out = append(out, sp)
 	}
@@ -342,41 +363,55 @@ func (s *solver) cutAcross(rect geometry.Rect, ops []opening) (string, bool) {
 	return "", false
 }
 
-// cutUpright reports whether a chain of touching openings runs from the
-// wall's base to its top away from both ends, splitting the wall into two
-// walls (a full-height door, say). A chain at an end only shortens the wall
-// and is left to the classic method.
-func (s *solver) cutUpright(rect geometry.Rect, ops []opening) (string, bool) {
+// cutWall runs both wall checks on one grouping of the openings into
+// chains of touching openings (even at a corner): a chain from the left end
+// to the right end leaves no solid path from base to top (it names the
+// opening that completes the chain); a chain from the base to the top away
+// from both ends splits the wall into two walls (a full-height door, say).
+// A chain at an end only shortens the wall and is left to the classic
+// method.
+func (s *solver) cutWall(rect geometry.Rect, ops []opening) (string, bool) {
 	n := len(ops)
-	uf := newUnionFind(n)
-	for i := range ops {
+	uf := newUnionFind(n + 2)
+	left, right := n, n+1
+	across := ""
+	for i, o := range ops {
+		if o.r.X0 <= rect.X0+s.eps {
+			uf.union(i, left)
+		}
+		if o.r.X1 >= rect.X1-s.eps {
+			uf.union(i, right)
+		}
 		for j := range i {
-			if s.touch(ops[i].r, ops[j].r) {
+			if s.touch(o.r, ops[j].r) {
 				uf.union(i, j)
 			}
 		}
+		if across == "" && uf.find(left) == uf.find(right) {
+			across = o.name
+		}
+	}
+	if across != "" {
+		return across, true
 	}
 	const (
 		base = 1 << iota
 		top
-		end
 	)
-	flags := make([]int, n)
+	flags := make([]uint8, n+2)
 	for i, o := range ops {
-		f := 0
+		var f uint8
 		if o.r.Y0 <= rect.Y0+s.eps {
 			f |= base
 		}
 		if o.r.Y1 >= rect.Y1-s.eps {
 			f |= top
 		}
-		if o.r.X0 <= rect.X0+s.eps || o.r.X1 >= rect.X1-s.eps {
-			f |= end
-		}
 		flags[uf.find(i)] |= f
 	}
+	ends := [2]int{uf.find(left), uf.find(right)}
 	for i, o := range ops {
-		if flags[uf.find(i)] == base|top {
+		if root := uf.find(i); flags[root] == base|top && root != ends[0] && root != ends[1] {
 			return o.name, true
 		}
 	}

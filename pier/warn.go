@@ -2,6 +2,7 @@ package pier
 
 import (
 	"fmt"
+	"slices"
 	"strings"
 
 	"pierwise/geometry"
@@ -21,17 +22,16 @@ const (
 
 // warn records a warning once.
 func (s *solver) warn(msg string) {
-	if s.warned[msg] {
+	if slices.Contains(s.res.Warnings, msg) {
 		return
 	}
-	s.warned[msg] = true
 	s.res.Warnings = append(s.res.Warnings, msg)
 }
 
 // spandrels warns when the solid above or below band bi of a region is
 // shallower than the band's piers, which the method assumes it fixes
 // against rotation.
-func (s *solver) spandrels(rect geometry.Rect, bands []band, bi int, region string) {
+func (s *solver) spandrels(rect geometry.Rect, bands []band, bi int, region string, ops []opening) {
 	b := bands[bi]
 	h := b.y1 - b.y0
 	where := "the wall"
@@ -44,19 +44,19 @@ func (s *solver) spandrels(rect geometry.Rect, bands []band, bi int, region stri
 	}
 	if depth := top - b.y1; depth > s.eps && depth < h {
 		s.warn(fmt.Sprintf("in %s the spandrel above the openings %s is %.2f times as deep as the piers beside them are tall: it is assumed to keep them from rotating, which a shallow spandrel does not do, so their rigidity is overestimated",
-			where, s.bandNames(b), depth/h))
+			where, s.bandNames(b, ops), depth/h))
 	}
 	if bi > 0 {
 		if depth := b.y0 - bands[bi-1].y1; depth < h {
 			s.warn(fmt.Sprintf("in %s the solid between the openings %s and %s below is %.2f times as deep as the piers above it are tall: it is assumed rigid, which it is not",
-				where, s.bandNames(b), s.bandNames(bands[bi-1]), depth/h))
+				where, s.bandNames(b, ops), s.bandNames(bands[bi-1], ops), depth/h))
 		}
 	}
 }
 
 // bandNames lists a band's openings for a warning.
-func (s *solver) bandNames(b band) string {
-	return strings.Join(b.names, ", ")
+func (s *solver) bandNames(b band, ops []opening) string {
+	return strings.Join(bandNames(b, ops), ", ")
 }
 
 // assumptions adds the warnings that look at the finished decomposition.
