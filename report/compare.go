@@ -11,6 +11,7 @@ import (
 
 	"pierwise/geometry"
 	"pierwise/pier"
+	"pierwise/pier/fe"
 	"pierwise/sketch"
 	"pierwise/study"
 )
@@ -80,6 +81,20 @@ func CompareReport(out io.Writer, c *study.Comparison, info CompareInfo) error {
 		w.wrapped("  ", "Shares are fractions of the wall shear. Change is in percentage points. "+
 			"A pier of one layout matches the pier of the other that overlaps it most; "+
 			"the names P1, P2, ... are given left to right in each layout and may differ.")
+	}
+
+	if len(c.Piers) > 0 && (c.Before.FE != nil || c.After.FE != nil) {
+		w.section("Leaf piers, finite-element shares")
+		ft := &table{
+			head:  []string{"before", "after", "classic", "FE", "classic", "FE"},
+			right: []bool{false, false, true, true, true, true},
+		}
+		for _, r := range ComparePierRows(c) {
+			ft.add(r.Before, r.After, r.ShareBefore, cmpOr(r.FEBefore), r.ShareAfter, cmpOr(r.FEAfter))
+		}
+		ft.write(w, "  ")
+		w.blank()
+		w.wrapped("  ", "FE shares are the shear through each pier's mid-height section of the plane-stress model, as fractions of the wall shear; columns 3-4 are the before layout, 5-6 the after layout.")
 	}
 
 	w.section("Warnings")
@@ -230,6 +245,36 @@ func CompareRows(c *study.Comparison) []CompareRow {
 		}
 		add("drift_check", "Drift check", check(rb), check(ra), "")
 	}
+	if b.FE != nil || a.FE != nil || b.FEErr != nil || a.FEErr != nil {
+		feVal := func(s *study.Side, f func(*fe.Result) string) string {
+			switch {
+			case s.FE != nil:
+				return f(s.FE)
+			case s.FEErr != nil:
+				return "no answer"
+			}
+			return cmpDash
+		}
+		rel := func(r *fe.Result) string { return cmpSig(r.Rigidity, 4) }
+		ch := ""
+		if b.FE != nil && a.FE != nil {
+			ch = cmpPct(b.FE.Rigidity, a.FE.Rigidity)
+		}
+		add("fe_rigidity_relative", "FE relative rigidity", feVal(b, rel), feVal(a, rel), ch)
+		diff := func(r *fe.Result) string {
+			if rb == nil && ra == nil {
+				return cmpDash
+			}
+			return fmt.Sprintf("%+.1f %%", 100*r.Difference)
+		}
+		if (b.FE != nil && rb != nil) || (a.FE != nil && ra != nil) {
+			add("fe_difference", "Classic above FE by", feVal(b, diff), feVal(a, diff), "")
+		}
+		mesh := func(r *fe.Result) string {
+			return fmt.Sprintf("%s %s", r.Element, geometry.FormatLength(r.Mesh, sys))
+		}
+		add("fe_mesh", "FE element, mesh", feVal(b, mesh), feVal(a, mesh), "")
+	}
 	return rows
 }
 
@@ -239,6 +284,7 @@ type ComparePierRow struct {
 	ShareBefore, ShareAfter string // "28.1 %"
 	Change                  string // "+1.9 pt"
 	ShearBefore, ShearAfter string // pier shear with unit, "-" without a load
+	FEBefore, FEAfter       string // FE shares when the check ran, else ""
 	Note                    string // "appears at x 12.0-18.0 ft", "vanishes …"
 	Status                  study.Status
 }
@@ -251,6 +297,19 @@ func ComparePierRows(c *study.Comparison) []ComparePierRow {
 	for _, pc := range c.Piers {
 		r := ComparePierRow{Before: cmpDash, After: cmpDash, ShareBefore: cmpDash, ShareAfter: cmpDash,
 			ShearBefore: cmpDash, ShearAfter: cmpDash, Status: pc.Status()}
+		feShare := func(s *study.Side, p *pier.Pier) string {
+			if s.FE == nil {
+				return ""
+			}
+			if p == nil {
+				return cmpDash
+			}
+			if v, ok := s.FEShare(p.Name); ok {
+				return cmpShare(v)
+			}
+			return cmpDash
+		}
+		r.FEBefore, r.FEAfter = feShare(&c.Before, pc.Before), feShare(&c.After, pc.After)
 		if p := pc.Before; p != nil {
 			r.Before, r.ShareBefore = p.Name, cmpShare(p.Share)
 			if c.Before.Result.HasLoad {
@@ -291,6 +350,15 @@ func CompareWarnings(c *study.Comparison) []string {
 	for _, s := range []*study.Side{&c.Before, &c.After} {
 		if s.Err != nil {
 			out = append(out, fmt.Sprintf("%s: the classic method has no answer: %v", s.Label, s.Err))
+		}
+	}
+	for _, s := range []*study.Side{&c.Before, &c.After} {
+		if s.FEErr != nil {
+			out = append(out, fmt.Sprintf("%s: the finite-element check has no answer: %v", s.Label, s.FEErr))
+		}
+		if s.FE != nil && s.Result != nil && math.Abs(s.FE.Difference) > fe.WarnDifference {
+			out = append(out, fmt.Sprintf("%s: the classic rigidity differs from the finite-element model by %+.0f %%, more than %.0f %%: the rigid-spandrel assumption is weak for this layout; look at the pier shares of both methods.",
+				s.Label, 100*s.FE.Difference, 100*fe.WarnDifference))
 		}
 	}
 	// A warning both layouts share is said once.
@@ -353,6 +421,13 @@ func cmpPct(vb, va float64) string {
 	s := fmt.Sprintf("%+.1f %%", 100*ch)
 	if s == "-0.0 %" {
 		s = "+0.0 %"
+	}
+	return s
+}
+
+func cmpOr(s string) string {
+	if s == "" {
+		return cmpDash
 	}
 	return s
 }

@@ -10,6 +10,7 @@ import (
 	"time"
 
 	"pierwise/geometry"
+	"pierwise/pier/fe"
 	"pierwise/study"
 )
 
@@ -139,5 +140,32 @@ func TestCompareRowsMatchResults(t *testing.T) {
 	}
 	if rel.Before != cmpSig(c.Before.Result.Rigidity, 4) || rel.After != cmpSig(c.After.Result.Rigidity, 4) {
 		t.Errorf("row %+v, results %g %g", *rel, c.Before.Result.Rigidity, c.After.Result.Rigidity)
+	}
+}
+
+// With the FE check the report carries each side's FE rigidity and shares,
+// as computed (no golden file: the FE numbers belong to package fe).
+func TestCompareReportFE(t *testing.T) {
+	w := cmpTestWall()
+	opt := study.Options{FE: true, FEOptions: fe.Options{Mesh: geometry.Foot}}
+	c, err := study.CompareWith(study.WithLayout(w, 0), study.WithLayout(w, 1), opt)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if c.Before.FE == nil || c.After.FE == nil {
+		t.Fatalf("FE: %v / %v", c.Before.FEErr, c.After.FEErr)
+	}
+	var buf bytes.Buffer
+	if err := CompareReport(&buf, c, CompareInfo{}); err != nil {
+		t.Fatal(err)
+	}
+	text := buf.String()
+	for _, want := range []string{
+		"FE relative rigidity", cmpSig(c.Before.FE.Rigidity, 4), cmpSig(c.After.FE.Rigidity, 4),
+		"Leaf piers, finite-element shares", cmpShare(c.Before.FE.Piers[0].Share),
+	} {
+		if !strings.Contains(text, want) {
+			t.Errorf("report lacks %q:\n%s", want, text)
+		}
 	}
 }

@@ -8,6 +8,7 @@ import (
 
 	"pierwise/geometry"
 	"pierwise/pier"
+	"pierwise/pier/fe"
 )
 
 // Side is one solved layout of a comparison.
@@ -17,6 +18,25 @@ type Side struct {
 	Wall   *geometry.Wall // the wall with the compared layout active
 	Result *pier.Result   // the classic method's answer; nil when Err is set
 	Err    error          // why the classic method has no answer (*pier.CutError, *pier.StaggeredError, …)
+
+	// The finite-element check, when Options.FE asked for it. FE may exist
+	// where the classic method has none (staggered openings).
+	FE    *fe.Result
+	FEErr error
+}
+
+// FEShare returns the FE share of the leaf pier called name, and false when
+// there is no FE answer for it.
+func (s *Side) FEShare(name string) (float64, bool) {
+	if s.FE == nil {
+		return 0, false
+	}
+	for _, p := range s.FE.Piers {
+		if p.Name == name {
+			return p.Share, true
+		}
+	}
+	return 0, false
 }
 
 // Layout returns the name of the side's active layout.
@@ -89,7 +109,10 @@ func (p PierChange) ShareChange() float64 {
 }
 
 // Options choose what Compare computes beyond the classic method.
-type Options struct{}
+type Options struct {
+	FE        bool       // also run the finite-element check on both sides
+	FEOptions fe.Options // its mesh and element
+}
 
 // Compare solves two walls, or two layouts of one wall (pass copies with
 // Active set, see WithLayout), and lines them up. A layout the classic method
@@ -120,6 +143,12 @@ func CompareWith(a, b *geometry.Wall, opt Options) (*Comparison, error) {
 		if side.Err != nil {
 			side.Result = nil
 		}
+		if opt.FE {
+			side.FE, side.FEErr = fe.Solve(w, side.Result, opt.FEOptions)
+			if side.FEErr != nil {
+				side.FE = nil
+			}
+		}
 	}
 	if c.Before.OK() && c.After.OK() {
 		c.Piers = MatchPiers(c.Before.Result.Leaves(), c.After.Result.Leaves())
@@ -134,6 +163,15 @@ func Change(before, after float64) (float64, bool) {
 		return 0, false
 	}
 	return (after - before) / before, true
+}
+
+// FERigidityChange returns the relative change of the FE relative rigidity,
+// and false when a side has no FE answer.
+func (c *Comparison) FERigidityChange() (float64, bool) {
+	if c.Before.FE == nil || c.After.FE == nil {
+		return 0, false
+	}
+	return Change(c.Before.FE.Rigidity, c.After.FE.Rigidity)
 }
 
 // RigidityChange returns the relative change of the wall's relative
