@@ -74,6 +74,7 @@
 //
 // Marshal writes a tidy file in the wall's units; Parse(Marshal(w)) gives
 // back w exactly (every float64 bit for bit) for every valid wall. Save
-// writes atomically through a temporary file in the same directory.
-// Comments of the original file are not kept.
+// writes atomically through a temporary file in the same directory and, over
+// an existing wall file, keeps its comments and unchanged lines where
+// practical (MarshalKeeping).
 package geometry

@@ -559,10 +559,17 @@ func marshalable(w *Wall) error {
 // Save writes the wall file atomically: a temporary file in the same
 // directory, flushed to disk, then renamed over path. An existing file keeps
 // its permission bits; a symbolic link keeps pointing at the file it names.
+// When path already holds a wall file, its comments and unchanged lines are
+// kept where practical (see MarshalKeeping).
 func Save(path string, w *Wall) error {
 	data, err := Marshal(w)
 	if err != nil {
 		return err
+	}
+	if old, err := os.ReadFile(path); err == nil {
+		if kept, err := MarshalKeeping(old, w); err == nil {
+			data = kept
+		}
 	}
 	return writeAtomic(path, data)
 }
