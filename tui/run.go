@@ -40,19 +40,28 @@ func newModel(w *geometry.Wall, opt Options) *root {
 // EditFile opens the wall file at path in the editor; a missing file is
 // created first with NewWall.
 func EditFile(path string, opts ...tea.ProgramOption) error {
-	w, err := loadWall(path)
-	msg := ""
+	w, msg, err := openFile(path)
+	if err != nil {
+		return err
+	}
+	return Edit(w, Options{Path: path, OnDisk: true, Message: msg, Program: opts})
+}
+
+// openFile reads the wall at path, or writes a new plain wall there when
+// there is no file; msg says when it did.
+func openFile(path string) (w *geometry.Wall, msg string, err error) {
+	w, err = loadWall(path)
 	switch {
 	case errors.Is(err, fs.ErrNotExist):
 		w = NewWall(geometry.US)
 		if err := saveWall(path, w); err != nil {
-			return err
+			return nil, "", err
 		}
-		msg = fmt.Sprintf("created %s with a plain wall: w adds a window, d a door, E edits the wall", path)
+		return w, fmt.Sprintf("created %s with a plain wall: w adds a window, d a door, E edits the wall", path), nil
 	case err != nil:
-		return err
+		return nil, "", err
 	}
-	return Edit(w, Options{Path: path, OnDisk: true, Message: msg, Program: opts})
+	return w, "", nil
 }
 
 // NewWall is the wall a new file starts with: a plain 24 ft × 12 ft
