@@ -59,7 +59,7 @@ type Pier struct {
 	Rigidity float64        // relative rigidity 1/Parts.Total() (for a non-leaf, of its own decomposition)
 	Share    float64        // fraction of the wall shear, 0–1
 	Shear    geometry.Force // V_i = Share·V; zero without a load
-	Moment   float64        // M_i in N·m; zero without a load
+	Moment   float64        // M_i in N·m: V_i·h/2 fixed-fixed, V_i·h cantilever (at the base); zero without a load
 
 	BandShare float64 // fraction of its band's shear (Share = BandShare × parent's Share)
 	Cut       bool    // openings inside leave no load path: no rigidity, no share

@@ -220,7 +220,7 @@ func (s *solver) region(rect geometry.Rect, sup geometry.Support, ops []opening,
 		s.step(StepPiers, name, bandRect, bandSup, dBand, names)
 		if allCuts {
 			s.res.Steps[len(s.res.Steps)-1].AllCuts = true
-			s.warn(fmt.Sprintf("in %s no opening of %s spans the full height of their band: each is taken as a cut and the piers between them as the band's full height, a rough reading of staggered openings", regionName(name), strings.Join(bandNames(b, ops), ", ")))
+			s.warn(fmt.Sprintf("in %s no opening of %s spans the full height of their band: each is taken as a cut and the piers between them as the band's full height, a rough reading of staggered openings", where(name), strings.Join(bandNames(b, ops), ", ")))
 		}
 	}
 	return d, false, nil
@@ -526,11 +526,11 @@ func (s *solver) loads(w *geometry.Wall) error {
 		return nil
 	}
 	r.HasLoad = true
+	// Every pier gets the forces of its share; for a pier with openings
+	// inside they are those of the pier as a whole, and its leaves carry
+	// them on.
 	for i := range r.Piers {
 		p := &r.Piers[i]
-		if !p.Leaf {
-			continue
-		}
 		p.Shear = geometry.Force(p.Share * V)
 		arm := p.H()
 		if p.Support == geometry.Fixed {
@@ -554,17 +554,25 @@ func (s *solver) loads(w *geometry.Wall) error {
 	if !(cd > 0) || math.IsInf(cd, 0) || !(ie > 0) || math.IsInf(ie, 0) {
 		return fmt.Errorf("pier: drift factors Cd and Ie must be positive numbers, got %g and %g", cd, ie)
 	}
-	if !(dr.Limit >= 0) || math.IsInf(dr.Limit, 0) {
-		return fmt.Errorf("pier: the drift limit must be a positive fraction of the height, got %g", dr.Limit)
+	limit := dr.Limit
+	if limit == 0 && dr.Preset != "" {
+		pr, ok := geometry.FindDriftPreset(dr.Preset)
+		if !ok {
+			return fmt.Errorf("pier: unknown drift limit preset %q", dr.Preset)
+		}
+		limit = pr.Limit
+	}
+	if !(limit >= 0) || math.IsInf(limit, 0) {
+		return fmt.Errorf("pier: the drift limit must be a positive fraction of the height, got %g", limit)
 	}
 	h := float64(w.Height)
 	design := cd * float64(r.DeflectionAbs) / ie
 	r.Drift = DriftCheck{
 		Elastic:   r.DeflectionAbs,
 		Design:    geometry.Length(design),
-		Allowable: geometry.Length(dr.Limit * h),
+		Allowable: geometry.Length(limit * h),
 		Ratio:     design / h,
-		OK:        dr.Limit == 0 || design <= dr.Limit*h,
+		OK:        limit == 0 || design <= limit*h,
 	}
 	return nil
 }

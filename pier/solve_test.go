@@ -447,3 +447,23 @@ func lastWallPiersStep(r *Result) Step {
 	}
 	return s
 }
+
+func TestDriftPresetByName(t *testing.T) {
+	// ASCE 7-22 Table 12.12-1: 0.010 h for masonry cantilever shear wall
+	// structures (the preset's limit, looked up when only its name is set).
+	w := solidWall(20, 10, geometry.Cantilever)
+	w.Material = geometry.Material{Kind: geometry.ConcreteMasonry, Strength: 2000 * geometry.PSI}
+	w.Load.Shear = 50 * geometry.Kip
+	w.Drift = geometry.Drift{Cd: 4, Preset: "masonry-cantilever"}
+	r, err := Solve(w)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if !near(float64(r.Drift.Allowable), 0.010*float64(w.Height), 1e-12) {
+		t.Errorf("allowable %g m, want 0.010 h", r.Drift.Allowable)
+	}
+	w.Drift.Preset = "no-such-limit"
+	if _, err := Solve(w); err == nil {
+		t.Error("unknown preset: want an error")
+	}
+}

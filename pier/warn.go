@@ -34,24 +34,28 @@ func (s *solver) warn(msg string) {
 func (s *solver) spandrels(rect geometry.Rect, bands []band, bi int, region string, ops []opening) {
 	b := bands[bi]
 	h := b.y1 - b.y0
-	where := "the wall"
-	if region != "wall" {
-		where = "pier " + region
-	}
 	top := rect.Y1
 	if bi+1 < len(bands) {
 		top = bands[bi+1].y0
 	}
 	if depth := top - b.y1; depth > s.eps && depth < h {
 		s.warn(fmt.Sprintf("in %s the spandrel above the openings %s is %.2f times as deep as the piers beside them are tall: it is assumed to keep them from rotating, which a shallow spandrel does not do, so their rigidity is overestimated",
-			where, s.bandNames(b, ops), depth/h))
+			where(region), s.bandNames(b, ops), depth/h))
 	}
 	if bi > 0 {
 		if depth := b.y0 - bands[bi-1].y1; depth < h {
 			s.warn(fmt.Sprintf("in %s the solid between the openings %s and %s below is %.2f times as deep as the piers above it are tall: it is assumed rigid, which it is not",
-				where, s.bandNames(b, ops), s.bandNames(bands[bi-1], ops), depth/h))
+				where(region), s.bandNames(b, ops), s.bandNames(bands[bi-1], ops), depth/h))
 		}
 	}
+}
+
+// where names a region in a sentence: "the wall" or "pier P2".
+func where(region string) string {
+	if region == "" || region == "wall" {
+		return "the wall"
+	}
+	return "pier " + region
 }
 
 // bandNames lists a band's openings for a warning.

@@ -1,0 +1,50 @@
+package fe
+
+import (
+	"testing"
+
+	"pierwise/geometry"
+)
+
+// typicalWall is a 30 ft × 12 ft wall with a door and two windows (invented
+// for the benchmark).
+func typicalWall() testWall {
+	return testWall{
+		name: "typical",
+		wall: wallFt(30, 12, geometry.Cantilever,
+			opening("W1", 3, 3, 5, 4), opening("D1", 12, 0, 4, 8), opening("W2", 21, 3, 6, 4)),
+		classic: classicOf(leaf("P1", 0, 0, 12, 8), leaf("P2", 16, 0, 30, 8)),
+	}
+}
+
+// BenchmarkSolve times Solve end to end (mesh, assembly, factorisation,
+// shares). Targets (issue 3): the default mesh on a typical wall under
+// 20 ms; the 20 ft × 10 ft wall meshed 160 × 80 (1.5 in, q4) is what
+// scripts/fe-vs-ccx.sh times against CalculiX.
+func BenchmarkSolve(b *testing.B) {
+	typ := typicalWall()
+	big := wallFt(20, 10, geometry.Cantilever)
+	cases := []struct {
+		name string
+		c    testWall
+		opt  Options
+	}{
+		{"typical-default-qm6", typ, Options{}},
+		{"typical-default-q4", typ, Options{Element: ElementQ4}},
+		{"solid-20x10ft-160x80-q4", testWall{wall: big}, Options{Mesh: 1.5 * geometry.Inch, Element: ElementQ4}},
+	}
+	for _, c := range cases {
+		b.Run(c.name, func(b *testing.B) {
+			b.ReportAllocs()
+			var res *Result
+			for b.Loop() {
+				var err error
+				if res, err = Solve(c.c.wall, c.c.classic, c.opt); err != nil {
+					b.Fatal(err)
+				}
+			}
+			b.ReportMetric(float64(res.Elements), "elements")
+			b.ReportMetric(float64(res.DOFs), "dofs")
+		})
+	}
+}

@@ -1,0 +1,284 @@
+package fe
+
+import (
+	"math"
+	"math/rand/v2"
+	"testing"
+
+	"pierwise/geometry"
+)
+
+// TestSolidWallTimoshenko compares a solid cantilever wall with the
+// Timoshenko-beam deflection of DESIGN §4: d = 4r³ + 3r in units of V/(E t)
+// (shear coefficient 5/6 for a rectangle, G = 0.4 E, i.e. ν = 0.25; Gere &
+// Timoshenko, Mechanics of Materials). The beam has free end sections; the
+// plane-stress wall has a fully fixed base, which makes it a little stiffer.
+// Issue 3 asks for agreement within 2.5 % for h/L from 0.25 to 3.
+func TestSolidWallTimoshenko(t *testing.T) {
+	for _, r := range []float64{0.25, 0.5, 0.87, 1, 1.5, 2, 3} {
+		w := wallFt(12, 12*r, geometry.Cantilever)
+		res, err := Solve(w, nil, Options{Mesh: 12 * ft / 48})
+		if err != nil {
+			t.Fatal(err)
+		}
+		beam := 4*r*r*r + 3*r
+		if rel := res.Deflection/beam - 1; math.Abs(rel) > 0.025 {
+			t.Errorf("h/L = %.2f: qm6 %.5f, Timoshenko beam %.5f (%.2f %%, want within 2.5 %%)", r, res.Deflection, beam, 100*rel)
+		}
+	}
+}
+
+// TestSolidWallFixedSlender: fixed-fixed, beam d = r³ + 3r (DESIGN §4). The
+// model's top nodes are all held vertically, which also keeps the top
+// section from warping and stretching; for squat walls this stiffens the
+// model well beyond the beam (about 10 % at h/L = 0.25, measured), so the
+// 2.5 % agreement is asserted only where bending matters, h/L ≥ 2.
+func TestSolidWallFixedSlender(t *testing.T) {
+	for _, r := range []float64{2, 3} {
+		w := wallFt(6, 6*r, geometry.Fixed)
+		res, err := Solve(w, nil, Options{Mesh: 6 * ft / 32})
+		if err != nil {
+			t.Fatal(err)
+		}
+		beam := r*r*r + 3*r
+		if rel := res.Deflection/beam - 1; math.Abs(rel) > 0.025 {
+			t.Errorf("h/L = %.2f: qm6 %.5f, beam %.5f (%.2f %%)", r, res.Deflection, beam, 100*rel)
+		}
+	}
+}
+
+// TestPatch is the patch test (Irons; see e.g. Zienkiewicz & Taylor, The
+// Finite Element Method, vol. 1, "patch test", from memory): on a mesh of
+// unequal rectangles, boundary displacements taken from a linear field must
+// give that field exactly at every interior node, and the section forces
+// must be the uniform stress times the section length.
+func TestPatch(t *testing.T) {
+	rng := rand.New(rand.NewPCG(1, 2))
+	xk := []float64{0.13, 0.5, 0.61, 1.4}
+	yk := []float64{0.07, 0.9, 1.0}
+	m := newMesh(2, 1.5, nil, xk, yk, 0.37)
+	for _, kind := range []string{ElementQ4, ElementQM6} {
+		for trial := 0; trial < 3; trial++ {
+			// u = a0 + a1 x + a2 y, v = b0 + b1 x + b2 y.
+			a := [3]float64{rng.Float64(), rng.Float64() - 0.5, rng.Float64() - 0.5}
+			b := [3]float64{rng.Float64(), rng.Float64() - 0.5, rng.Float64() - 0.5}
+			nu := 0.1 + 0.3*rng.Float64()
+			d := isotropic(1, nu)
+			md := newModel(m, kind, d)
+			exact := make([]float64, 2*len(m.nodeAt))
+			for n := range m.nodeAt {
+				x, y := m.nodeXY(n)
+				exact[2*n] = a[0] + a[1]*x + a[2]*y
+				exact[2*n+1] = b[0] + b[1]*x + b[2]*y
+			}
+			md.fix(func(n, c int) bool {
+				p := m.nodeAt[n]
+				return p[0] == 0 || p[0] == m.nx || p[1] == 0 || p[1] == m.ny
+			})
+			u, err := md.solve(make([]float64, len(exact)), exact)
+			if err != nil {
+				t.Fatal(err)
+			}
+			for k := range u {
+				if math.Abs(u[k]-exact[k]) > 1e-12 {
+					t.Fatalf("%s: DOF %d = %.15g, linear field %.15g", kind, k, u[k], exact[k])
+				}
+			}
+			// Uniform stress: τxy = G (a2 + b1); the shear across a horizontal
+			// section of length l is τ l.
+			tau := d[2][2] * (a[2] + b[1])
+			sec := geometry.Rect{X0: 0.5, X1: 1.4, Y0: 0, Y1: 2 * 0.9}
+			if got, want := sectionShear(md, u, sec), tau*0.9; math.Abs(got-want) > 1e-12 {
+				t.Errorf("%s: section shear %.15g, uniform stress gives %.15g", kind, got, want)
+			}
+		}
+	}
+}
+
+// TestEquilibrium: the base reactions equal the applied shear (statics), and
+// the unit load is the sum of the nodal forces.
+func TestEquilibrium(t *testing.T) {
+	for _, c := range exampleWalls() {
+		for _, kind := range []string{ElementQ4, ElementQM6} {
+			_, size, d, leaves, err := prepare(c.wall, c.classic, Options{Element: kind})
+			if err != nil {
+				t.Fatal(err)
+			}
+			s, err := solveWall(c.wall, leaves, size, kind, d)
+			if err != nil {
+				t.Fatal(err)
+			}
+			m := s.md.m
+			var load, rx, ry float64
+			for n := range m.nodeAt {
+				load += s.load[2*n]
+			}
+			for e, cell := range m.cellOf {
+				if cell[1] != 0 {
+					continue
+				}
+				f := s.md.elementForces(e, s.u)
+				rx += f[0] + f[2] // bottom nodes
+				ry += f[1] + f[3]
+			}
+			if math.Abs(load-1) > 1e-12 {
+				t.Errorf("%s %s: load %.15g, want 1", c.name, kind, load)
+			}
+			// The elements' forces on the base nodes carry the whole shear.
+			if math.Abs(rx+1) > 1e-9 {
+				t.Errorf("%s %s: base shear %.12g, want −1", c.name, kind, rx)
+			}
+			if c.wall.Support == geometry.Cantilever && math.Abs(ry) > 1e-9 {
+				t.Errorf("%s %s: net vertical base reaction %.3g, want 0", c.name, kind, ry)
+			}
+		}
+	}
+}
+
+// TestShareSums: every band of piers carries the whole shear (DESIGN §3),
+// so the piers that together are a wall's whole solid section at one height
+// have shares that sum to 1 (statics).
+func TestShareSums(t *testing.T) {
+	for _, c := range exampleWalls() {
+		if len(c.sections) == 0 {
+			continue
+		}
+		res, err := Solve(c.wall, c.classic, Options{})
+		if err != nil {
+			t.Fatal(err)
+		}
+		share := map[string]float64{}
+		for _, p := range res.Piers {
+			share[p.Name] = p.Share
+		}
+		for _, sec := range c.sections {
+			s := 0.0
+			for _, name := range sec {
+				s += share[name]
+			}
+			if math.Abs(s-1) > 1e-9 {
+				t.Errorf("%s: shares of %v sum to %.12g, want 1", c.name, sec, s)
+			}
+		}
+	}
+}
+
+// TestMirror: a mirrored wall mirrors its pier shares and keeps its
+// deflection (symmetry).
+func TestMirror(t *testing.T) {
+	c := exampleWalls()[5] // fixed, two unequal windows
+	mir := wallFt(24, 12, geometry.Fixed, opening("W2", 24-5-3, 4, 3, 4), opening("W1", 24-16-3, 4, 3, 4))
+	mc := classicOf(leaf("P3", 24-24, 4, 24-19, 8), leaf("P2", 24-16, 4, 24-8, 8), leaf("P1", 24-5, 4, 24, 8))
+	a, err := Solve(c.wall, c.classic, Options{})
+	if err != nil {
+		t.Fatal(err)
+	}
+	b, err := Solve(mir, mc, Options{})
+	if err != nil {
+		t.Fatal(err)
+	}
+	if math.Abs(a.Deflection/b.Deflection-1) > 1e-9 {
+		t.Errorf("deflection %.9g, mirrored %.9g", a.Deflection, b.Deflection)
+	}
+	share := map[string]float64{}
+	for _, p := range b.Piers {
+		share[p.Name] = p.Share
+	}
+	for _, p := range a.Piers {
+		if math.Abs(p.Share-share[p.Name]) > 1e-9 {
+			t.Errorf("pier %s share %.9g, mirrored %.9g", p.Name, p.Share, share[p.Name])
+		}
+	}
+}
+
+// TestScaleInvariance: relative values do not depend on the size of the wall
+// (plane-stress displacements scale as V/(E t) alone).
+func TestScaleInvariance(t *testing.T) {
+	c := exampleWalls()[3]
+	a, err := Solve(c.wall, c.classic, Options{Mesh: 6 * geometry.Inch})
+	if err != nil {
+		t.Fatal(err)
+	}
+	big := wallFt(18*2.5, 16*2.5, geometry.Cantilever, opening("D1", 10, 0, 10, 20), opening("W1", 30, 5, 10, 10))
+	bc := classicOf(leaf("P1", 0, 0, 10, 20), leaf("P2.1", 20, 5, 30, 15), leaf("P2.2", 40, 5, 45, 15))
+	b, err := Solve(big, bc, Options{Mesh: 15 * geometry.Inch})
+	if err != nil {
+		t.Fatal(err)
+	}
+	if math.Abs(a.Deflection/b.Deflection-1) > 1e-9 {
+		t.Errorf("deflection %.9g, scaled 2.5× %.9g", a.Deflection, b.Deflection)
+	}
+	for k := range a.Piers {
+		if math.Abs(a.Piers[k].Share-b.Piers[k].Share) > 1e-9 {
+			t.Errorf("pier %s share %.9g, scaled %.9g", a.Piers[k].Name, a.Piers[k].Share, b.Piers[k].Share)
+		}
+	}
+}
+
+// TestOpeningNeverStiffens: removing material never makes the wall stiffer
+// (the energy of the unit load can only grow).
+func TestOpeningNeverStiffens(t *testing.T) {
+	solid, err := Solve(wallFt(20, 10, geometry.Cantilever), nil, Options{})
+	if err != nil {
+		t.Fatal(err)
+	}
+	prev := solid.Deflection
+	ops := []geometry.Opening{opening("W1", 2, 3, 3, 4), opening("D1", 8, 0, 3, 7), opening("W2", 14, 3, 3, 4)}
+	for k := range ops {
+		res, err := Solve(wallFt(20, 10, geometry.Cantilever, ops[:k+1]...), nil, Options{})
+		if err != nil {
+			t.Fatal(err)
+		}
+		if res.Deflection < prev*(1-1e-9) {
+			t.Errorf("with %d openings the wall deflects %.6g, less than %.6g before", k+1, res.Deflection, prev)
+		}
+		prev = res.Deflection
+	}
+}
+
+// TestConvergence: halving the default element size changes qm6's
+// deflection by less than 1 % on the example walls (issue 3).
+func TestConvergence(t *testing.T) {
+	for _, c := range exampleWalls() {
+		a, err := Solve(c.wall, c.classic, Options{})
+		if err != nil {
+			t.Fatal(err)
+		}
+		b, err := Solve(c.wall, c.classic, Options{Mesh: a.Mesh / 2})
+		if err != nil {
+			t.Fatal(err)
+		}
+		if rel := math.Abs(a.Deflection/b.Deflection - 1); rel > 0.01 {
+			t.Errorf("%s: qm6 at %.3g m %.6g, at half size %.6g (%.2f %%)", c.name, float64(a.Mesh), a.Deflection, b.Deflection, 100*rel)
+		}
+		t.Logf("%s: %d elements %.6g, %d elements %.6g", c.name, a.Elements, a.Deflection, b.Elements, b.Deflection)
+	}
+}
+
+// TestErrors: bad input gives an error, never a panic, NaN or Inf.
+func TestErrors(t *testing.T) {
+	ok := wallFt(10, 8, geometry.Cantilever)
+	cases := []struct {
+		name string
+		w    *geometry.Wall
+		opt  Options
+	}{
+		{"nil wall", nil, Options{}},
+		{"zero length", wallFt(0, 8, geometry.Cantilever), Options{}},
+		{"negative mesh", ok, Options{Mesh: -1}},
+		{"unknown element", ok, Options{Element: "q9"}},
+		{"too fine", ok, Options{Mesh: 1e-5}},
+		{"cut wall", wallFt(10, 8, geometry.Cantilever, opening("W1", 0, 3, 10, 2)), Options{}},
+		{"open top", wallFt(10, 8, geometry.Cantilever, opening("W1", 0, 6, 10, 2)), Options{}},
+		{"low shear modulus", func() *geometry.Wall {
+			w := wallFt(10, 8, geometry.Cantilever)
+			w.Material = geometry.Material{Kind: geometry.Custom, Modulus: 1e9, ShearModulus: 0.3e9}
+			return w
+		}(), Options{}},
+	}
+	for _, c := range cases {
+		if res, err := Solve(c.w, nil, c.opt); err == nil {
+			t.Errorf("%s: no error, result %+v", c.name, res)
+		}
+	}
+}
