@@ -9,13 +9,14 @@ import (
 	"pierwise/geometry"
 	"pierwise/report"
 	"pierwise/storey"
+	"pierwise/tui"
 )
 
 func init() {
 	storey.Version = version
 	register(command{
 		name:  "storey",
-		args:  "FILE [--json]",
+		args:  "FILE [--json | --edit]",
 		short: "share a storey shear among its walls (rigid diaphragm with torsion) and give each wall's piers",
 		run:   runStorey,
 	})
@@ -24,12 +25,19 @@ func init() {
 func runStorey(e *env, args []string) error {
 	fs := newFlags(e, "storey")
 	asJSON := fs.Bool("json", false, "print JSON")
+	edit := fs.Bool("edit", false, "open the storey screen of the editor (plan, walls, and each wall's elevation)")
 	files, err := parseInterleaved(fs, args)
 	if err != nil {
 		return err
 	}
 	if len(files) != 1 {
 		return usagef("storey needs one FILE (a storey file), got %d", len(files))
+	}
+	if *edit && *asJSON {
+		return usagef("storey: --json and --edit do not go together")
+	}
+	if *edit {
+		return tui.EditStorey(files[0])
 	}
 	a, err := storey.Load(files[0])
 	if err != nil {

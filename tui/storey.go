@@ -1,0 +1,436 @@
+package tui
+
+import (
+	"fmt"
+	"path/filepath"
+	"strings"
+
+	"github.com/charmbracelet/bubbles/help"
+	"github.com/charmbracelet/bubbles/key"
+	tea "github.com/charmbracelet/bubbletea"
+	"github.com/charmbracelet/lipgloss"
+
+	"pierwise/geometry"
+	"pierwise/report"
+	"pierwise/storey"
+)
+
+// EditStorey opens the storey screen on the storey file at path: the plan,
+// the walls with their rigidities and design shears, and any wall in the
+// elevation editor (enter). Edits to a wall update the storey numbers when
+// its editor is closed (esc or q).
+func EditStorey(path string, opts ...tea.ProgramOption) error {
+	m, err := newStoreyModel(path)
+	if err != nil {
+		return err
+	}
+	all := append([]tea.ProgramOption{tea.WithAltScreen()}, opts...)
+	_, err = tea.NewProgram(m, all...).Run()
+	return err
+}
+
+// newStoreyModel builds the root model with the storey screen as its first
+// screen (common.doc stays nil: each wall has its own document).
+func newStoreyModel(path string) (*root, error) {
+	st, walls, err := storey.LoadFiles(path)
+	if err != nil {
+		return nil, err
+	}
+	c := newCommon(nil, nil)
+	return newRoot(c, newStoreyScreen(c, st, walls)), nil
+}
+
+// storeyKeys are the keys of the storey screen; they implement help.KeyMap.
+type storeyKeys struct {
+	Up, Down key.Binding // select a wall
+	Open     key.Binding // open the selected wall in the elevation editor
+	Save     key.Binding // save every changed wall file
+	Report   key.Binding // write the storey report beside the storey file
+	Help     key.Binding
+	Quit     key.Binding
+}
+
+func newStoreyKeys(c *common) storeyKeys {
+	return storeyKeys{
+		Up:     key.NewBinding(key.WithKeys("up", "k", "shift+tab"), key.WithHelp("↑/k", "previous wall")),
+		Down:   key.NewBinding(key.WithKeys("down", "j", "tab"), key.WithHelp("↓/j", "next wall")),
+		Open:   key.NewBinding(key.WithKeys("enter", "e"), key.WithHelp("enter", "edit wall")),
+		Save:   key.NewBinding(key.WithKeys("s"), key.WithHelp("s", "save changed walls")),
+		Report: key.NewBinding(key.WithKeys("p"), key.WithHelp("p", "write report")),
+		Help:   c.keys.Help,
+		Quit:   key.NewBinding(key.WithKeys("q"), key.WithHelp("q", "quit")),
+	}
+}
+
+func (k storeyKeys) ShortHelp() []key.Binding {
+	return []key.Binding{k.Down, k.Up, k.Open, k.Save, k.Report, k.Help, k.Quit}
+}
+
+func (k storeyKeys) FullHelp() [][]key.Binding {
+	return [][]key.Binding{{k.Down, k.Up, k.Open}, {k.Save, k.Report, k.Help, k.Quit}}
+}
+
+// storeyScreen shows a storey: the plan with its walls, the centre of mass
+// and the centre of rigidity, the table of walls with their rigidities and
+// design shears, and the selected wall's piers. The numbers come from
+// storey.Analyse; this screen computes nothing itself.
+type storeyScreen struct {
+	c    *common
+	keys storeyKeys
+	help help.Model
+
+	width, height int
+	showHelp      bool
+	confirmQuit   bool
+
+	st       *storey.Storey
+	docs     []*document // one per wall; the elevation edits them
+	versions []int       // document versions the analysis belongs to
+	an       *storey.Analysis
+	err      error
+
+	sel    int
+	msg    string
+	msgBad bool
+}
+
+func newStoreyScreen(c *common, st *storey.Storey, walls []*geometry.Wall) *storeyScreen {
+	s := &storeyScreen{c: c, keys: newStoreyKeys(c), help: help.New(), st: st}
+	s.help.ShortSeparator = "  "
+	for i, w := range walls {
+		s.docs = append(s.docs, newDocument(w, st.Walls[i].Path, true))
+	}
+	s.analyse()
+	return s
+}
+
+func (s *storeyScreen) setSize(w, h int) {
+	s.width, s.height = w, h
+	s.help.Width = w
+}
+
+// analyse runs the storey analysis on the documents' current walls.
+func (s *storeyScreen) analyse() {
+	walls := make([]*geometry.Wall, len(s.docs))
+	s.versions = make([]int, len(s.docs))
+	for i, d := range s.docs {
+		walls[i], s.versions[i] = d.wall, d.version
+	}
+	s.an, s.err = storey.Analyse(s.st, walls)
+}
+
+func (s *storeyScreen) stale() bool {
+	for i, d := range s.docs {
+		if d.version != s.versions[i] {
+			return true
+		}
+	}
+	return false
+}
+
+func (s *storeyScreen) dirty() []string {
+	var names []string
+	for i, d := range s.docs {
+		if d.dirty() {
+			names = append(names, s.st.Walls[i].File)
+		}
+	}
+	return names
+}
+
+func (s *storeyScreen) update(msg tea.Msg) (screen, tea.Cmd) {
+	switch msg := msg.(type) {
+	case resumeMsg:
+		if s.stale() {
+			s.analyse()
+			if s.err == nil {
+				s.say("storey updated after the edit of %s", s.st.Walls[s.sel].File)
+			}
+		}
+		return s, nil
+	case tea.KeyMsg:
+		if s.showHelp {
+			if key.Matches(msg, s.keys.Help, s.c.keys.Back, s.keys.Quit) {
+				s.showHelp = false
+			}
+			return s, nil
+		}
+		if s.confirmQuit {
+			return s, s.answerQuit(msg)
+		}
+		s.msg = ""
+		switch {
+		case key.Matches(msg, s.keys.Quit):
+			if len(s.dirty()) == 0 {
+				return s, tea.Quit
+			}
+			s.confirmQuit = true
+		case key.Matches(msg, s.keys.Help):
+			s.showHelp = true
+		case key.Matches(msg, s.keys.Down):
+			s.sel = (s.sel + 1) % len(s.docs)
+		case key.Matches(msg, s.keys.Up):
+			s.sel = (s.sel + len(s.docs) - 1) % len(s.docs)
+		case key.Matches(msg, s.keys.Open):
+			return s, s.open(s.sel)
+		case key.Matches(msg, s.keys.Save):
+			s.saveAll()
+		case key.Matches(msg, s.keys.Report):
+			s.writeReport()
+		}
+	}
+	return s, nil
+}
+
+func (s *storeyScreen) answerQuit(msg tea.KeyMsg) tea.Cmd {
+	switch msg.String() {
+	case "s":
+		if s.saveAll() {
+			return tea.Quit
+		}
+		s.confirmQuit = false
+	case "y":
+		return tea.Quit
+	case "n", "esc":
+		s.confirmQuit = false
+	}
+	return nil
+}
+
+// open pushes the elevation editor on wall i's document.
+func (s *storeyScreen) open(i int) tea.Cmd {
+	cc := *s.c
+	cc.doc = s.docs[i]
+	e := newElevation(&cc)
+	e.say("%s: esc or q returns to the storey", s.st.Walls[i].File)
+	return tea.Batch(pushScreen(&storeyWall{e: e}), e.init())
+}
+
+// saveAll saves every changed wall; it reports whether all were saved.
+func (s *storeyScreen) saveAll() bool {
+	var saved []string
+	for i, d := range s.docs {
+		if !d.dirty() {
+			continue
+		}
+		if err := d.save(""); err != nil {
+			s.refuse("not saved: %s: %v", s.st.Walls[i].File, err)
+			return false
+		}
+		saved = append(saved, s.st.Walls[i].File)
+	}
+	if len(saved) == 0 {
+		s.say("no wall has unsaved changes")
+	} else {
+		s.say("saved %s", strings.Join(saved, ", "))
+	}
+	return true
+}
+
+// writeReport writes the storey report of the walls as edited beside the
+// storey file.
+func (s *storeyScreen) writeReport() {
+	if s.err != nil {
+		s.refuse("no report: %v", s.err)
+		return
+	}
+	path := strings.TrimSuffix(s.st.Path, filepath.Ext(s.st.Path)) + ".report.txt"
+	var b strings.Builder
+	if err := storey.Report(&b, s.an, s.c.now()); err != nil {
+		s.refuse("no report: %v", err)
+		return
+	}
+	if err := geometry.WriteFileAtomic(path, []byte(b.String())); err != nil {
+		s.refuse("no report: %v", err)
+		return
+	}
+	s.say("wrote %s", path)
+}
+
+func (s *storeyScreen) say(format string, a ...any) {
+	s.msg, s.msgBad = fmt.Sprintf(format, a...), false
+}
+
+func (s *storeyScreen) refuse(format string, a ...any) {
+	s.msg, s.msgBad = fmt.Sprintf(format, a...), true
+}
+
+// storeyWall is the elevation editor opened from the storey screen: esc or
+// q in the editor's normal mode return to the storey instead of quitting.
+type storeyWall struct{ e *elevation }
+
+func (w *storeyWall) setSize(width, height int) { w.e.setSize(width, height) }
+func (w *storeyWall) view() string              { return w.e.view() }
+
+func (w *storeyWall) update(msg tea.Msg) (screen, tea.Cmd) {
+	if k, ok := msg.(tea.KeyMsg); ok && w.e.mode == modeNormal {
+		if key.Matches(k, w.e.c.keys.Back, w.e.keys.Quit) {
+			return w, popScreen()
+		}
+	}
+	next, cmd := w.e.update(msg)
+	if e, ok := next.(*elevation); ok {
+		w.e = e
+		return w, cmd
+	}
+	return next, cmd
+}
+
+// view draws the title bar, the plan beside the wall table, the selected
+// wall's piers, the message line and the key hints.
+func (s *storeyScreen) view() string {
+	st := s.c.styles
+	W, H := s.width, s.height
+	title := fmt.Sprintf(" Storey: %s — %s", orText(s.st.Title, "untitled"), filepath.Base(s.st.Path))
+	if n := len(s.dirty()); n > 0 {
+		title += fmt.Sprintf("  [%d wall(s) changed]", n)
+	}
+	top := st.title.Render(padRight(truncate(title, W), W))
+
+	var hint string
+	switch {
+	case s.confirmQuit:
+		hint = st.errText.Render("unsaved walls: " + strings.Join(s.dirty(), ", ") + " — s save and quit, y quit without saving, n stay")
+	default:
+		hint = s.help.View(s.keys)
+	}
+	msg := ""
+	if s.msg != "" {
+		if s.msgBad {
+			msg = st.errText.Render(s.msg)
+		} else {
+			msg = st.note.Render(s.msg)
+		}
+	}
+	bodyH := H - 3
+	var body string
+	switch {
+	case s.showHelp:
+		body = s.help.FullHelpView(s.keys.FullHelp())
+	case s.err != nil:
+		body = st.errText.Render("The storey cannot be analysed:") + "\n" + s.err.Error() +
+			"\n\n" + st.note.Render("Open the wall again (enter) and fix it, or undo the change there (u).") + "\n\n" + s.wallList(W)
+	default:
+		planW := min(W*2/5, W-52)
+		left := s.planView(planW, bodyH)
+		right := s.tableView(W-planW-2, bodyH)
+		body = lipgloss.JoinHorizontal(lipgloss.Top, fit(left, planW, bodyH), "  ", fit(right, W-planW-2, bodyH))
+	}
+	return strings.Join([]string{top, fit(body, W, bodyH), fit(msg, W, 1), fit(hint, W, 1)}, "\n")
+}
+
+// planView draws the plan sketch with the selected wall highlighted.
+func (s *storeyScreen) planView(w, h int) string {
+	st := s.c.styles
+	g := storey.Plan(s.st, s.an, w, h-3)
+	var b strings.Builder
+	b.WriteString(st.heading.Render("Plan") + "\n")
+	for _, row := range g.Cells {
+		for _, c := range row {
+			ch := string(c.Ch)
+			switch {
+			case c.Mark != 0:
+				b.WriteString(st.key.Render(ch))
+			case c.Wall == s.sel && c.Wall >= 0:
+				b.WriteString(st.selected.Render(ch))
+			case c.Wall >= 0:
+				b.WriteString(st.wall.Render(ch))
+			default:
+				b.WriteString(st.dim.Render(ch))
+			}
+		}
+		b.WriteString("\n")
+	}
+	b.WriteString(st.dim.Render(truncate("M mass  R rigidity  * both", w)))
+	return b.String()
+}
+
+// tableView is the wall table, the centre of rigidity and the selected
+// wall's piers under its design shear.
+func (s *storeyScreen) tableView(w, h int) string {
+	st := s.c.styles
+	a := s.an
+	u := report.UnitsFor(s.st.Units)
+	d := a.Distribution
+	var lines []string
+	lines = append(lines, st.heading.Render("Walls")+st.dim.Render(fmt.Sprintf("  V = %s; shares of V", geometry.FormatForce(s.st.Shear, s.st.Units))))
+	nameW := 4
+	for _, wl := range a.Walls {
+		nameW = max(nameW, len([]rune(wl.Name)))
+	}
+	nameW = min(nameW, max(w-36, 8))
+	head := fmt.Sprintf("  %-*s %s %7s %8s %6s %-6s", nameW, "wall", "d", "R rel", "design", "of V", "case")
+	lines = append(lines, st.dim.Render(truncate(head, w)))
+	for i, wl := range a.Walls {
+		mark := " "
+		if s.docs[i].dirty() {
+			mark = "*"
+		}
+		row := fmt.Sprintf("%c%s%-*s %s %7.4f %8.2f %5.1f%% %-6s", storey.WallKey(i), mark, nameW, truncate(wl.Name, nameW), wl.Ref.Direction,
+			wl.Unit.Rigidity, u.ForceOf(geometry.Force(wl.Design.Shear)),
+			100*wl.Design.Shear/float64(s.st.Shear), storey.CaseName(d, wl.Design.Case))
+		row = truncate(row, w)
+		if i == s.sel {
+			row = st.selected.Render(padRight(row, w))
+		}
+		lines = append(lines, row)
+	}
+	lines = append(lines, st.dim.Render(fmt.Sprintf("forces in %s; * changed, not saved", u.Force)))
+	lines = append(lines, "")
+	lines = append(lines, fmt.Sprintf("centre of rigidity x_R %.2f, y_R %.2f %s", u.CoordOf(d.CenterOfRigidity[0]), u.CoordOf(d.CenterOfRigidity[1]), u.Coord))
+	lines = append(lines, fmt.Sprintf("mass centre        x_M %.2f, y_M %.2f %s", u.CoordOf(float64(s.st.MassCenter[0])), u.CoordOf(float64(s.st.MassCenter[1])), u.Coord))
+	for _, c := range d.Cases {
+		if c.Sign > 0 {
+			lines = append(lines, st.dim.Render(fmt.Sprintf("load along %s: e = %.2f / %.2f %s", c.Load, u.CoordOf(c.Eccentricity),
+				u.CoordOf(c.Eccentricity-2*d.AccidentalEccentricity[c.Load]), u.Coord)))
+		}
+	}
+	lines = append(lines, "")
+	sel := a.Walls[s.sel]
+	lines = append(lines, st.heading.Render(truncate(sel.Name, w)))
+	lines = append(lines, truncate(fmt.Sprintf("direct %.2f, design %.2f %s (%s)", u.ForceOf(geometry.Force(sel.Design.Direct)),
+		u.ForceOf(geometry.Force(sel.Design.Shear)), u.Force, storey.CaseName(d, sel.Design.Case)), w))
+	leaves := sel.Loaded.Leaves()
+	if len(leaves) == 0 {
+		lines = append(lines, "solid wall: no piers")
+	} else {
+		lines = append(lines, st.dim.Render(fmt.Sprintf("%-7s %5s %-10s %6s %8s %9s", "pier", "h/L", "support", "share", "V "+u.Force, "M "+u.Moment)))
+	}
+	room := h - len(lines)
+	for i, p := range leaves {
+		if i == room-1 && len(leaves) > room {
+			lines = append(lines, st.dim.Render(fmt.Sprintf("… %d more piers (p writes the full report)", len(leaves)-i)))
+			break
+		}
+		support := "cantilever"
+		if p.Support == geometry.Fixed {
+			support = "fixed"
+		}
+		lines = append(lines, fmt.Sprintf("%-7s %5.2f %-10s %5.1f%% %8.2f %9.1f", p.Name, p.Ratio(), support, 100*p.Share,
+			u.ForceOf(p.Shear), u.MomentOf(p.Moment)))
+	}
+	return strings.Join(lines, "\n")
+}
+
+// wallList lists the walls when there are no numbers to show.
+func (s *storeyScreen) wallList(w int) string {
+	var lines []string
+	for i, ref := range s.st.Walls {
+		row := fmt.Sprintf("%c %s (%s)", storey.WallKey(i), ref.File, ref.Direction)
+		if s.docs[i].dirty() {
+			row += " *"
+		}
+		if i == s.sel {
+			row = s.c.styles.selected.Render(row)
+		}
+		lines = append(lines, truncate(row, w))
+	}
+	return strings.Join(lines, "\n")
+}
+
+func orText(s, alt string) string {
+	if strings.TrimSpace(s) == "" {
+		return alt
+	}
+	return s
+}

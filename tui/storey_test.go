@@ -1,0 +1,183 @@
+package tui
+
+import (
+	"os"
+	"path/filepath"
+	"strings"
+	"testing"
+	"time"
+
+	tea "github.com/charmbracelet/bubbletea"
+	"github.com/charmbracelet/x/ansi"
+
+	"pierwise/storey"
+)
+
+// copyWorkshop copies the invented workshop storey and its walls to a
+// temporary directory, so that saving in a test touches no repository file.
+func copyWorkshop(t *testing.T) string {
+	t.Helper()
+	dir := t.TempDir()
+	src := filepath.Join("..", "testdata", "storey")
+	entries, err := os.ReadDir(src)
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, e := range entries {
+		data, err := os.ReadFile(filepath.Join(src, e.Name()))
+		if err != nil {
+			t.Fatal(err)
+		}
+		if err := os.WriteFile(filepath.Join(dir, e.Name()), data, 0o644); err != nil {
+			t.Fatal(err)
+		}
+	}
+	return filepath.Join(dir, "workshop.toml")
+}
+
+type storeyDriver struct {
+	t *testing.T
+	m *root
+}
+
+func newStoreyDriver(t *testing.T, path string, w, h int) *storeyDriver {
+	t.Helper()
+	m, err := newStoreyModel(path)
+	if err != nil {
+		t.Fatal(err)
+	}
+	m.c.now = func() time.Time { return time.Date(2026, 12, 1, 12, 0, 0, 0, time.UTC) }
+	m.Update(tea.WindowSizeMsg{Width: w, Height: h})
+	return &storeyDriver{t: t, m: m}
+}
+
+// press sends msgs and runs the screen-contract commands they return
+// (push, pop), as the bubbletea runtime would; other commands (the FE check,
+// quitting) are not run.
+func (d *storeyDriver) press(msgs ...tea.Msg) {
+	for _, msg := range msgs {
+		_, cmd := d.m.Update(msg)
+		d.run(cmd)
+	}
+}
+
+func (d *storeyDriver) run(cmd tea.Cmd) {
+	if cmd == nil {
+		return
+	}
+	var msg tea.Msg
+	done := make(chan struct{})
+	go func() { msg = cmd(); close(done) }()
+	select {
+	case <-done:
+	case <-time.After(50 * time.Millisecond):
+		return // a timer (the FE check's delay): not needed here
+	}
+	switch msg := msg.(type) {
+	case tea.BatchMsg:
+		for _, c := range msg {
+			d.run(c)
+		}
+	case pushScreenMsg, popScreenMsg:
+		_, next := d.m.Update(msg)
+		d.run(next)
+	}
+}
+
+func (d *storeyDriver) screen() *storeyScreen { return d.m.stack[0].(*storeyScreen) }
+
+func (d *storeyDriver) view() string { return ansi.Strip(d.m.View()) }
+
+// The storey screen shows the same numbers as storey.Analyse (one way
+// through: the screen computes nothing), fills the window exactly and draws
+// the plan with M and R.
+func TestStoreyScreenView(t *testing.T) {
+	path := copyWorkshop(t)
+	a, err := storey.Load(path)
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, size := range [][2]int{{80, 24}, {120, 36}} {
+		d := newStoreyDriver(t, path, size[0], size[1])
+		v := d.view()
+		checkSize(t, v, size[0], size[1])
+		for _, want := range []string{"Plan", "Walls", "centre of rigidity", "M", "R"} {
+			if !strings.Contains(v, want) {
+				t.Errorf("%dx%d view lacks %q:\n%s", size[0], size[1], want, v)
+			}
+		}
+		got := d.screen().an
+		for i, w := range a.Walls {
+			if !relNear(got.Walls[i].Design.Shear, w.Design.Shear) {
+				t.Errorf("%s: screen design shear %g, storey.Load %g", w.Name, got.Walls[i].Design.Shear, w.Design.Shear)
+			}
+		}
+		if size[0] == 80 {
+			checkGolden(t, "storey_80x24.golden", v)
+		}
+	}
+}
+
+func relNear(a, b float64) bool {
+	d := a - b
+	if d < 0 {
+		d = -d
+	}
+	return d <= 1e-9*max(1, b, -b)
+}
+
+// Opening a wall, moving an opening and coming back re-analyses the storey
+// with the edited wall; nothing is saved until asked.
+func TestStoreyScreenEditWall(t *testing.T) {
+	path := copyWorkshop(t)
+	d := newStoreyDriver(t, path, 100, 30)
+	s := d.screen()
+	// Select the partition (the fifth wall) and open it.
+	for i := 0; i < 4; i++ {
+		d.press(runes("j"))
+	}
+	if s.sel != 4 {
+		t.Fatalf("selected wall %d, want 4", s.sel)
+	}
+	before := s.an.Walls[4]
+	d.press(keyEnter)
+	if len(d.m.stack) != 2 {
+		t.Fatalf("enter: %d screens, want the elevation on top", len(d.m.stack))
+	}
+	if v := d.view(); !strings.Contains(v, "D1") {
+		t.Fatalf("the elevation of the partition is not shown:\n%s", v)
+	}
+	// Widen the door twice by a foot (the default step): the partition loses
+	// solid length, so it gets less rigid and takes less of the storey shear.
+	d.press(runes("L"), runes("L"))
+	if !s.docs[4].dirty() {
+		t.Fatal("the edit did not reach the partition's document")
+	}
+	d.press(keyEsc)
+	if len(d.m.stack) != 1 {
+		t.Fatalf("esc: %d screens, want the storey back", len(d.m.stack))
+	}
+	after := s.an.Walls[4]
+	if !(after.Unit.Rigidity < before.Unit.Rigidity) || !(after.Design.Direct < before.Design.Direct) {
+		t.Errorf("partition rigidity %.4f → %.4f, direct shear %.2f → %.2f: want both smaller after widening its door",
+			before.Unit.Rigidity, after.Unit.Rigidity, before.Design.Direct, after.Design.Direct)
+	}
+	if v := d.view(); !strings.Contains(v, "changed") || !strings.Contains(v, "storey updated") {
+		t.Errorf("the view does not show the change:\n%s", v)
+	}
+	// The file is untouched until s.
+	a, err := storey.Load(path)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if !relNear(a.Walls[4].Unit.Rigidity, before.Unit.Rigidity) {
+		t.Error("the wall file changed before saving")
+	}
+	d.press(runes("s"))
+	if a, err = storey.Load(path); err != nil {
+		t.Fatal(err)
+	}
+	if !relNear(a.Walls[4].Unit.Rigidity, after.Unit.Rigidity) {
+		t.Errorf("after s the file gives rigidity %.4f, want the edited %.4f", a.Walls[4].Unit.Rigidity, after.Unit.Rigidity)
+	}
+}
