@@ -396,6 +396,11 @@ func TestWarnings(t *testing.T) {
 	if all := strings.Join(r.Warnings, "\n"); !strings.Contains(all, "spandrel") {
 		t.Errorf("warnings %q, want a shallow spandrel", all)
 	}
+	// A window 4 in below the top of the wall.
+	r, _ = Solve(wallFt(20, 12, geometry.Cantilever, [4]float64{6, 3, 4, 8.0 + 8.0/12}))
+	if all := strings.Join(r.Warnings, "\n"); !strings.Contains(all, "O1 stops 4\" below the top") {
+		t.Errorf("warnings %q, want O1 near the top", all)
+	}
 	// A squat solid cantilever wall needs no warning.
 	r, _ = Solve(solidWall(20, 10, geometry.Cantilever))
 	if len(r.Warnings) != 0 {

@@ -83,10 +83,30 @@ func (s *solver) assumptions(w *geometry.Wall, ops []opening) {
 			s.warn(fmt.Sprintf("pier %s is slender (h/L = %.1f > %g): the formulas are meant for wall piers; its small share depends on end fixity the method only assumes", p.Name, ratio, SlenderRatio))
 		}
 	}
+	s.edges(w, ops)
 	if anyFixed && len(ops) > 0 {
 		s.warn("piers marked fixed are assumed held against rotation at top and bottom by rigid spandrels; hand methods of this kind tend to overestimate the rigidity of walls with large openings: compare with the finite-element check")
 	}
 	if w.Support == geometry.Fixed {
 		s.warn("the wall's top is assumed held against rotation (fixed-fixed): the structure above must provide that restraint")
+	}
+}
+
+// edges warns about openings that stop just short of the wall's base or
+// top: the thin strip left there counts as solid wall in the method, which
+// it barely is. (Near an end, the sliver pier warning says it.)
+func (s *solver) edges(w *geometry.Wall, ops []opening) {
+	limit := SliverLength * s.thick
+	if s.thick == 0 {
+		limit = float64(w.Height) / sliverRatio / 5 // 2 % of the height
+	}
+	top := float64(w.Height)
+	for _, o := range ops {
+		if gap := o.r.Y0; gap > s.eps && gap < limit {
+			s.warn(fmt.Sprintf("opening %s stops %s above the base: the thin strip below it is taken as solid wall, which it barely is; consider taking the opening down to the base", o.name, geometry.FormatLength(geometry.Length(gap), w.Units)))
+		}
+		if gap := top - o.r.Y1; gap > s.eps && gap < limit {
+			s.warn(fmt.Sprintf("opening %s stops %s below the top: the thin strip above it is taken as solid wall, which it barely is; consider taking the opening up to the top", o.name, geometry.FormatLength(geometry.Length(gap), w.Units)))
+		}
 	}
 }
