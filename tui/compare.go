@@ -10,6 +10,7 @@ import (
 	tea "github.com/charmbracelet/bubbletea"
 
 	"pierwise/geometry"
+	"pierwise/pier/fe"
 	"pierwise/report"
 	"pierwise/sketch"
 	"pierwise/study"
@@ -19,7 +20,10 @@ func init() {
 	registerScreen(screenEntry{
 		name: "compare",
 		key:  key.NewBinding(key.WithKeys("C"), key.WithHelp("C", "compare two layouts")),
-		open: func(c *common) (screen, tea.Cmd) { return newCompareScreen(c), nil },
+		open: func(c *common) (screen, tea.Cmd) {
+			s := newCompareScreen(c)
+			return s, s.recompute()
+		},
 	})
 }
 
@@ -30,6 +34,7 @@ type compareKeys struct {
 	Prev     key.Binding // previous layout on the chosen side
 	Next     key.Binding // next layout on the chosen side
 	Swap     key.Binding // swap before and after
+	FE       key.Binding // the finite-element check on/off
 	Edit     key.Binding // make the chosen side's layout active and go back
 	Snapshot key.Binding // write the comparison report beside the wall file
 	Back     key.Binding
@@ -42,6 +47,7 @@ func newCompareKeys(c *common) compareKeys {
 		Prev:     key.NewBinding(key.WithKeys("left", "h", "["), key.WithHelp("←/h", "previous layout")),
 		Next:     key.NewBinding(key.WithKeys("right", "l", "]"), key.WithHelp("→/l", "next layout")),
 		Swap:     key.NewBinding(key.WithKeys("s"), key.WithHelp("s", "swap")),
+		FE:       key.NewBinding(key.WithKeys("f"), key.WithHelp("f", "FE check on/off")),
 		Edit:     key.NewBinding(key.WithKeys("enter"), key.WithHelp("enter", "edit it")),
 		Snapshot: key.NewBinding(key.WithKeys("p"), key.WithHelp("p", "write report")),
 		Back:     c.keys.Back,
@@ -55,7 +61,7 @@ func (k compareKeys) ShortHelp() []key.Binding {
 }
 
 func (k compareKeys) FullHelp() [][]key.Binding {
-	return [][]key.Binding{{k.Side, k.Prev, k.Next, k.Swap}, {k.Edit, k.Snapshot, k.Back, k.Help}}
+	return [][]key.Binding{{k.Side, k.Prev, k.Next, k.Swap}, {k.FE, k.Edit, k.Snapshot, k.Back, k.Help}}
 }
 
 // compareScreen shows two layouts of the wall side by side with their pier
@@ -76,8 +82,19 @@ type compareScreen struct {
 	err     error
 	version int // document version cmp belongs to
 
+	feOn      bool // run the finite-element check on both sides
+	feID      int  // of the latest request; older answers are dropped
+	feRunning bool
+
 	msg    string
 	msgBad bool
+}
+
+// compareFEMsg brings a comparison with the FE check, computed in a command.
+type compareFEMsg struct {
+	id  int
+	cmp *study.Comparison
+	err error
 }
 
 // snapshotDoneMsg reports a snapshot written (or not) by a command.
@@ -96,6 +113,7 @@ func newCompareScreen(c *common) *compareScreen {
 		s.after = (w.Active + 1) % len(w.Layouts)
 	}
 	s.right = true
+	s.feOn = true
 	s.recompute()
 	return s
 }
@@ -105,23 +123,45 @@ func (s *compareScreen) setSize(w, h int) {
 	s.help.Width = w
 }
 
-// recompute solves the two layouts of the current document.
-func (s *compareScreen) recompute() {
+// recompute solves the two layouts of the current document with the
+// classic method at once, and returns the command that adds the FE check
+// (nil when it is off).
+func (s *compareScreen) recompute() tea.Cmd {
 	w := s.c.doc.wall
 	n := len(w.Layouts)
 	s.before = min(max(s.before, 0), n-1)
 	s.after = min(max(s.after, 0), n-1)
-	s.cmp, s.err = study.Compare(study.WithLayout(w, s.before), study.WithLayout(w, s.after))
+	a, b := study.WithLayout(w, s.before), study.WithLayout(w, s.after)
+	s.cmp, s.err = study.Compare(a, b)
 	s.version = s.c.doc.version
+	path := s.c.doc.path
 	if s.cmp != nil {
-		s.cmp.Before.Path, s.cmp.After.Path = s.c.doc.path, s.c.doc.path
+		s.cmp.Before.Path, s.cmp.After.Path = path, path
+	}
+	s.feID++
+	s.feRunning = false
+	if !s.feOn || s.err != nil {
+		return nil
+	}
+	s.feRunning = true
+	id, opt := s.feID, study.Options{FE: true, FEOptions: fe.Options{Mesh: w.Check.Mesh, Element: w.Check.Element}}
+	return func() tea.Msg {
+		c, err := study.CompareWith(a, b, opt)
+		if c != nil {
+			c.Before.Path, c.After.Path = path, path
+		}
+		return compareFEMsg{id, c, err}
 	}
 }
 
 func (s *compareScreen) update(msg tea.Msg) (screen, tea.Cmd) {
 	switch msg := msg.(type) {
 	case resumeMsg:
-		s.recompute()
+		return s, s.recompute()
+	case compareFEMsg:
+		if msg.id == s.feID && msg.err == nil {
+			s.cmp, s.feRunning = msg.cmp, false
+		}
 	case snapshotDoneMsg:
 		if msg.err != nil {
 			s.msg, s.msgBad = "no report: "+msg.err.Error(), true
@@ -148,13 +188,16 @@ func (s *compareScreen) update(msg tea.Msg) (screen, tea.Cmd) {
 			s.right = !s.right
 		case key.Matches(msg, s.keys.Prev):
 			*side = (*side + n - 1) % n
-			s.recompute()
+			return s, s.recompute()
 		case key.Matches(msg, s.keys.Next):
 			*side = (*side + 1) % n
-			s.recompute()
+			return s, s.recompute()
 		case key.Matches(msg, s.keys.Swap):
 			s.before, s.after = s.after, s.before
-			s.recompute()
+			return s, s.recompute()
+		case key.Matches(msg, s.keys.FE):
+			s.feOn = !s.feOn
+			return s, s.recompute()
 		case key.Matches(msg, s.keys.Edit):
 			i := *side
 			if i != s.c.doc.wall.Active {
@@ -200,7 +243,7 @@ func (s *compareScreen) view() string {
 	c := s.cmp
 	var diff []report.CompareRow
 	for _, r := range report.CompareRows(c) {
-		if r.Key != "layout" && r.Key != "openings" { // the headings say these
+		if r.Key != "layout" && r.Key != "openings" && r.Key != "fe_mesh" { // said elsewhere
 			diff = append(diff, r)
 		}
 	}
@@ -253,6 +296,8 @@ func (s *compareScreen) view() string {
 		lines = append(lines, st.note.Render(truncate(s.msg, s.width)))
 	case len(w.Layouts) < 2:
 		lines = append(lines, st.note.Render(truncate("This wall has one layout: press esc, then n to make a variant.", s.width)))
+	case s.feRunning:
+		lines = append(lines, st.note.Render("finite-element check running..."))
 	default:
 		lines = append(lines, "")
 	}
@@ -296,11 +341,56 @@ func cmpPierLines(st *styles, rows []report.ComparePierRow, n, width int) []stri
 	if len(rows) == 0 {
 		return []string{st.note.Render("No pier table: the classic method has no answer for one of the layouts.")}
 	}
-	cols := [][]string{{"before"}, {"after"}, {"share"}, {"share"}, {"change"}, {"V before"}, {"V after"}}
+	withFE := false
 	for _, r := range rows {
-		for i, c := range []string{r.Before, r.After, r.ShareBefore, r.ShareAfter, r.Change, r.ShearBefore, r.ShearAfter} {
-			cols[i] = append(cols[i], c)
+		if r.FEBefore != "" || r.FEAfter != "" {
+			withFE = true
 		}
+	}
+	column := func(head string, f func(r report.ComparePierRow) string) []string {
+		col := []string{head}
+		for _, r := range rows {
+			v := f(r)
+			if v == "" {
+				v = "-"
+			}
+			col = append(col, v)
+		}
+		return col
+	}
+	cols := [][]string{
+		column("before", func(r report.ComparePierRow) string { return r.Before }),
+		column("after", func(r report.ComparePierRow) string { return r.After }),
+		column("share", func(r report.ComparePierRow) string { return r.ShareBefore }),
+		column("share", func(r report.ComparePierRow) string { return r.ShareAfter }),
+		column("change", func(r report.ComparePierRow) string { return r.Change }),
+	}
+	shear := [][]string{
+		column("V before", func(r report.ComparePierRow) string { return r.ShearBefore }),
+		column("V after", func(r report.ComparePierRow) string { return r.ShearAfter }),
+	}
+	feCols := [][]string{
+		column("FE before", func(r report.ComparePierRow) string { return r.FEBefore }),
+		column("FE after", func(r report.ComparePierRow) string { return r.FEAfter }),
+	}
+	colWidth := func(cs [][]string) int {
+		n := 0
+		for _, col := range cs {
+			w := 0
+			for _, c := range col {
+				w = max(w, len([]rune(c)))
+			}
+			n += w + 2
+		}
+		return n
+	}
+	switch {
+	case !withFE:
+		cols = append(cols, shear...)
+	case colWidth(cols)+colWidth(shear)+colWidth(feCols)+12 <= width:
+		cols = append(append(cols, shear...), feCols...)
+	default: // the FE shares take the place of the shear forces
+		cols = append(cols, feCols...)
 	}
 	wid := make([]int, len(cols))
 	for i, col := range cols {

@@ -77,6 +77,9 @@ func TestCompareScreenGolden(t *testing.T) {
 	for _, size := range [][2]int{{80, 24}, {120, 36}} {
 		s := newCompareScreen(cmpCommon("annex.toml"))
 		s.setSize(size[0], size[1])
+		// The FE numbers belong to package fe; the golden file shows the
+		// classic comparison (TestCompareScreenFE covers the FE rows).
+		s.update(cmpKey("f"))
 		v := ansi.Strip(s.view())
 		cmpCheckSize(t, v, size[0], size[1])
 		cmpGoldenView(t, fmt.Sprintf("compare_%dx%d.golden", size[0], size[1]), v)
@@ -212,5 +215,36 @@ func TestCompareOpensFromElevation(t *testing.T) {
 	}
 	if v := ansi.Strip(m.View()); !strings.Contains(v, "compare layouts") {
 		t.Errorf("view:\n%s", v)
+	}
+}
+
+func TestCompareScreenFE(t *testing.T) {
+	s := newCompareScreen(cmpCommon("annex.toml"))
+	s.setSize(120, 36)
+	cmd := s.recompute()
+	if cmd == nil || !s.feRunning {
+		t.Fatal("FE check not started")
+	}
+	stale := cmd
+	_, cmd = s.update(cmpKey("s")) // swap: a new request
+	s.update(stale())
+	if !s.feRunning || s.cmp.Before.FE != nil {
+		t.Fatal("a stale FE answer was taken")
+	}
+	s.update(cmd())
+	if s.feRunning || s.cmp.Before.FE == nil || s.cmp.After.FE == nil {
+		t.Fatalf("no FE answer: %v %v", s.cmp.Before.FEErr, s.cmp.After.FEErr)
+	}
+	v := ansi.Strip(s.view())
+	cmpCheckSize(t, v, 120, 36)
+	for _, want := range []string{"FE relative rigidity", fmt.Sprintf("%.4f", s.cmp.Before.FE.Rigidity), "FE before"} {
+		if !strings.Contains(v, want) {
+			t.Errorf("view lacks %q:\n%s", want, v)
+		}
+	}
+	// f switches it off: no FE rows.
+	s.update(cmpKey("f"))
+	if v := ansi.Strip(s.view()); strings.Contains(v, "FE relative rigidity") {
+		t.Error("FE rows with the check off")
 	}
 }
