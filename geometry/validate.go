@@ -12,6 +12,20 @@ import (
 // above the rounding of sums such as 4 ft + 14 ft = 18 ft in metres.
 const edgeTol = 1e-9
 
+// Plausible ranges. They are far wider than any building needs; they exist
+// so that no accepted wall can drive the mechanics to overflow (h/L stays
+// within 1e8, E·t·Δ within float64) and so that a wrong unit is caught.
+const (
+	minSize      Length = 1e-4 // 0.1 mm
+	maxSize      Length = 1e4  // 10 km
+	maxStress    Stress = 1e12 // 1000 GPa, five times steel's modulus
+	maxForce     Force  = 1e12 // 10^9 kN
+	minModifier         = 0.01
+	maxModifier         = 10.0
+	maxFactor           = 100.0 // C_d and I_e
+	maxMeshCells        = 1000  // elements along the wall's larger side
+)
+
 // Validate checks every rule a wall must satisfy to be solved, drawn and
 // saved, and returns all the problems at once as an ErrorList (nil when
 // there is none). Keys name the settings as a wall file would.
@@ -38,20 +52,26 @@ func (w *Wall) validate(l *ErrorList) {
 	w.validateMaterial(l)
 	if s := float64(w.Load.Shear); !finite(s) {
 		l.add("load.shear", "is not a finite number")
+	} else if s > float64(maxForce) {
+		l.add("load.shear", "is implausibly large ("+FormatForce(w.Load.Shear, sys)+"); check the unit")
 	} else if s < 0 {
 		l.add("load.shear", "must not be negative (is "+FormatForce(w.Load.Shear, sys)+"); the sign of the shear does not change rigidity or shares")
 	}
-	positiveNumber(l, "stiffness.flexure", w.Stiffness.Flexure)
-	positiveNumber(l, "stiffness.shear", w.Stiffness.Shear)
-	positiveNumber(l, "drift.cd", w.Drift.Cd)
-	positiveNumber(l, "drift.ie", w.Drift.Ie)
+	numberIn(l, "stiffness.flexure", w.Stiffness.Flexure, minModifier, maxModifier)
+	numberIn(l, "stiffness.shear", w.Stiffness.Shear, minModifier, maxModifier)
+	numberIn(l, "drift.cd", w.Drift.Cd, 0, maxFactor)
+	numberIn(l, "drift.ie", w.Drift.Ie, 0, maxFactor)
 	w.validateDriftLimit(l)
 	if m := float64(w.Check.Mesh); !finite(m) {
 		l.add("check.mesh", "is not a finite number")
 	} else if m < 0 {
 		l.add("check.mesh", "must be positive (or left out for the default size)")
-	} else if m > 0 && w.Length > 0 && w.Height > 0 && m > math.Max(float64(w.Length), float64(w.Height)) {
-		l.add("check.mesh", "is larger than the wall ("+FormatLength(w.Check.Mesh, sys)+")")
+	} else if big := math.Max(float64(w.Length), float64(w.Height)); m > 0 && finite(big) && big > 0 {
+		if m > big {
+			l.add("check.mesh", "is larger than the wall ("+FormatLength(w.Check.Mesh, sys)+")")
+		} else if m*maxMeshCells < big {
+			l.add("check.mesh", "is too fine: more than "+strconv.Itoa(maxMeshCells)+" elements along the wall (at least "+FormatLength(Length(big/maxMeshCells), sys)+")")
+		}
 	}
 	if w.Check.Element != "" && !knownElement(w.Check.Element) {
 		l.add("check.element", "unknown element "+strconv.Quote(w.Check.Element)+" (use qm6 or q4)")
@@ -69,11 +89,15 @@ func (w *Wall) validateMaterial(l *ErrorList) {
 		l.add("material.strength", "is not a finite number")
 	} else if s < 0 || (s == 0 && m.Kind != Custom) {
 		l.add("material.strength", "must be greater than zero (is "+FormatStress(m.Strength, sys)+")")
+	} else if s > float64(maxStress) {
+		l.add("material.strength", tooLargeStress(m.Strength, sys))
 	}
 	if e := float64(m.Modulus); !finite(e) {
 		l.add("material.modulus", "is not a finite number")
 	} else if e < 0 {
 		l.add("material.modulus", "must be greater than zero (is "+FormatStress(m.Modulus, sys)+")")
+	} else if e > float64(maxStress) {
+		l.add("material.modulus", tooLargeStress(m.Modulus, sys))
 	} else if e == 0 && m.Kind == Custom {
 		l.add("material.modulus", `is required for kind = "custom"`)
 	}
@@ -81,6 +105,8 @@ func (w *Wall) validateMaterial(l *ErrorList) {
 		l.add("material.shear_modulus", "is not a finite number")
 	} else if g < 0 {
 		l.add("material.shear_modulus", "must be greater than zero (is "+FormatStress(m.ShearModulus, sys)+")")
+	} else if g > float64(maxStress) {
+		l.add("material.shear_modulus", tooLargeStress(m.ShearModulus, sys))
 	}
 }
 
@@ -371,13 +397,26 @@ func positiveLength(l *ErrorList, key string, v Length, sys System) bool {
 		l.add(key, "must be greater than zero (is "+FormatLength(v, sys)+")")
 		return false
 	}
+	if v < minSize || v > maxSize {
+		l.add(key, "is implausible ("+strconv.FormatFloat(float64(v), 'g', 4, 64)+" m); sizes run from 0.1 mm to 10 km, check the unit")
+		return false
+	}
 	return true
 }
 
-func positiveNumber(l *ErrorList, key string, v float64) {
-	if !finite(v) {
+func tooLargeStress(s Stress, sys System) string {
+	return "is implausibly large (" + FormatStress(s, sys) + "); check the unit"
+}
+
+// numberIn checks lo < v ≤ hi, or lo ≤ v ≤ hi when lo > 0.
+func numberIn(l *ErrorList, key string, v, lo, hi float64) {
+	g := func(x float64) string { return strconv.FormatFloat(x, 'g', -1, 64) }
+	switch {
+	case !finite(v):
 		l.add(key, "is not a finite number")
-	} else if v <= 0 {
-		l.add(key, "must be greater than zero (is "+strconv.FormatFloat(v, 'g', -1, 64)+")")
+	case v <= 0:
+		l.add(key, "must be greater than zero (is "+g(v)+")")
+	case v < lo || v > hi:
+		l.add(key, "must be between "+g(lo)+" and "+g(hi)+" (is "+g(v)+")")
 	}
 }

@@ -103,6 +103,18 @@ func TestValidate(t *testing.T) {
 				{Name: "A", X: 0, Width: ft, Height: ft}, {Name: "B", X: 0.5 * ft, Width: ft, Height: ft}}})
 		}, "variant[1].opening[2]"},
 		{"bad title", func(w *Wall) { w.Title = "\xff" }, "title"},
+		{"wall of 20 km", func(w *Wall) { w.Length = 2e4 }, "length"},
+		{"thickness of 0.01 mm", func(w *Wall) { w.Thickness = 1e-5 }, "thickness"},
+		{"opening of 0.01 mm", func(w *Wall) { w.Layouts[0].Openings[0].Width = 1e-5 }, "opening[1].width"},
+		{"strength of 10^13 Pa", func(w *Wall) { w.Material.Strength = 1e13 }, "material.strength"},
+		{"modulus of 10^13 Pa", func(w *Wall) { w.Material.Modulus = 1e13 }, "material.modulus"},
+		{"shear of 10^13 N", func(w *Wall) { w.Load.Shear = 1e13 }, "load.shear"},
+		{"modifier of 20", func(w *Wall) { w.Stiffness.Flexure = 20 }, "stiffness.flexure"},
+		{"modifier of 0.001", func(w *Wall) { w.Stiffness.Shear = 0.001 }, "stiffness.shear"},
+		{"cd of 1000", func(w *Wall) { w.Drift.Cd = 1000 }, "drift.cd"},
+		{"mesh too fine", func(w *Wall) { w.Check.Mesh = 0.1 * Inch }, "check.mesh"},
+		{"mesh fine enough", func(w *Wall) { w.Check.Mesh = 1 * Inch }, ""},
+		{"mesh larger than the wall", func(w *Wall) { w.Check.Mesh = 21 * ft }, "check.mesh"},
 	}
 	for _, c := range cases {
 		w := testWall()
