@@ -1,0 +1,91 @@
+package main
+
+import (
+	"bytes"
+	"fmt"
+	"os"
+	"strings"
+	"time"
+
+	"pierwise/geometry"
+	"pierwise/report"
+	"pierwise/storey"
+)
+
+func init() {
+	register(command{
+		name:  "report",
+		args:  "[FILE[:LAYOUT]] [-o OUT] [--fe] [--mesh SIZE] [--element q4|qm6]",
+		short: "write the text report of a wall (or of a storey file) for the calculation package",
+		run:   runReport,
+	})
+}
+
+func runReport(e *env, args []string) error {
+	fs := newFlags(e, "report")
+	outPath := fs.String("o", "", "write the report to this file (atomically) instead of standard output")
+	var ff feFlags
+	fs.BoolVar(&ff.on, "fe", false, "include the finite-element check")
+	fs.StringVar(&ff.mesh, "mesh", "", "maximum element size of the finite-element mesh")
+	fs.StringVar(&ff.element, "element", "", "finite-element type: qm6 (default) or q4")
+	files, err := parseInterleaved(fs, args)
+	if err != nil {
+		return err
+	}
+	if len(files) > 1 {
+		return usagef("report takes one FILE, got %d", len(files))
+	}
+	if ff.mesh != "" || ff.element != "" {
+		ff.on = true
+	}
+	arg := ""
+	if len(files) == 1 {
+		arg = files[0]
+	}
+	var buf bytes.Buffer
+	var classicErr error // the report is written, but the wall has no answer
+	now := time.Now()
+	if isStorey(arg) {
+		if err := storey.WriteReport(&buf, arg, now); err != nil {
+			return err
+		}
+	} else {
+		s, err := solveArg(arg, &ff)
+		if err != nil {
+			return err
+		}
+		in := report.Input{Path: arg, Wall: s.wall, Result: s.res, Err: s.err, FE: s.fe, FEErr: s.feErr, Now: now, Version: version}
+		if err := report.Wall(&buf, in); err != nil {
+			return err
+		}
+		classicErr = s.err
+	}
+	if *outPath == "" {
+		if _, err := e.stdout.Write(buf.Bytes()); err != nil {
+			return err
+		}
+	} else {
+		if err := geometry.WriteFileAtomic(*outPath, buf.Bytes()); err != nil {
+			return err
+		}
+		fmt.Fprintln(e.stderr, "report written to", *outPath)
+	}
+	if classicErr != nil {
+		return fmt.Errorf("%s: %w", displayName(arg), classicErr)
+	}
+	return nil
+}
+
+// isStorey reports whether arg names a storey file rather than a wall file.
+func isStorey(arg string) bool {
+	if arg == "" || strings.Contains(arg, ":") && !fileExists(arg) {
+		return false
+	}
+	data, err := os.ReadFile(arg)
+	return err == nil && storey.IsStoreyFile(data)
+}
+
+func fileExists(p string) bool {
+	_, err := os.Stat(p)
+	return err == nil
+}

@@ -1,0 +1,421 @@
+package main
+
+import (
+	"encoding/json"
+	"errors"
+	"fmt"
+	"io"
+	"strconv"
+	"strings"
+
+	"pierwise/demo"
+	"pierwise/geometry"
+	"pierwise/pier"
+	"pierwise/pier/fe"
+	"pierwise/report"
+	"pierwise/study"
+)
+
+func init() {
+	register(command{
+		name:  "solve",
+		args:  "[FILE[:LAYOUT]...] [--json] [--fe] [--mesh SIZE] [--element q4|qm6]",
+		short: "rigidity, pier shares, forces and drift of each wall (the demo wall without FILE)",
+		run:   runSolve,
+	})
+}
+
+// feFlags are the finite-element options shared by solve and report.
+type feFlags struct {
+	on      bool
+	mesh    string
+	element string
+}
+
+func (f *feFlags) options(w *geometry.Wall) (fe.Options, error) {
+	opt := fe.Options{Mesh: w.Check.Mesh, Element: w.Check.Element}
+	if f.mesh != "" {
+		m, err := geometry.ParseLength(f.mesh, w.Units)
+		if err != nil {
+			return opt, usagef("--mesh: %v", err)
+		}
+		if m <= 0 {
+			return opt, usagef("--mesh: the element size must be positive")
+		}
+		opt.Mesh = m
+	}
+	if f.element != "" {
+		opt.Element = f.element
+	}
+	return opt, nil
+}
+
+// solved is one wall with its answers.
+type solved struct {
+	arg   string // the command-line argument, "" for the demo
+	wall  *geometry.Wall
+	res   *pier.Result
+	err   error // the classic method's error
+	fe    *fe.Result
+	feErr error
+}
+
+// solveArg loads FILE[:LAYOUT] (the demo for "") and solves it.
+func solveArg(arg string, ff *feFlags) (*solved, error) {
+	var w *geometry.Wall
+	if arg == "" {
+		w = demo.Wall()
+	} else {
+		var err error
+		if w, err = study.Open(arg); err != nil {
+			return nil, err
+		}
+	}
+	s := &solved{arg: arg, wall: w}
+	s.res, s.err = pier.Solve(w)
+	if ff != nil && ff.on {
+		opt, err := ff.options(w)
+		if err != nil {
+			return nil, err
+		}
+		s.fe, s.feErr = fe.Solve(w, s.res, opt)
+	}
+	return s, nil
+}
+
+func runSolve(e *env, args []string) error {
+	fs := newFlags(e, "solve")
+	asJSON := fs.Bool("json", false, "print JSON")
+	var ff feFlags
+	fs.BoolVar(&ff.on, "fe", false, "also run the finite-element check")
+	fs.StringVar(&ff.mesh, "mesh", "", "maximum element size of the finite-element mesh, e.g. 6in or 150mm")
+	fs.StringVar(&ff.element, "element", "", "finite-element type: qm6 (default) or q4")
+	files, err := parseInterleaved(fs, args)
+	if err != nil {
+		return err
+	}
+	if (ff.mesh != "" || ff.element != "") && !ff.on {
+		ff.on = true
+	}
+	if len(files) == 0 {
+		files = []string{""}
+	}
+	var all []*solved
+	var failed []string
+	for _, f := range files {
+		s, err := solveArg(f, &ff)
+		if err != nil {
+			var ue *usageError
+			if errors.As(err, &ue) {
+				return err
+			}
+			fmt.Fprintln(e.stderr, "pierwise:", err)
+			failed = append(failed, f)
+			continue
+		}
+		if s.err != nil {
+			fmt.Fprintf(e.stderr, "pierwise: %s: %v\n", displayName(f), s.err)
+			failed = append(failed, f)
+		}
+		all = append(all, s)
+	}
+	if *asJSON {
+		if err := writeSolveJSON(e.stdout, all); err != nil {
+			return err
+		}
+	} else {
+		for i, s := range all {
+			if i > 0 {
+				fmt.Fprintln(e.stdout)
+			}
+			writeSolveTable(e.stdout, s)
+		}
+	}
+	if len(failed) > 0 {
+		return fmt.Errorf("%d of %d walls could not be solved", len(failed), len(files))
+	}
+	return nil
+}
+
+func displayName(arg string) string {
+	if arg == "" {
+		return "demo wall"
+	}
+	return arg
+}
+
+func writeSolveTable(out io.Writer, s *solved) {
+	w, u := s.wall, report.UnitsFor(s.wall.Units)
+	L := func(l geometry.Length) string { return geometry.FormatLength(l, w.Units) }
+	title := w.Title
+	if title == "" {
+		title = displayName(s.arg)
+	}
+	fmt.Fprintf(out, "%s  [%s, layout %q]\n", title, displayName(s.arg), w.Layouts[w.Active].Name)
+	support := "cantilever"
+	if w.Support == geometry.Fixed {
+		support = "fixed-fixed"
+	}
+	fmt.Fprintf(out, "  wall %s long × %s high × %s thick, %s, %d openings\n", L(w.Length), L(w.Height), L(w.Thickness), support, len(w.Openings()))
+	if s.res == nil {
+		fmt.Fprintf(out, "  classic method: no answer: %v\n", s.err)
+		writeFETable(out, s)
+		return
+	}
+	r := s.res
+	bend := 0.0
+	if d := r.Split.Total(); d > 0 {
+		bend = r.Split.Bending / d
+	}
+	fmt.Fprintf(out, "  relative deflection %.4f /(E·t), relative rigidity %.4f E·t (bending %.0f %%, shear %.0f %%)\n", r.Deflection, r.Rigidity, 100*bend, 100*(1-bend))
+	if r.Moduli.E > 0 {
+		fmt.Fprintf(out, "  E = %s, E_v = %s; rigidity %.4g %s\n", geometry.FormatStress(r.Moduli.E, w.Units), geometry.FormatStress(r.Moduli.Ev, w.Units), u.RigidityOf(r.RigidityAbs), u.Rigidity)
+	}
+	if r.HasLoad {
+		d := r.Drift
+		check := "no limit set"
+		if d.Allowable > 0 {
+			check = fmt.Sprintf("limit %.4g %s: ", u.DeflectionOf(d.Allowable), u.Deflection)
+			if d.OK {
+				check += "OK"
+			} else {
+				check += "EXCEEDED"
+			}
+		}
+		fmt.Fprintf(out, "  V = %s: δe = %.4g %s, δ = Cd·δe/Ie = %.4g %s (%.5f h), %s\n", geometry.FormatForce(w.Load.Shear, w.Units), u.DeflectionOf(r.DeflectionAbs), u.Deflection, u.DeflectionOf(d.Design), u.Deflection, d.Ratio, check)
+	}
+	head := fmt.Sprintf("  %-8s %9s %9s %6s %-10s %9s %7s", "pier", "h", "L", "h/L", "support", "R rel", "share")
+	if r.HasLoad {
+		head += fmt.Sprintf(" %9s %11s", "V "+u.Force, "M "+u.Moment)
+	}
+	fmt.Fprintln(out, head)
+	for _, p := range r.Piers {
+		name := p.Name
+		if !p.Leaf {
+			name += "*"
+		}
+		sup := "cantilever"
+		if p.Support == geometry.Fixed {
+			sup = "fixed"
+		}
+		line := fmt.Sprintf("  %-8s %9s %9s %6.2f %-10s %9.4f %6.1f%%", name, L(geometry.Length(p.H())), L(geometry.Length(p.L())), p.Ratio(), sup, p.Rigidity, 100*p.Share)
+		if r.HasLoad && p.Leaf {
+			line += fmt.Sprintf(" %9.2f %11.2f", u.ForceOf(p.Shear), u.MomentOf(p.Moment))
+		} else if r.HasLoad {
+			line += fmt.Sprintf(" %9s %11s", "-", "-")
+		}
+		fmt.Fprintln(out, line)
+	}
+	for _, warn := range r.Warnings {
+		fmt.Fprintln(out, wrap("  warning: ", warn, 100))
+	}
+	writeFETable(out, s)
+}
+
+func writeFETable(out io.Writer, s *solved) {
+	if s.feErr != nil {
+		fmt.Fprintf(out, "  finite-element check failed: %v\n", s.feErr)
+	}
+	if s.fe == nil {
+		return
+	}
+	f := s.fe
+	fmt.Fprintf(out, "  finite-element check (%s, mesh %s, %d elements): relative deflection %.4f, relative rigidity %.4f",
+		f.Element, geometry.FormatLength(f.Mesh, s.wall.Units), f.Elements, f.Deflection, f.Rigidity)
+	if s.res != nil {
+		fmt.Fprintf(out, "; classic is %+.1f %% of it", 100*f.Difference)
+	}
+	fmt.Fprintln(out)
+	if len(f.Piers) > 0 {
+		parts := make([]string, len(f.Piers))
+		for i, p := range f.Piers {
+			parts[i] = fmt.Sprintf("%s %.1f%%", p.Name, 100*p.Share)
+		}
+		fmt.Fprintf(out, "  finite-element shares: %s\n", strings.Join(parts, ", "))
+	}
+}
+
+// JSON output (DESIGN §7). Lengths in the base unit (ft or m); forces,
+// rigidities, deflections and moments in the report units, named in "units".
+type jsonWall struct {
+	File               string     `json:"file"`
+	Title              string     `json:"title"`
+	Layout             string     `json:"layout"`
+	Units              jsonUnits  `json:"units"`
+	Error              string     `json:"error,omitempty"`
+	DeflectionRelative *float64   `json:"deflection_relative,omitempty"`
+	RigidityRelative   *float64   `json:"rigidity_relative,omitempty"`
+	BendingFraction    *float64   `json:"bending_fraction,omitempty"`
+	Rigidity           *float64   `json:"rigidity,omitempty"`
+	Deflection         *float64   `json:"deflection,omitempty"`
+	Shear              *float64   `json:"shear,omitempty"`
+	Drift              *jsonDrift `json:"drift,omitempty"`
+	Piers              []jsonPier `json:"piers"`
+	Warnings           []string   `json:"warnings"`
+	FE                 *jsonFE    `json:"fe,omitempty"`
+}
+
+type jsonUnits struct {
+	Length     string `json:"length"`
+	Force      string `json:"force"`
+	Deflection string `json:"deflection"`
+	Rigidity   string `json:"rigidity"`
+	Moment     string `json:"moment"`
+}
+
+type jsonDrift struct {
+	Design    float64  `json:"design"`
+	Ratio     float64  `json:"ratio"`
+	Allowable *float64 `json:"allowable,omitempty"`
+	Limit     *float64 `json:"limit,omitempty"`
+	OK        bool     `json:"ok"`
+}
+
+type jsonPier struct {
+	Name             string   `json:"name"`
+	Parent           string   `json:"parent,omitempty"`
+	X0               float64  `json:"x0"`
+	X1               float64  `json:"x1"`
+	Y0               float64  `json:"y0"`
+	Y1               float64  `json:"y1"`
+	H                float64  `json:"h"`
+	L                float64  `json:"l"`
+	Support          string   `json:"support"`
+	RigidityRelative float64  `json:"rigidity_relative"`
+	Share            float64  `json:"share"`
+	Leaf             bool     `json:"leaf"`
+	BendingFraction  float64  `json:"bending_fraction"`
+	Shear            *float64 `json:"shear,omitempty"`
+	Moment           *float64 `json:"moment,omitempty"`
+}
+
+type jsonFE struct {
+	DeflectionRelative float64       `json:"deflection_relative"`
+	RigidityRelative   float64       `json:"rigidity_relative"`
+	Difference         *float64      `json:"rigidity_difference,omitempty"`
+	Mesh               float64       `json:"mesh"`
+	Element            string        `json:"element"`
+	Elements           int           `json:"elements"`
+	DOFs               int           `json:"dofs"`
+	Piers              []jsonFEShare `json:"piers"`
+	Error              string        `json:"error,omitempty"`
+}
+
+type jsonFEShare struct {
+	Name  string  `json:"name"`
+	Share float64 `json:"share"`
+}
+
+func ptr(x float64) *float64 { return &x }
+
+// tidy rounds a coordinate to 12 significant digits, so that 10 ft read as
+// metres and converted back prints as 10, not 10.000000000000002.
+func tidy(x float64) float64 {
+	y, _ := strconv.ParseFloat(strconv.FormatFloat(x, 'g', 12, 64), 64)
+	return y
+}
+
+func toJSON(s *solved) jsonWall {
+	w, u := s.wall, report.UnitsFor(s.wall.Units)
+	j := jsonWall{
+		File: s.arg, Title: w.Title, Layout: w.Layouts[w.Active].Name,
+		Units:    jsonUnits{Length: u.Coord, Force: u.Force, Deflection: u.Deflection, Rigidity: u.Rigidity, Moment: u.Moment},
+		Piers:    []jsonPier{},
+		Warnings: []string{},
+	}
+	if s.err != nil {
+		j.Error = s.err.Error()
+	}
+	if r := s.res; r != nil {
+		j.DeflectionRelative, j.RigidityRelative = ptr(r.Deflection), ptr(r.Rigidity)
+		if d := r.Split.Total(); d > 0 {
+			j.BendingFraction = ptr(r.Split.Bending / d)
+		}
+		if r.Moduli.E > 0 {
+			j.Rigidity = ptr(u.RigidityOf(r.RigidityAbs))
+		}
+		if r.HasLoad {
+			j.Shear = ptr(u.ForceOf(w.Load.Shear))
+			j.Deflection = ptr(u.DeflectionOf(r.DeflectionAbs))
+			d := &jsonDrift{Design: u.DeflectionOf(r.Drift.Design), Ratio: r.Drift.Ratio, OK: r.Drift.OK}
+			if r.Drift.Allowable > 0 {
+				d.Allowable, d.Limit = ptr(u.DeflectionOf(r.Drift.Allowable)), ptr(w.Drift.Limit)
+			}
+			j.Drift = d
+		}
+		for _, p := range r.Piers {
+			jp := jsonPier{
+				Name: p.Name, Parent: p.Parent,
+				X0: tidy(u.CoordOf(p.Rect.X0)), X1: tidy(u.CoordOf(p.Rect.X1)), Y0: tidy(u.CoordOf(p.Rect.Y0)), Y1: tidy(u.CoordOf(p.Rect.Y1)),
+				H: tidy(u.CoordOf(p.H())), L: tidy(u.CoordOf(p.L())), Support: supportWord(p.Support),
+				RigidityRelative: p.Rigidity, Share: p.Share, Leaf: p.Leaf,
+			}
+			if d := p.Parts.Total(); d > 0 {
+				jp.BendingFraction = p.Parts.Bending / d
+			}
+			if r.HasLoad && p.Leaf {
+				jp.Shear, jp.Moment = ptr(u.ForceOf(p.Shear)), ptr(u.MomentOf(p.Moment))
+			}
+			j.Piers = append(j.Piers, jp)
+		}
+		j.Warnings = append(j.Warnings, r.Warnings...)
+	}
+	if s.fe != nil || s.feErr != nil {
+		f := &jsonFE{Piers: []jsonFEShare{}}
+		if s.feErr != nil {
+			f.Error = s.feErr.Error()
+		} else {
+			f.DeflectionRelative, f.RigidityRelative = s.fe.Deflection, s.fe.Rigidity
+			f.Mesh, f.Element, f.Elements, f.DOFs = tidy(u.CoordOf(float64(s.fe.Mesh))), s.fe.Element, s.fe.Elements, s.fe.DOFs
+			if s.res != nil {
+				f.Difference = ptr(s.fe.Difference)
+			}
+			for _, p := range s.fe.Piers {
+				f.Piers = append(f.Piers, jsonFEShare{Name: p.Name, Share: p.Share})
+			}
+		}
+		j.FE = f
+	}
+	return j
+}
+
+func supportWord(s geometry.Support) string {
+	if s == geometry.Fixed {
+		return "fixed"
+	}
+	return "cantilever"
+}
+
+// writeSolveJSON prints one object for one wall and an array for several.
+func writeSolveJSON(out io.Writer, all []*solved) error {
+	enc := json.NewEncoder(out)
+	enc.SetIndent("", "  ")
+	if len(all) == 1 {
+		return enc.Encode(toJSON(all[0]))
+	}
+	list := make([]jsonWall, len(all))
+	for i, s := range all {
+		list[i] = toJSON(s)
+	}
+	return enc.Encode(list)
+}
+
+// wrap word-wraps s to width after a first-line prefix, indenting the
+// following lines to match.
+func wrap(prefix, s string, width int) string {
+	var b strings.Builder
+	pad := strings.Repeat(" ", len(prefix))
+	line := prefix
+	for _, word := range strings.Fields(s) {
+		if len(line)+1+len(word) > width && line != prefix && line != pad {
+			b.WriteString(line + "\n")
+			line = pad
+		}
+		if line != prefix && line != pad {
+			line += " "
+		}
+		line += word
+	}
+	b.WriteString(line)
+	return b.String()
+}

@@ -1,0 +1,375 @@
+// Package report writes the text report of a wall for the calculation
+// package: title block, inputs, a to-scale elevation, the classic method's
+// working, the pier table, results, the finite-element check when it was
+// run, warnings and the caution. It formats a pier.Result (and an fe.Result);
+// it computes no mechanics of its own.
+package report
+
+import (
+	"fmt"
+	"io"
+	"math"
+	"strings"
+	"time"
+
+	"pierwise/geometry"
+	"pierwise/pier"
+	"pierwise/pier/fe"
+	"pierwise/sketch"
+)
+
+// Caution is printed at the end of every report.
+const Caution = "CAUTION: these results support, and do not replace, the judgement of a licensed\n" +
+	"engineer; local codes govern. Check the inputs, the method's assumptions and the\n" +
+	"warnings above before using any number in a design."
+
+// Input is everything a wall report shows. Result is nil when the classic
+// method failed; Err then says why.
+type Input struct {
+	Path    string // the wall file, "" for the built-in demo
+	Wall    *geometry.Wall
+	Result  *pier.Result
+	Err     error
+	FE      *fe.Result
+	FEErr   error
+	Now     time.Time
+	Version string
+}
+
+// Wall writes the text report of one wall layout.
+func Wall(out io.Writer, in Input) error {
+	w := &writer{out: out}
+	wall := in.Wall
+	u := UnitsFor(wall.Units)
+
+	w.title("PIERWISE WALL REPORT")
+	w.kv("Title", orDash(wall.Title))
+	w.kv("File", orDefault(in.Path, "(built-in demo wall)"))
+	w.kv("Layout", layoutLine(wall))
+	w.kv("Date", in.Now.Format("2006-01-02 15:04 MST"))
+	w.kv("Program", "pierwise "+in.Version)
+	w.kv("Units", unitsLine(wall.Units))
+	w.kv("Method", "classic strip method (solid wall − strips with openings + piers)")
+
+	w.section("1. Inputs")
+	inputs(w, wall, in.Result)
+
+	w.section("2. Elevation (to scale; shares of the wall shear per leaf pier)")
+	w.lines(sketch.Elevation(wall, in.Result, 72, 22).String(), "  ")
+
+	if in.Result == nil {
+		w.section("3. Classic method")
+		w.para(fmt.Sprintf("The classic method cannot be applied to this layout: %v.", in.Err))
+		if in.FE != nil {
+			w.section("4. Finite-element check")
+			feSection(w, in.FE, nil, wall)
+		}
+		w.blank()
+		w.para(Caution)
+		return w.err
+	}
+	res := in.Result
+
+	w.section("3. Classic method (relative deflections in units of 1/(E·t))")
+	steps(w, res, wall)
+
+	w.section("4. Piers")
+	pierTable(w, res, wall)
+
+	w.section("5. Results")
+	results(w, res, wall, u)
+
+	n := 6
+	if in.FE != nil || in.FEErr != nil {
+		w.section(fmt.Sprintf("%d. Finite-element check", n))
+		if in.FE != nil {
+			feSection(w, in.FE, res, wall)
+		} else {
+			w.para(fmt.Sprintf("The finite-element check failed: %v.", in.FEErr))
+		}
+		n++
+	}
+
+	w.section(fmt.Sprintf("%d. Warnings", n))
+	warns := append([]string(nil), res.Warnings...)
+	if in.FE != nil && math.Abs(in.FE.Difference) > fe.WarnDifference {
+		warns = append(warns, fmt.Sprintf("The classic method's rigidity differs from the finite-element model's by %+.0f %% (more than %.0f %%): the piers are not as well fixed as the method assumes; prefer the finite-element rigidity for distributing shear, or justify the difference.", 100*in.FE.Difference, 100*fe.WarnDifference))
+	}
+	if len(warns) == 0 {
+		w.line("  none")
+	}
+	for _, s := range warns {
+		w.wrapped("  - ", s)
+	}
+	w.blank()
+	w.para(Caution)
+	return w.err
+}
+
+func inputs(w *writer, wall *geometry.Wall, res *pier.Result) {
+	sys := wall.Units
+	L := func(l geometry.Length) string { return geometry.FormatLength(l, sys) }
+	w.kv("Wall", fmt.Sprintf("length %s, height %s, thickness %s", L(wall.Length), L(wall.Height), L(wall.Thickness)))
+	w.kv("Support", supportLong(wall.Support))
+	w.kv("Material", materialLine(wall.Material, sys))
+	if res != nil && res.Moduli.E > 0 {
+		w.kv("E", fmt.Sprintf("%s; E_v = %s", geometry.FormatStress(res.Moduli.E, sys), geometry.FormatStress(res.Moduli.Ev, sys)))
+		w.kv("", res.Moduli.Source)
+	}
+	w.kv("Stiffness", fmt.Sprintf("flexure × %.2f, shear × %.2f (1.00 = gross section)", orOne(wall.Stiffness.Flexure), orOne(wall.Stiffness.Shear)))
+	if wall.Load.Shear > 0 {
+		w.kv("Load", fmt.Sprintf("in-plane shear V = %s at the top of the wall", geometry.FormatForce(wall.Load.Shear, sys)))
+	} else {
+		w.kv("Load", "none given (relative values only)")
+	}
+	w.kv("Drift", driftLine(wall.Drift))
+	ops := wall.Openings()
+	if len(ops) == 0 {
+		w.kv("Openings", "none (solid wall)")
+		return
+	}
+	w.kv("Openings", fmt.Sprintf("%d", len(ops)))
+	t := table{head: []string{"name", "kind", "x", "sill", "width", "height", "head"}, right: []bool{false, false, true, true, true, true, true}}
+	for _, o := range ops {
+		kind := "window"
+		if o.IsDoor() {
+			kind = "door"
+		}
+		t.add(o.Name, kind, L(o.X), L(o.Sill), L(o.Width), L(o.Height), L(o.Sill+o.Height))
+	}
+	t.write(w, "    ")
+}
+
+func steps(w *writer, res *pier.Result, wall *geometry.Wall) {
+	u := UnitsFor(wall.Units)
+	dim := func(r geometry.Rect) string {
+		return fmt.Sprintf("h %s × L %s", geometry.FormatLength(geometry.Length(r.H()), wall.Units), geometry.FormatLength(geometry.Length(r.W()), wall.Units))
+	}
+	_ = u
+	for _, s := range res.Steps {
+		indent := "  " + strings.Repeat("    ", depth(s.Region))
+		where := "wall"
+		if s.Region != "" && s.Region != "wall" {
+			where = "pier " + s.Region
+		}
+		var text, sign string
+		switch s.Kind {
+		case pier.StepSolid:
+			sign = "+"
+			text = fmt.Sprintf("%s as solid, %s, %s", where, dim(s.Rect), supportShort(s.Support))
+		case pier.StepStrip:
+			sign = "−"
+			text = fmt.Sprintf("strip %s…%s, %s, %s", yText(s.Rect.Y0, wall), yText(s.Rect.Y1, wall), dim(s.Rect), supportShort(s.Support))
+		case pier.StepPiers:
+			sign = "+"
+			text = fmt.Sprintf("piers %s in parallel: 1/Σ(1/Δ)", strings.Join(s.Piers, ", "))
+		}
+		w.line(fmt.Sprintf("%-58s %s %8.4f", indent+text, sign, s.Deflection))
+	}
+	w.line(fmt.Sprintf("%-58s = %8.4f", "  wall deflection Δ", res.Deflection))
+	w.line(fmt.Sprintf("%-58s = %8.4f", "  relative rigidity R = 1/Δ", res.Rigidity))
+}
+
+func pierTable(w *writer, res *pier.Result, wall *geometry.Wall) {
+	u := UnitsFor(wall.Units)
+	L := func(x float64) string { return geometry.FormatLength(geometry.Length(x), wall.Units) }
+	head := []string{"pier", "h", "L", "h/L", "support", "R rel", "share", "bend/shear"}
+	right := []bool{false, true, true, true, false, true, true, true}
+	if res.HasLoad {
+		head = append(head, "V "+u.Force, "M "+u.Moment)
+		right = append(right, true, true)
+	}
+	t := table{head: head, right: right}
+	for _, p := range res.Piers {
+		name := strings.Repeat("  ", depth(p.Name)-1) + p.Name
+		if !p.Leaf {
+			name += "*"
+		}
+		bf := 0.0
+		if d := p.Parts.Total(); d > 0 {
+			bf = p.Parts.Bending / d
+		}
+		row := []string{name, L(p.H()), L(p.L()), fmt.Sprintf("%.2f", p.Ratio()), supportShort(p.Support),
+			fmt.Sprintf("%.4f", p.Rigidity), fmt.Sprintf("%.1f %%", 100*p.Share), fmt.Sprintf("%.0f/%.0f %%", 100*bf, 100*(1-bf))}
+		if res.HasLoad && p.Leaf {
+			row = append(row, fmt.Sprintf("%.2f", u.ForceOf(p.Shear)), fmt.Sprintf("%.2f", u.MomentOf(p.Moment)))
+		} else if res.HasLoad {
+			row = append(row, "-", "-")
+		}
+		t.add(row...)
+	}
+	t.write(w, "  ")
+	w.line("  * pier with openings of its own; its share is split among the piers inside it,")
+	w.line("    which carry the forces.")
+	if res.HasLoad {
+		w.line("  M is at the pier's base for a cantilever pier, at its top and base (V·h/2) for a fixed pier.")
+	}
+}
+
+func results(w *writer, res *pier.Result, wall *geometry.Wall, u Units) {
+	w.kv("Δ relative", fmt.Sprintf("%.4f /(E·t)", res.Deflection))
+	w.kv("R relative", fmt.Sprintf("%.4f E·t", res.Rigidity))
+	if d := res.Split.Total(); d > 0 {
+		w.kv("Split", fmt.Sprintf("bending %.0f %%, shear %.0f %% of the wall's deflection", 100*res.Split.Bending/d, 100*res.Split.Shear/d))
+	}
+	if res.Moduli.E <= 0 {
+		w.kv("Rigidity", "not known: the material gives no modulus")
+		return
+	}
+	w.kv("Rigidity", fmt.Sprintf("R = %s %s  (R relative × E·t)", num(u.RigidityOf(res.RigidityAbs)), u.Rigidity))
+	if !res.HasLoad {
+		w.kv("Deflection", "no load given")
+		return
+	}
+	w.kv("Deflection", fmt.Sprintf("δe = %.4g %s under V = %s", u.DeflectionOf(res.DeflectionAbs), u.Deflection, geometry.FormatForce(wall.Load.Shear, wall.Units)))
+	d := res.Drift
+	w.kv("Drift", fmt.Sprintf("δ = Cd·δe/Ie = %.4g %s = %.5f h", u.DeflectionOf(d.Design), u.Deflection, d.Ratio))
+	if d.Allowable > 0 {
+		verdict := "OK"
+		if !d.OK {
+			verdict = "EXCEEDS THE LIMIT"
+		}
+		w.kv("Drift limit", fmt.Sprintf("%.4g %s (%.3f h): %s", u.DeflectionOf(d.Allowable), u.Deflection, wall.Drift.Limit, verdict))
+	} else {
+		w.kv("Drift limit", "none set")
+	}
+}
+
+func feSection(w *writer, r *fe.Result, res *pier.Result, wall *geometry.Wall) {
+	w.kv("Model", fmt.Sprintf("plane stress, element %s, max size %s, %d elements, %d unknowns", r.Element, geometry.FormatLength(r.Mesh, wall.Units), r.Elements, r.DOFs))
+	w.kv("Supports", "base fixed; shear spread over the top edge; deflection = mean of the top nodes")
+	w.kv("Δ relative", fmt.Sprintf("%.4f /(E·t)", r.Deflection))
+	w.kv("R relative", fmt.Sprintf("%.4f E·t", r.Rigidity))
+	if res == nil {
+		return
+	}
+	w.kv("Classic/FE", fmt.Sprintf("the classic rigidity is %+.1f %% of the model's", 100*r.Difference))
+	if len(r.Piers) == 0 {
+		return
+	}
+	share := map[string]float64{}
+	for _, p := range r.Piers {
+		share[p.Name] = p.Share
+	}
+	t := table{head: []string{"pier", "classic", "FE", "difference"}, right: []bool{false, true, true, true}}
+	for _, p := range res.Leaves() {
+		s, ok := share[p.Name]
+		if !ok {
+			continue
+		}
+		t.add(p.Name, fmt.Sprintf("%.1f %%", 100*p.Share), fmt.Sprintf("%.1f %%", 100*s), fmt.Sprintf("%+.1f pt", 100*(p.Share-s)))
+	}
+	t.write(w, "  ")
+}
+
+// depth is 0 for the wall, 1 for P1, 2 for P1.2 …
+func depth(name string) int {
+	if name == "" || name == "wall" {
+		return 0
+	}
+	return strings.Count(name, ".") + 1
+}
+
+func yText(y float64, wall *geometry.Wall) string {
+	return geometry.FormatLength(geometry.Length(y), wall.Units)
+}
+
+func layoutLine(w *geometry.Wall) string {
+	if len(w.Layouts) == 0 {
+		return "-"
+	}
+	name := w.Layouts[w.Active].Name
+	if len(w.Layouts) == 1 {
+		return name
+	}
+	return fmt.Sprintf("%s (%d of %d)", name, w.Active+1, len(w.Layouts))
+}
+
+func unitsLine(s geometry.System) string {
+	if s == geometry.SI {
+		return "SI (m, mm, kN, MPa)"
+	}
+	return "US customary (ft, in, kip, psi)"
+}
+
+func supportLong(s geometry.Support) string {
+	if s == geometry.Fixed {
+		return "fixed-fixed (base fixed, top kept from rotating)"
+	}
+	return "cantilever (base fixed, top free)"
+}
+
+func supportShort(s geometry.Support) string {
+	if s == geometry.Fixed {
+		return "fixed"
+	}
+	return "cantilever"
+}
+
+func materialLine(m geometry.Material, sys geometry.System) string {
+	var s string
+	switch m.Kind {
+	case geometry.ConcreteMasonry:
+		s = "concrete masonry, f'm = " + geometry.FormatStress(m.Strength, sys)
+	case geometry.ClayMasonry:
+		s = "clay masonry, f'm = " + geometry.FormatStress(m.Strength, sys)
+	case geometry.Concrete:
+		s = "concrete, f'c = " + geometry.FormatStress(m.Strength, sys)
+	default:
+		s = "custom"
+	}
+	if m.Modulus > 0 {
+		s += ", E given = " + geometry.FormatStress(m.Modulus, sys)
+	}
+	if m.ShearModulus > 0 {
+		s += ", E_v given = " + geometry.FormatStress(m.ShearModulus, sys)
+	}
+	return s
+}
+
+func driftLine(d geometry.Drift) string {
+	if d.Limit <= 0 {
+		return fmt.Sprintf("Cd = %.2g, Ie = %.2g, no limit set", orOne(d.Cd), orOne(d.Ie))
+	}
+	s := fmt.Sprintf("Cd = %.2g, Ie = %.2g, limit %.3f h", orOne(d.Cd), orOne(d.Ie), d.Limit)
+	if d.Preset != "" {
+		for _, p := range geometry.DriftPresets {
+			if p.Name == d.Preset {
+				return s + fmt.Sprintf(" (%s: %s)", p.Name, p.Source)
+			}
+		}
+		s += " (" + d.Preset + ")"
+	}
+	return s
+}
+
+func orOne(x float64) float64 {
+	if x == 0 {
+		return 1
+	}
+	return x
+}
+
+func orDash(s string) string { return orDefault(s, "-") }
+
+func orDefault(s, d string) string {
+	if s == "" {
+		return d
+	}
+	return s
+}
+
+// num prints a positive number with about four significant figures without
+// switching to exponent notation for ordinary magnitudes.
+func num(x float64) string {
+	switch a := math.Abs(x); {
+	case a >= 1000:
+		return fmt.Sprintf("%.0f", x)
+	case a >= 100:
+		return fmt.Sprintf("%.1f", x)
+	case a >= 10:
+		return fmt.Sprintf("%.2f", x)
+	default:
+		return fmt.Sprintf("%.4g", x)
+	}
+}

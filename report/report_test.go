@@ -1,0 +1,78 @@
+package report
+
+import (
+	"bytes"
+	"strings"
+	"testing"
+	"time"
+
+	"pierwise/demo"
+	"pierwise/geometry"
+	"pierwise/pier"
+)
+
+var reportTime = time.Date(2026, 12, 1, 9, 30, 0, 0, time.UTC)
+
+func wallReport(t *testing.T, w *geometry.Wall, path string) string {
+	t.Helper()
+	res, err := pier.Solve(w)
+	var buf bytes.Buffer
+	in := Input{Path: path, Wall: w, Result: res, Err: err, Now: reportTime, Version: "test"}
+	if err := Wall(&buf, in); err != nil {
+		t.Fatal(err)
+	}
+	return buf.String()
+}
+
+// The Masonry Chronicles wall with a nested opening (Concrete Masonry
+// Association of California and Nevada; geometry as in DESIGN §3): the
+// report must show the published working — solid 5.476, strip 1.421,
+// piers 3.559, wall 7.614 (printed; exact arithmetic gives 7.607).
+func TestWallReportPublishedWall(t *testing.T) {
+	w, err := geometry.LoadFile("../testdata/walls/nested.toml")
+	if err != nil {
+		t.Fatal(err)
+	}
+	got := wallReport(t, w, "testdata/walls/nested.toml")
+	for _, want := range []string{
+		"5.4760", // solid wall, 4(16/18)³ + 3(16/18); printed 5.476
+		"1.4211", // strip 0…8 ft, fixed: (8/18)³ + 3(8/18)
+		"3.5517", // piers P1 and P2 in parallel (printed 3.559 carries rounding)
+		"7.6066", // wall
+		"0.1315", // relative rigidity
+		"CAUTION",
+		"local codes govern",
+	} {
+		if !strings.Contains(got, want) {
+			t.Errorf("report lacks %q", want)
+		}
+	}
+	cmpGolden(t, "wall_nested.golden", []byte(got))
+}
+
+func TestWallReportDemo(t *testing.T) {
+	got := wallReport(t, demo.Wall(), "")
+	if strings.Contains(got, "NaN") || strings.Contains(got, "Inf") {
+		t.Fatalf("report prints a non-number:\n%s", got)
+	}
+	for _, want := range []string{"built-in demo wall", "Drift limit", "OK", "P1.2.1"} {
+		if !strings.Contains(got, want) {
+			t.Errorf("demo report lacks %q", want)
+		}
+	}
+	cmpGolden(t, "wall_demo.golden", []byte(got))
+}
+
+// A wall cut in two by a full-height opening has no answer: the report says
+// which opening cuts it instead of printing numbers.
+func TestWallReportCutWall(t *testing.T) {
+	w := demo.Wall()
+	w.Layouts[0].Openings = append(w.Layouts[0].Openings, geometry.Opening{Name: "SLOT", X: 20 * geometry.Foot, Width: 1 * geometry.Foot, Height: w.Height})
+	got := wallReport(t, w, "")
+	if !strings.Contains(got, "cannot be applied") || !strings.Contains(got, "SLOT") {
+		t.Errorf("cut wall report does not explain the cut:\n%s", got)
+	}
+	if strings.Contains(got, "NaN") || strings.Contains(got, "Inf") {
+		t.Errorf("cut wall report prints a non-number")
+	}
+}
