@@ -278,9 +278,16 @@ func (p *fileParser) length(m map[string]any, key, full string) (Length, bool) {
 func (p *fileParser) requiredLength(m map[string]any, key, full string) Length {
 	l, ok := p.length(m, key, full)
 	if !ok && !p.bad[full] {
-		ex := `"12ft"`
+		examples := map[string][2]string{
+			"length": {`"36ft"`, `"9.6m"`}, "height": {`"14ft"`, `"3.6m"`}, "thickness": {`"7.625in"`, `"190mm"`},
+			"x": {`"4ft"`, `"1.2m"`}, "width": {`"3ft"`, `"900mm"`},
+		}
+		ex := examples[key][0]
 		if p.sys == SI {
-			ex = `"3.6m"`
+			ex = examples[key][1]
+		}
+		if ex == "" {
+			ex = `"4ft"`
 		}
 		p.fail(full, "missing; add "+key+" = "+ex)
 	}
