@@ -29,22 +29,28 @@ const maxDefaultElements = 8000
 // that a user's very fine mesh is refused instead of exhausting memory.
 const maxBand = 250_000_000
 
-// WarnDifference is the relative difference |classic − FE| / FE in rigidity
+// WarnDifference is the relative difference (classic − FE) / FE in rigidity
 // beyond which the report warns that the hand method is far from the
-// continuum answer for this layout. 0.20, because:
-//   - for a solid wall the classic formula is a Timoshenko beam and the plane-
-//     stress answer differs from it by a few percent only (the FE base is
-//     fully fixed, which the beam's end sections are not quite), so up to
-//     about 5 % is modelling noise, not a property of the layout;
-//   - storey-shear distribution among walls (DESIGN §10) is proportional to
-//     rigidity, and a rigidity error under 20 % moves a wall's share by less
-//     than 20 %, which is within the spread engineers accept from the choice
-//     of cracked or gross stiffness (ACI 318-14 Table 6.6.3.1.1(a) ranges
-//     0.35–0.70 I_g, common practice);
-//   - beyond 20 % the rigid-spandrel assumption of the hand method is clearly
-//     not holding (typically slender spandrels or deep openings), and the pier
-//     shares, not just the total, deserve a second look.
-const WarnDifference = 0.20
+// continuum answer for this layout. 0.25, because:
+//   - the comparison's own noise is a few percent: the FE answer at the
+//     default mesh is within about 2 % of its converged value on the example
+//     walls, and for a solid wall the plane-stress model and the classic
+//     (Timoshenko-beam) formula agree within 2.5 % for h/L 0.25 to 3
+//     (TestSolidWallTimoshenko), so a difference there says nothing;
+//   - the hand method overestimates nearly every wall with openings (DESIGN
+//     §5: often by tens of percent; measured 23–112 % on the example walls),
+//     so a threshold near zero would warn on every wall and be ignored. A
+//     quarter is of the order of the stiffness uncertainty engineers already
+//     accept: halving I_g (cracked-section modifiers 0.70 or 0.35, ACI 318-14
+//     Table 6.6.3.1.1(a)) lowers a cantilever's rigidity by 11 % at h/L = 0.25
+//     and by 40 % at h/L = 1 (DESIGN §3 formulas). Beyond it the layout, not
+//     the stiffness assumption, drives the error, and the wall's share of the
+//     storey shear, proportional to its rigidity (DESIGN §10), deserves a
+//     second look;
+//   - it separates the measured cases as an engineer would: a solid wall (0 %)
+//     and a wall with two small windows (23 %) pass, a door under a deep
+//     spandrel (44 %) and a row of windows (112 %) warn.
+const WarnDifference = 0.25
 
 // Result is the finite-element answer for one wall layout. Deflection and
 // Rigidity are relative (E = 1, t = 1), like the classic method's.

@@ -6,6 +6,7 @@ import (
 	"testing"
 
 	"pierwise/geometry"
+	"pierwise/pier"
 )
 
 // TestSolidWallTimoshenko compares a solid cantilever wall with the
@@ -280,5 +281,42 @@ func TestErrors(t *testing.T) {
 		if res, err := Solve(c.w, nil, c.opt); err == nil {
 			t.Errorf("%s: no error, result %+v", c.name, res)
 		}
+	}
+}
+
+// TestWithClassic runs the FE check on the classic method's own result.
+// DESIGN §5: hand methods are known to overestimate the rigidity of walls
+// with large openings, often by tens of percent; for a solid wall both are
+// the same plane-stress problem (within the 2.5 % of the Timoshenko check).
+func TestWithClassic(t *testing.T) {
+	for _, c := range exampleWalls() {
+		classic, err := pier.Solve(c.wall)
+		if err != nil {
+			t.Fatalf("%s: %v", c.name, err)
+		}
+		res, err := Solve(c.wall, classic, Options{})
+		if err != nil {
+			t.Fatal(err)
+		}
+		leaves := classic.Leaves()
+		if len(res.Piers) != len(leaves) {
+			t.Fatalf("%s: %d FE shares for %d leaf piers", c.name, len(res.Piers), len(leaves))
+		}
+		for k, p := range res.Piers {
+			if p.Name != leaves[k].Name || !(p.Share > 0 && p.Share < 1) {
+				t.Errorf("%s: share %d = %+v for leaf %s", c.name, k, p, leaves[k].Name)
+			}
+		}
+		if want := (classic.Rigidity - res.Rigidity) / res.Rigidity; math.Abs(res.Difference-want) > 1e-12 {
+			t.Errorf("%s: Difference %g, want %g", c.name, res.Difference, want)
+		}
+		if len(c.wall.Openings()) == 0 {
+			if math.Abs(res.Difference) > 0.025 {
+				t.Errorf("%s: solid wall, classic and FE differ by %.1f %%", c.name, 100*res.Difference)
+			}
+		} else if res.Difference < 0.10 {
+			t.Errorf("%s: the classic method is only %.1f %% stiffer than the FE model; expected tens of percent", c.name, 100*res.Difference)
+		}
+		t.Logf("%s: classic %.4f, FE %.4f, difference %+.1f %%", c.name, classic.Deflection, res.Deflection, 100*res.Difference)
 	}
 }
