@@ -581,47 +581,13 @@ func Save(path string, w *Wall) error {
 	return writeAtomic(path, data)
 }
 
-func writeAtomic(path string, data []byte) (err error) {
-	if target, e := filepath.EvalSymlinks(path); e == nil {
+// writeAtomic resolves a symbolic link so that the link keeps pointing at
+// the file it names, then writes through WriteFileAtomic.
+func writeAtomic(path string, data []byte) error {
+	if target, err := filepath.EvalSymlinks(path); err == nil {
 		path = target
 	}
-	mode := os.FileMode(0o644)
-	if fi, e := os.Stat(path); e == nil {
-		mode = fi.Mode().Perm()
-	}
-	dir := filepath.Dir(path)
-	f, err := os.CreateTemp(dir, "."+filepath.Base(path)+".*.tmp")
-	if err != nil {
-		return err
-	}
-	tmp := f.Name()
-	defer func() {
-		if err != nil {
-			f.Close()
-			os.Remove(tmp)
-		}
-	}()
-	if _, err = f.Write(data); err != nil {
-		return err
-	}
-	if err = f.Chmod(mode); err != nil {
-		return err
-	}
-	if err = f.Sync(); err != nil {
-		return err
-	}
-	if err = f.Close(); err != nil {
-		return err
-	}
-	if err = os.Rename(tmp, path); err != nil {
-		return err
-	}
-	// Make the rename itself durable; not every system can sync a directory.
-	if d, e := os.Open(dir); e == nil {
-		d.Sync()
-		d.Close()
-	}
-	return nil
+	return WriteFileAtomic(path, data)
 }
 
 // quote writes a TOML basic string.
