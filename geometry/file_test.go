@@ -548,3 +548,57 @@ k = 3
 		t.Errorf("find does not fall back to the enclosing table")
 	}
 }
+
+// The example file printed in DESIGN.md §6, verbatim, reads as it says.
+func TestDesignExampleFile(t *testing.T) {
+	text := `title = "Rear wall, grid 4"        # free text
+units = "us"                       # "us" (ft, in, kip, psi) or "si" (m, mm, kN, MPa); default "us"
+length = "36ft"                    # a length: number + unit (in, ft, mm, cm, m), or feet-inches 12'-6"
+height = "14ft"                    # a bare number is ft ("us") or m ("si")
+thickness = "7.625in"
+support = "cantilever"             # or "fixed"
+
+[material]
+kind = "concrete-masonry"          # "concrete-masonry", "clay-masonry", "concrete", "custom"
+strength = "2000psi"               # f'm for masonry, f'c for concrete
+# modulus = "1800ksi"              # E, required for "custom"; overrides the preset otherwise
+# shear_modulus = "720ksi"         # E_v; default 0.4 E
+
+[load]
+shear = "40kip"                    # in-plane shear at the top of the wall (optional)
+
+[[opening]]
+name = "D1"
+x = "4ft"                          # wall's left end to the opening's left edge
+sill = "0"                         # wall's base to the opening's bottom edge (0 for a door)
+width = "10ft"
+height = "10ft"
+`
+	w, err := Parse("design.toml", []byte(text))
+	if err != nil {
+		t.Fatal(err)
+	}
+	ft := float64(Foot)
+	o := w.Openings()[0]
+	checks := []struct {
+		name      string
+		got, want float64
+	}{
+		{"length", float64(w.Length), 36 * ft},
+		{"height", float64(w.Height), 14 * ft},
+		{"thickness", float64(w.Thickness), 7.625 * float64(Inch)},
+		{"strength", float64(w.Material.Strength), 2000 * float64(PSI)},
+		{"shear", float64(w.Load.Shear), 40 * float64(Kip)},
+		{"x", float64(o.X), 4 * ft},
+		{"width", float64(o.Width), 10 * ft},
+		{"height", float64(o.Height), 10 * ft},
+	}
+	for _, c := range checks {
+		if !near(c.got, c.want, 1e-12) {
+			t.Errorf("%s = %g, want %g", c.name, c.got, c.want)
+		}
+	}
+	if w.Title != "Rear wall, grid 4" || o.Name != "D1" || o.Sill != 0 || !o.IsDoor() || w.Material.Modulus != 0 {
+		t.Errorf("unexpected wall %+v", w)
+	}
+}
