@@ -11,6 +11,9 @@ import (
 	"pierwise/geometry"
 )
 
+// errRange reports sizes so disproportionate that a deflection overflows.
+var errRange = errors.New("pier: the wall's proportions are beyond the range the method can compute")
+
 // tolerance is the relative tolerance (of the wall's larger dimension) for
 // "touches", "reaches the top" and "spans the band": coordinates that come
 // from sums of typed lengths differ by rounding only.
@@ -77,14 +80,13 @@ func Solve(w *geometry.Wall) (*Result, error) {
 	if err != nil {
 		return nil, err
 	}
-	if cut || !(d.Total() > 0) || math.IsInf(d.Total(), 0) {
-		// The checks above should have caught every wall without a load
-		// path; this is the last guard against an infinite deflection.
-		name := ""
-		if len(ops) > 0 {
-			name = ops[0].name
-		}
-		return nil, &CutError{Region: "wall", Opening: name}
+	if cut && len(ops) > 0 {
+		// cutWall should have caught every wall without a load path; this
+		// is the last guard against an infinite deflection.
+		return nil, &CutError{Region: "wall", Opening: ops[0].name}
+	}
+	if !(d.Total() > 0) || math.IsInf(d.Total(), 0) {
+		return nil, errRange
 	}
 	r := s.res
 	r.Deflection = d.Total()
@@ -185,6 +187,9 @@ func (s *solver) region(rect geometry.Rect, sup geometry.Support, ops []opening,
 			pd, pcut, err := s.region(sp.rect, bandSup, sp.ops, pname, k)
 			if err != nil {
 				return Parts{}, false, err
+			}
+			if !pcut && (!(pd.Total() > 0) || math.IsInf(pd.Total(), 0)) {
+				return Parts{}, false, errRange
 			}
 			pr := &s.res.Piers[k] // re-taken: the recursion may have grown the slice
 			if pcut {
@@ -597,7 +602,7 @@ func (r *Result) checkFinite() error {
 		chk(st.Deflection)
 	}
 	if bad {
-		return errors.New("pier: the wall's proportions are beyond the range the method can compute")
+		return errRange
 	}
 	return nil
 }

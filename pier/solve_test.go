@@ -472,3 +472,18 @@ func TestDriftPresetByName(t *testing.T) {
 		t.Error("unknown preset: want an error")
 	}
 }
+
+func TestExtremeProportionsAreErrorsNotInf(t *testing.T) {
+	// (h/L)³ overflows beyond h/L ≈ 5.6e102: an error, never +Inf.
+	w := &geometry.Wall{Length: 1e-200, Height: 1e200, Layouts: []geometry.Layout{{Name: "main"}}}
+	if r, err := Solve(w); err == nil {
+		t.Errorf("got %+v, want an error", r)
+	}
+	// The same for a pier beside a window.
+	w = &geometry.Wall{Length: 1, Height: 1e120, Layouts: []geometry.Layout{{Name: "main", Openings: []geometry.Opening{
+		{Name: "W1", X: 1e-130, Sill: 1, Width: 0.5, Height: 1},
+	}}}}
+	if r, err := Solve(w); err == nil {
+		t.Errorf("got %+v, want an error", r)
+	}
+}
