@@ -122,7 +122,11 @@ func inputs(w *writer, wall *geometry.Wall, res *pier.Result) {
 	} else {
 		w.kv("Load", "none given (relative values only)")
 	}
-	w.kv("Drift", driftLine(wall.Drift))
+	drift, source, _ := strings.Cut(driftLine(wall.Drift), "\n")
+	w.kv("Drift", drift)
+	if source != "" {
+		w.kv("", source)
+	}
 	ops := wall.Openings()
 	if len(ops) == 0 {
 		w.kv("Openings", "none (solid wall)")
@@ -332,15 +336,13 @@ func driftLine(d geometry.Drift) string {
 		return fmt.Sprintf("Cd = %.2g, Ie = %.2g, no limit set", orOne(d.Cd), orOne(d.Ie))
 	}
 	s := fmt.Sprintf("Cd = %.2g, Ie = %.2g, limit %.3f h", orOne(d.Cd), orOne(d.Ie), d.Limit)
-	if d.Preset != "" {
-		for _, p := range geometry.DriftPresets {
-			if p.Name == d.Preset {
-				return s + fmt.Sprintf(" (%s: %s)", p.Name, p.Source)
-			}
-		}
-		s += " (" + d.Preset + ")"
+	if d.Preset == "" {
+		return s
 	}
-	return s
+	if p, ok := geometry.FindDriftPreset(d.Preset); ok {
+		return s + fmt.Sprintf(" (%s)\n%s", p.Name, p.Source)
+	}
+	return s + " (" + d.Preset + ")"
 }
 
 func orOne(x float64) float64 {
