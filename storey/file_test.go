@@ -118,3 +118,28 @@ func TestParseErrors(t *testing.T) {
 		t.Errorf("good storey: %v", err)
 	}
 }
+
+// SI storeys: a bare length is metres and a bare force kN (DESIGN §6, the
+// same rule as wall files); units may be mixed with explicit suffixes.
+func TestParseSI(t *testing.T) {
+	text := `units = "si"
+[storey]
+shear = 500
+mass_center = [12, "7500mm"]
+size = ["24m", 15]
+[[wall]]
+file = "a.toml"
+direction = "y"
+position = 24
+`
+	s, err := Parse("si.toml", []byte(text))
+	if err != nil {
+		t.Fatal(err)
+	}
+	if s.Units != geometry.SI || !near(float64(s.Shear), 500e3, 1e-12) {
+		t.Errorf("units %v shear %g N, want SI and 500 kN", s.Units, float64(s.Shear))
+	}
+	if !near(float64(s.MassCenter[1]), 7.5, 1e-12) || !near(float64(s.Size[1]), 15, 1e-12) || !near(float64(s.Walls[0].Position), 24, 1e-12) {
+		t.Errorf("lengths %v %v %v", s.MassCenter, s.Size, s.Walls[0].Position)
+	}
+}
