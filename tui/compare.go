@@ -20,9 +20,10 @@ func init() {
 	registerScreen(screenEntry{
 		name: "compare",
 		key:  key.NewBinding(key.WithKeys("C"), key.WithHelp("C", "compare two layouts")),
+		// Pushed first, FE check after, in sequence (see the sweep).
 		open: func(c *common) (screen, tea.Cmd) {
 			s := newCompareScreen(c)
-			return s, s.recompute()
+			return nil, tea.Sequence(pushScreen(s), s.recompute())
 		},
 	})
 }
@@ -106,11 +107,12 @@ type snapshotDoneMsg struct {
 func newCompareScreen(c *common) *compareScreen {
 	s := &compareScreen{c: c, keys: newCompareKeys(c), help: help.New()}
 	s.help.ShortSeparator = "  "
+	// The first layout against the active one (or the next when the first
+	// is active).
 	w := c.doc.wall
-	s.before = w.Active
 	s.after = w.Active
-	if len(w.Layouts) > 1 {
-		s.after = (w.Active + 1) % len(w.Layouts)
+	if w.Active == 0 && len(w.Layouts) > 1 {
+		s.after = 1
 	}
 	s.right = true
 	s.feOn = true

@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"os"
 	"path/filepath"
+	"reflect"
 	"strings"
 	"testing"
 	"time"
@@ -195,23 +196,42 @@ func TestCompareScreenOneLayout(t *testing.T) {
 	}
 }
 
+// cmpDrain runs cmd and every command that follows from it, in order, as
+// bubbletea would (batches and sequences alike), feeding the messages to m.
+func cmpDrain(m *root, cmd tea.Cmd) {
+	if cmd == nil {
+		return
+	}
+	msg := cmd()
+	if msg == nil {
+		return
+	}
+	// tea.BatchMsg and bubbletea's sequence message are both []tea.Cmd.
+	if v := reflect.ValueOf(msg); v.Kind() == reflect.Slice && v.Type().ConvertibleTo(reflect.TypeOf(tea.BatchMsg{})) {
+		for _, c := range v.Convert(reflect.TypeOf(tea.BatchMsg{})).Interface().(tea.BatchMsg) {
+			cmpDrain(m, c)
+		}
+		return
+	}
+	_, next := m.Update(msg)
+	cmpDrain(m, next)
+}
+
 // The elevation screen opens the comparison with C (registered key).
 func TestCompareOpensFromElevation(t *testing.T) {
-	m := newModel(demo.Wall(), Options{Path: "annex.toml", OnDisk: true})
+	w := demo.Wall()
+	w.Active = 1
+	m := newModel(w, Options{Path: "annex.toml", OnDisk: true})
 	m.Update(tea.WindowSizeMsg{Width: 80, Height: 24})
 	_, cmd := m.Update(cmpKey("C"))
-	for i := 0; cmd != nil && i < 5; i++ {
-		msg := cmd()
-		if b, ok := msg.(tea.BatchMsg); ok && len(b) > 0 {
-			msg = b[0]()
-		}
-		_, cmd = m.Update(msg)
-		if _, ok := m.top().(*compareScreen); ok {
-			break
-		}
-	}
-	if _, ok := m.top().(*compareScreen); !ok {
+	cmpDrain(m, cmd)
+	s, ok := m.top().(*compareScreen)
+	if !ok {
 		t.Fatalf("C did not open the comparison; top is %T", m.top())
+	}
+	// The first layout against the active one, with the FE answer in.
+	if s.before != 0 || s.after != 1 || s.feRunning || s.cmp.After.FE == nil {
+		t.Errorf("before %d after %d, FE running %v", s.before, s.after, s.feRunning)
 	}
 	if v := ansi.Strip(m.View()); !strings.Contains(v, "compare layouts") {
 		t.Errorf("view:\n%s", v)

@@ -19,9 +19,11 @@ func init() {
 	registerScreen(screenEntry{
 		name: "sweep",
 		key:  key.NewBinding(key.WithKeys("G"), key.WithHelp("G", "sweep an opening along the wall")),
+		// The screen is pushed first and swept after, in sequence, so the
+		// answer cannot reach the elevation before the sweep is on top.
 		open: func(c *common) (screen, tea.Cmd) {
 			s := newSweepScreen(c)
-			return s, s.start()
+			return nil, tea.Sequence(pushScreen(s), s.start())
 		},
 	})
 }

@@ -137,18 +137,7 @@ func TestSweepOpensFromElevation(t *testing.T) {
 	m := newModel(demo.Wall(), Options{Path: "annex.toml", OnDisk: true})
 	m.Update(tea.WindowSizeMsg{Width: 80, Height: 24})
 	_, cmd := m.Update(cmpKey("G"))
-	for i := 0; cmd != nil && i < 6; i++ {
-		msg := cmd()
-		if b, ok := msg.(tea.BatchMsg); ok {
-			for _, c := range b {
-				if c != nil {
-					_, cmd = m.Update(c())
-				}
-			}
-			continue
-		}
-		_, cmd = m.Update(msg)
-	}
+	cmpDrain(m, cmd)
 	s, ok := m.top().(*sweepScreen)
 	if !ok {
 		t.Fatalf("G did not open the sweep; top is %T", m.top())
