@@ -3,12 +3,8 @@ package tui
 // The functions of other packages the editor leans on, in one place.
 
 import (
-	"errors"
-	"time"
-
 	"pierwise/geometry"
 	"pierwise/pier"
-	"pierwise/pier/fe"
 )
 
 // solveWall solves the active layout with the classic method.
@@ -31,9 +27,3 @@ func loadWall(path string) (*geometry.Wall, error) { return geometry.LoadFile(pa
 
 // saveWall writes a wall file atomically.
 func saveWall(path string, w *geometry.Wall) error { return geometry.Save(path, w) }
-
-// writeReport writes the text report of the current layout to out
-// (report.Wall, once it is in the tree).
-func writeReport(out, wallPath string, w *geometry.Wall, res *pier.Result, solveErr error, feRes *fe.Result, now time.Time) error {
-	return errors.New("text reports are not in this build yet")
-}

@@ -3,8 +3,8 @@ package tui
 import (
 	"errors"
 	"fmt"
+	"io"
 	"math"
-	"path/filepath"
 	"strconv"
 	"strings"
 	"time"
@@ -16,6 +16,7 @@ import (
 	"pierwise/geometry"
 	"pierwise/pier"
 	"pierwise/pier/fe"
+	"pierwise/report"
 )
 
 // elevation is the main screen: the wall drawn to scale with its piers'
@@ -193,6 +194,13 @@ func (e *elevation) update(msg tea.Msg) (screen, tea.Cmd) {
 			return e, e.scheduleFE()
 		}
 		return e, nil
+	case snapshotDoneMsg:
+		if msg.err != nil {
+			e.refuse("no report: %v", msg.err)
+		} else {
+			e.say("report written to %s", msg.path)
+		}
+		return e, nil
 	case quitRequestMsg:
 		e.mode = modeConfirmQuit
 		return e, nil
@@ -349,7 +357,7 @@ func (e *elevation) key(msg tea.KeyMsg) tea.Cmd {
 		}
 		e.say("finite-element check off")
 	case key.Matches(msg, k.Snapshot):
-		e.snapshot()
+		return e.snapshot()
 	default:
 		for _, s := range screenEntries {
 			if key.Matches(msg, s.key) {
@@ -580,22 +588,18 @@ func (e *elevation) deleteLayout() {
 }
 
 // snapshot writes the text report of the current layout next to the wall
-// file.
-func (e *elevation) snapshot() {
-	path := e.c.doc.path
-	if path == "" {
-		path = "demo.toml"
-	}
-	out := strings.TrimSuffix(path, filepath.Ext(path)) + ".report.txt"
-	var feRes *fe.Result
+// file (a new, timestamped file each time), in the background.
+func (e *elevation) snapshot() tea.Cmd {
+	d := e.c.doc
+	in := report.Input{Path: d.path, Wall: d.wall, Result: e.res, Err: e.solveErr, Now: e.c.now(), Version: ProgramVersion}
 	if e.fe.on && !e.fe.running {
-		feRes = e.fe.res
+		in.FE, in.FEErr = e.fe.res, e.fe.err
 	}
-	if err := writeReport(out, path, e.wall(), e.res, e.solveErr, feRes, e.c.now()); err != nil {
-		e.refuse("no report: %v", err)
-		return
+	e.say("writing the report...")
+	return func() tea.Msg {
+		out, err := writeSnapshot(in.Path, "report", in.Now, func(f io.Writer) error { return report.Wall(f, in) })
+		return snapshotDoneMsg{out, err}
 	}
-	e.say("report written to %s", out)
 }
 
 func (e *elevation) mouse(msg tea.MouseMsg) tea.Cmd {
