@@ -101,21 +101,24 @@ func runSolve(e *env, args []string) error {
 		files = []string{""}
 	}
 	var all []*solved
-	var failed []string
+	var failed []error // one per wall that has no answer
 	for _, f := range files {
 		s, err := solveArg(f, &ff)
 		if err != nil {
 			var ue *usageError
-			if errors.As(err, &ue) {
+			if errors.As(err, &ue) || len(files) == 1 {
 				return err
 			}
 			fmt.Fprintln(e.stderr, "pierwise:", err)
-			failed = append(failed, f)
+			failed = append(failed, err)
 			continue
 		}
 		if s.err != nil {
-			fmt.Fprintf(e.stderr, "pierwise: %s: %v\n", displayName(f), s.err)
-			failed = append(failed, f)
+			err := fmt.Errorf("%s: %w", displayName(f), s.err)
+			if len(files) > 1 {
+				fmt.Fprintln(e.stderr, "pierwise:", err)
+			}
+			failed = append(failed, err)
 		}
 		all = append(all, s)
 	}
@@ -131,7 +134,10 @@ func runSolve(e *env, args []string) error {
 			writeSolveTable(e.stdout, s)
 		}
 	}
-	if len(failed) > 0 {
+	switch {
+	case len(failed) == 1 && len(files) == 1:
+		return failed[0]
+	case len(failed) > 0:
 		return fmt.Errorf("%d of %d walls could not be solved", len(failed), len(files))
 	}
 	return nil
@@ -156,7 +162,7 @@ func writeSolveTable(out io.Writer, s *solved) {
 	if w.Support == geometry.Fixed {
 		support = "fixed-fixed"
 	}
-	fmt.Fprintf(out, "  wall %s long × %s high × %s thick, %s, %d openings\n", L(w.Length), L(w.Height), L(w.Thickness), support, len(w.Openings()))
+	fmt.Fprintf(out, "  wall %s long × %s high × %s thick, %s, %s\n", L(w.Length), L(w.Height), L(w.Thickness), support, plural(len(w.Openings()), "opening"))
 	if s.res == nil {
 		fmt.Fprintf(out, "  classic method: no answer: %v\n", s.err)
 		writeFETable(out, s)
@@ -220,12 +226,11 @@ func writeFETable(out io.Writer, s *solved) {
 		return
 	}
 	f := s.fe
-	fmt.Fprintf(out, "  finite-element check (%s, mesh %s, %d elements): relative deflection %.4f, relative rigidity %.4f",
+	fmt.Fprintf(out, "  finite-element check (%s, mesh %s, %d elements): relative deflection %.4f, relative rigidity %.4f\n",
 		f.Element, geometry.FormatLength(f.Mesh, s.wall.Units), f.Elements, f.Deflection, f.Rigidity)
 	if s.res != nil {
-		fmt.Fprintf(out, "; classic is %+.1f %% of it", 100*f.Difference)
+		fmt.Fprintf(out, "  the classic rigidity is %+.1f %% of the finite-element rigidity\n", 100*f.Difference)
 	}
-	fmt.Fprintln(out)
 	if len(f.Piers) > 0 {
 		parts := make([]string, len(f.Piers))
 		for i, p := range f.Piers {
@@ -418,4 +423,12 @@ func wrap(prefix, s string, width int) string {
 	}
 	b.WriteString(line)
 	return b.String()
+}
+
+// plural returns "1 opening", "2 openings".
+func plural(n int, noun string) string {
+	if n == 1 {
+		return "1 " + noun
+	}
+	return fmt.Sprintf("%d %ss", n, noun)
 }
