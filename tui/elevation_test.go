@@ -105,14 +105,28 @@ func checkSize(t *testing.T, view string, w, h int) {
 	}
 }
 
-// staggered is an invented wall whose openings overlap in height and
-// together cover the whole length of a band: beyond the classic method.
-func staggered() *geometry.Wall {
+// cut is an invented wall whose two windows meet edge to edge at
+// different heights: no solid path from base to top.
+func cut() *geometry.Wall {
 	w := NewWall(geometry.US)
 	ft := geometry.Foot
 	w.Layouts[0].Openings = []geometry.Opening{
 		{Name: "W1", X: 0, Sill: 3 * ft, Width: 12 * ft, Height: 4 * ft},
 		{Name: "W2", X: 12 * ft, Sill: 5 * ft, Width: 12 * ft, Height: 4 * ft},
+	}
+	return w
+}
+
+// staggered is an invented wall whose windows step up across the whole
+// length: a load path exists (between W1's head and W3's sill) but the
+// band they form has no pier, which is beyond the classic method.
+func staggered() *geometry.Wall {
+	w := NewWall(geometry.US)
+	ft := geometry.Foot
+	w.Layouts[0].Openings = []geometry.Opening{
+		{Name: "W1", X: 0, Sill: 2 * ft, Width: 8 * ft, Height: 2 * ft},
+		{Name: "W3", X: 8 * ft, Sill: 5 * ft, Width: 8 * ft, Height: 3 * ft},
+		{Name: "W2", X: 16 * ft, Sill: 3 * ft, Width: 8 * ft, Height: 3 * ft},
 	}
 	return w
 }
@@ -135,6 +149,7 @@ func TestGolden(t *testing.T) {
 			{"confirm_quit", demo.Wall, []tea.Msg{runes("l"), runes("q")}},
 			{"new_wall", func() *geometry.Wall { return NewWall(geometry.US) }, nil},
 			{"si", func() *geometry.Wall { return NewWall(geometry.SI) }, []tea.Msg{runes("w"), runes("d")}},
+			{"cut", cut, nil},
 			{"staggered", staggered, nil},
 		} {
 			name := fmt.Sprintf("%s_%dx%d.golden", tc.name, W, H)

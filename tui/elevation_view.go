@@ -87,7 +87,7 @@ func (e *elevation) view() string {
 func (e *elevation) titleView() string {
 	w := e.wall()
 	d := e.c.doc
-	file := "demo, not saved"
+	file := "no file yet"
 	if d.path != "" {
 		file = filepath.Base(d.path)
 	}
