@@ -308,7 +308,7 @@ func (s *storeyScreen) view() string {
 	case s.showHelp:
 		body = s.help.FullHelpView(s.keys.FullHelp())
 	case s.err != nil:
-		body = st.errText.Render("The storey cannot be analysed:") + "\n" + s.err.Error() +
+		body = st.errText.Render("The storey cannot be analysed:") + "\n" + lipgloss.NewStyle().Width(W).Render(s.err.Error()) +
 			"\n\n" + st.note.Render("Open the wall again (enter) and fix it, or undo the change there (u).") + "\n\n" + s.wallList(W)
 	default:
 		planW := min(W*2/5, W-52)

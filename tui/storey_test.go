@@ -10,6 +10,7 @@ import (
 	tea "github.com/charmbracelet/bubbletea"
 	"github.com/charmbracelet/x/ansi"
 
+	"pierwise/geometry"
 	"pierwise/storey"
 )
 
@@ -179,5 +180,31 @@ func TestStoreyScreenEditWall(t *testing.T) {
 	}
 	if !relNear(a.Walls[4].Unit.Rigidity, after.Unit.Rigidity) {
 		t.Errorf("after s the file gives rigidity %.4f, want the edited %.4f", a.Walls[4].Unit.Rigidity, after.Unit.Rigidity)
+	}
+}
+
+// A wall edited so that it no longer fits the plan: the screen says why,
+// lists the walls, and recovers once the edit is undone.
+func TestStoreyScreenBadEdit(t *testing.T) {
+	path := copyWorkshop(t)
+	d := newStoreyDriver(t, path, 80, 24)
+	s := d.screen()
+	if err := s.docs[4].change(func(w *geometry.Wall) error { w.Length = 30 * geometry.Foot; return nil }); err != nil {
+		t.Fatal(err)
+	}
+	d.press(resumeMsg{})
+	v := d.view()
+	checkSize(t, v, 80, 24)
+	if s.err == nil || !strings.Contains(v, "cannot be analysed") || !strings.Contains(v, "off the plan") {
+		t.Fatalf("a partition 30 ft long from y = 30 ft on a 50 ft plan: want an error on screen:\n%s", v)
+	}
+	d.press(runes("p")) // no report from a storey that cannot be analysed
+	if !strings.Contains(d.view(), "no report") {
+		t.Errorf("p with an error: %s", d.view())
+	}
+	s.docs[4].undoChange()
+	d.press(resumeMsg{})
+	if s.err != nil || !strings.Contains(d.view(), "centre of rigidity") {
+		t.Errorf("after undo: %v\n%s", s.err, d.view())
 	}
 }
