@@ -70,9 +70,9 @@ func SweepTable(out io.Writer, w *geometry.Wall, name string, axis study.Axis, s
 		}
 		var st string
 		if p.MaxStress > 0 {
-			st = fmt.Sprintf("%.3g %s", float64(p.MaxStress)/float64(w.Units.BaseStress()), p.StressPier)
+			st = cmpSig(float64(p.MaxStress)/float64(w.Units.BaseStress()), 3) + " " + p.StressPier
 		} else {
-			st = fmt.Sprintf("%.3g %s", p.StressIndex*float64(w.Units.BaseLength()), p.StressPier)
+			st = cmpSig(p.StressIndex*float64(w.Units.BaseLength()), 3) + " " + p.StressPier
 		}
 		var marks []string
 		if p.Current {

@@ -460,12 +460,21 @@ func sweepPlot(st *styles, pts []study.Point, axis study.Axis, sys geometry.Syst
 		y := int(math.Round((hi - p.Rigidity) / (hi - lo) * float64(dotsH-1)))
 		return x, y
 	}
+	// Positions more than a step and a half apart have another opening
+	// between them: the line breaks there.
+	step := math.Inf(1)
+	for i := 1; i < len(pts); i++ {
+		step = math.Min(step, float64(pts[i].Pos(axis)-pts[i-1].Pos(axis)))
+	}
 	prevOK := false
 	var px, py int
-	for _, p := range pts {
+	for i, p := range pts {
 		if p.Err != nil {
 			prevOK = false
 			continue
+		}
+		if i > 0 && float64(p.Pos(axis)-pts[i-1].Pos(axis)) > 1.5*step {
+			prevOK = false
 		}
 		x, y := dot(p)
 		if prevOK {
