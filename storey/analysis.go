@@ -201,7 +201,11 @@ func storeyError(s *Storey, err error) error {
 	var de *DirectionError
 	switch {
 	case errors.As(err, &de):
-		return newError(s.Path, 0, "wall", "no wall has direction = %q: nothing resists shear along %s", de.Direction.String(), de.Direction)
+		line := 0
+		if len(s.Walls) > 0 {
+			line = s.Walls[0].Line // the walls start here
+		}
+		return newError(s.Path, line, "wall", "no wall has direction = %q: nothing resists shear along %s", de.Direction.String(), de.Direction)
 	case errors.Is(err, ErrTorsion):
 		var lines []string
 		for _, d := range []Direction{X, Y} {
