@@ -10,12 +10,14 @@ import (
 	"pierwise/geometry"
 	"pierwise/report"
 	"pierwise/study"
+	"pierwise/tui"
 )
 
 func init() {
+	tui.ProgramVersion = version // for the editor's comparison and sweep snapshots
 	register(command{
 		name:  "compare",
-		args:  "FILE[:VARIANT] FILE[:VARIANT]... [-o OUT]",
+		args:  "FILE[:VARIANT] FILE[:VARIANT]... [-o OUT] [--fe] [--mesh SIZE] [--element q4|qm6]",
 		short: "compare opening layouts side by side (the first against each other; one FILE alone: all its variants)",
 		run:   runCompare,
 	})
@@ -24,6 +26,10 @@ func init() {
 func runCompare(e *env, args []string) error {
 	fs := newFlags(e, "compare")
 	outPath := fs.String("o", "", "write the comparison report to `OUT` instead of standard output")
+	var ff feFlags
+	fs.BoolVar(&ff.on, "fe", false, "also run the finite-element check on every layout")
+	fs.StringVar(&ff.mesh, "mesh", "", "maximum element size of the finite-element mesh, e.g. 6in or 150mm")
+	fs.StringVar(&ff.element, "element", "", "finite-element type: qm6 (default) or q4")
 	pos, err := parseInterleaved(fs, args)
 	if err != nil {
 		return err
@@ -34,6 +40,17 @@ func runCompare(e *env, args []string) error {
 	walls, err := compareWalls(pos)
 	if err != nil {
 		return err
+	}
+	if ff.mesh != "" || ff.element != "" {
+		ff.on = true
+	}
+	var opt study.Options
+	if ff.on {
+		opt.FE = true
+		// The mesh of the first wall's file, unless given here.
+		if opt.FEOptions, err = ff.options(walls[0].wall); err != nil {
+			return err
+		}
 	}
 	if len(walls) < 2 {
 		return usagef("compare: %s has a single layout; give two or more walls as FILE[:VARIANT]", pos[0])
@@ -50,7 +67,7 @@ func runCompare(e *env, args []string) error {
 	}
 	info := report.CompareInfo{Now: time.Now(), Version: version}
 	for i := 1; i < len(walls); i++ {
-		c, err := study.Compare(walls[0].wall, walls[i].wall)
+		c, err := study.CompareWith(walls[0].wall, walls[i].wall, opt)
 		if err != nil {
 			return err
 		}

@@ -90,3 +90,19 @@ func TestCompareCommandErrors(t *testing.T) {
 		}
 	}
 }
+
+func TestCompareCommandFE(t *testing.T) {
+	path := studyFile(t)
+	code, out, errs := runCmd("compare", path, "--fe", "--mesh", "1ft", "--element", "q4")
+	if code != exitOK {
+		t.Fatalf("exit %d: %s", code, errs)
+	}
+	for _, want := range []string{"FE relative rigidity", "q4 1'-0\"", "finite-element shares"} {
+		if !strings.Contains(out, want) {
+			t.Errorf("%q not in the output", want)
+		}
+	}
+	if code, _, errs := runCmd("compare", path, "--mesh", "-1in"); code != exitUsage || !strings.Contains(errs, "mesh") {
+		t.Errorf("negative mesh: exit %d %q", code, errs)
+	}
+}
