@@ -51,6 +51,19 @@ func (d *document) change(f func(w *geometry.Wall) error) error {
 	return nil
 }
 
+// amend is change without a new undo step: the result replaces the
+// current wall, so a drag of the mouse is undone in one go.
+func (d *document) amend(f func(w *geometry.Wall) error) error {
+	w := cloneWall(d.wall)
+	if err := f(w); err != nil {
+		return err
+	}
+	d.redo = d.redo[:0]
+	d.wall, d.version = w, d.next
+	d.next++
+	return nil
+}
+
 // undoChange and redoChange step through the history; they report whether
 // there was anything to step to.
 func (d *document) undoChange() bool {

@@ -44,6 +44,7 @@ type elevation struct {
 	fe feState
 
 	confirm confirmKeys
+	drag    drag
 }
 
 type elevationMode int
@@ -602,16 +603,63 @@ func (e *elevation) snapshot() tea.Cmd {
 	}
 }
 
+// drag is a mouse drag of an opening: where it started, in wall
+// coordinates, and the opening as it was.
+type drag struct {
+	on     bool
+	moved  bool
+	i      int
+	x0, y0 float64
+	was    geometry.Opening
+}
+
+// mouse selects the opening under a click and drags it by whole steps.
 func (e *elevation) mouse(msg tea.MouseMsg) tea.Cmd {
-	if msg.Action != tea.MouseActionPress || msg.Button != tea.MouseButtonLeft {
-		return nil
-	}
 	l := e.layout()
 	g := e.grid(l)
-	cell := g.At(msg.X-l.elevX, msg.Y-l.elevY)
-	if cell.Opening >= 0 {
-		e.sel = cell.Opening
+	col, row := msg.X-l.elevX, msg.Y-l.elevY
+	switch {
+	case msg.Action == tea.MouseActionPress && msg.Button == tea.MouseButtonLeft:
+		cell := g.At(col, row)
+		if cell.Opening < 0 {
+			return nil
+		}
+		e.sel, e.msg = cell.Opening, ""
+		e.drag = drag{on: true, i: cell.Opening, x0: g.X(col), y0: g.Y(row), was: e.wall().Openings()[cell.Opening]}
+	case msg.Action == tea.MouseActionMotion && e.drag.on:
+		d := &e.drag
+		if d.i >= len(e.wall().Openings()) {
+			d.on = false
+			return nil
+		}
+		step := float64(e.stepLength())
+		snap := func(v float64) geometry.Length { return geometry.Length(math.Round(v/step) * step) }
+		o := d.was
+		o.X += snap(g.X(col) - d.x0)
+		o.Sill += snap(g.Y(row) - d.y0)
+		if o.X < 0 || o.Sill < 0 || o == e.wall().Openings()[d.i] {
+			return nil
+		}
+		apply := e.c.doc.change
+		if d.moved {
+			apply = e.c.doc.amend
+		}
+		err := apply(func(w *geometry.Wall) error {
+			if err := checkOpening(w, d.i, o); err != nil {
+				return err
+			}
+			w.Layouts[w.Active].Openings[d.i] = o
+			return nil
+		})
+		if err != nil {
+			e.refuse("can't move %s: %s", o.Name, shortReason(err))
+			return nil
+		}
+		d.moved = true
 		e.msg = ""
+		return e.afterEdit()
+	case msg.Action == tea.MouseActionRelease:
+		e.drag = drag{}
 	}
 	return nil
 }

@@ -17,6 +17,7 @@ import (
 	"pierwise/pier"
 	"pierwise/pier/fe"
 	"pierwise/report"
+	"pierwise/sketch"
 )
 
 // Key presses as bubbletea delivers them.
@@ -589,5 +590,48 @@ func TestSaveAndLayouts(t *testing.T) {
 	}
 	if x := got.Openings()[0].X; !near(float64(x), float64(5*geometry.Foot)) {
 		t.Errorf("D1 read back at %v", x)
+	}
+}
+
+// TestMouseDrag: a click selects the opening under it, a drag moves it by
+// whole steps, and one undo takes the whole drag back.
+func TestMouseDrag(t *testing.T) {
+	ed := newEditor(t, demo.Wall(), "", 160, 48)
+	e := ed.elev()
+	l := e.layout()
+	g := e.grid(l)
+	col, row := -1, -1
+	for r := 0; r < g.Rows && col < 0; r++ {
+		for c := 0; c < g.Cols; c++ {
+			if cell := g.At(c, r); cell.Opening == 1 && cell.Kind == sketch.OpeningSpace {
+				col, row = c, r
+				break
+			}
+		}
+	}
+	if col < 0 {
+		t.Fatal("W1 not drawn")
+	}
+	mouse := func(a tea.MouseAction, c int) tea.MouseMsg {
+		return tea.MouseMsg{X: l.elevX + c, Y: l.elevY + row, Action: a, Button: tea.MouseButtonLeft}
+	}
+	ed.press(mouse(tea.MouseActionPress, col))
+	if e.sel != 1 {
+		t.Fatalf("click on W1 selected %d", e.sel)
+	}
+	start := ed.wall().Openings()[1].X
+	// Drag by the columns that stand for 3 ft (step 1 ft), in small moves.
+	target := g.Col(float64(start)+float64(3*geometry.Foot)) - g.Col(float64(start))
+	for c := 1; c <= target; c++ {
+		ed.press(mouse(tea.MouseActionMotion, col+c))
+	}
+	ed.press(mouse(tea.MouseActionRelease, col+target))
+	got := ed.wall().Openings()[1].X
+	if !near(float64(got-start), float64(3*geometry.Foot)) {
+		t.Errorf("dragged W1 by %s, want 3'-0\"", geometry.FormatLength(got-start, geometry.US))
+	}
+	ed.press(runes("u"))
+	if x := ed.wall().Openings()[1].X; !near(float64(x), float64(start)) {
+		t.Errorf("one undo left W1 at %v, want %v", x, start)
 	}
 }
