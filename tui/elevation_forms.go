@@ -1,6 +1,7 @@
 package tui
 
 import (
+	"errors"
 	"fmt"
 	"path/filepath"
 	"strconv"
@@ -73,7 +74,7 @@ func (e *elevation) openOpeningForm() {
 			return nil
 		})
 		if err != nil {
-			r.err = err.Error()
+			placeErrors(err, map[string]int{"name": 0, "x": 1, "sill": 2, "width": 3, "height": 4}, &r)
 			return r
 		}
 		e.say("%s updated", n.Name)
@@ -228,7 +229,11 @@ func (e *elevation) openWallForm() {
 			return r
 		}
 		if err := validateWall(n); err != nil {
-			r.err = err.Error()
+			placeErrors(err, map[string]int{
+				"title": wfTitle, "units": wfUnits, "length": wfLength, "height": wfHeight, "thickness": wfThickness,
+				"support": wfSupport, "material.kind": wfMaterial, "material.strength": wfStrength,
+				"material.modulus": wfModulus, "load.shear": wfShear, "drift.limit": wfDrift, "drift.cd": wfCd,
+			}, &r)
 			return r
 		}
 		_ = e.c.doc.change(func(w *geometry.Wall) error { *w = *n; return nil })
@@ -293,4 +298,25 @@ func (e *elevation) openRenameForm() {
 		}
 		return r
 	}))
+}
+
+// placeErrors puts each validation error on the form field its key names;
+// the others are shown under the form.
+func placeErrors(err error, fields map[string]int, r *formResult) {
+	var list geometry.ErrorList
+	if !errors.As(err, &list) {
+		r.err = err.Error()
+		return
+	}
+	var rest []string
+	for _, e := range list {
+		if i, ok := fields[e.Key]; ok {
+			if r.fields[i] == "" {
+				r.fields[i] = e.Msg
+			}
+			continue
+		}
+		rest = append(rest, e.Error())
+	}
+	r.err = strings.Join(rest, "; ")
 }

@@ -635,3 +635,34 @@ func TestMouseDrag(t *testing.T) {
 		t.Errorf("one undo left W1 at %v, want %v", x, start)
 	}
 }
+
+// TestFormErrorsInPlace: the wall's own rules put their message beside the
+// field they are about.
+func TestFormErrorsInPlace(t *testing.T) {
+	ed := newEditor(t, demo.Wall(), "", 120, 30)
+	ed.press(runes("E"))
+	for range wfStrength {
+		ed.press(keyTab)
+	}
+	ed.typeText("-5psi")
+	ed.press(keyEnter)
+	f := ed.elev().form
+	if f == nil || f.fields[wfStrength].err == "" {
+		t.Fatalf("negative strength not refused at its field:\n%s", ed.view())
+	}
+	for i, fl := range f.fields {
+		if i != wfStrength && fl.err != "" {
+			t.Errorf("field %s got the error %q", fl.label, fl.err)
+		}
+	}
+	ed.press(keyEsc)
+	ed.press(runes("e"))
+	for range 3 {
+		ed.press(keyTab)
+	}
+	ed.typeText("60ft") // width past the wall's end
+	ed.press(keyEnter)
+	if f := ed.elev().form; f == nil || f.err == "" || !strings.Contains(ed.view(), "right end") {
+		t.Errorf("too wide an opening not refused:\n%s", ed.view())
+	}
+}
