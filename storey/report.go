@@ -40,13 +40,13 @@ func Report(out io.Writer, a *Analysis, now time.Time) error {
 	w.kv("Date", now.Format("2006-01-02 15:04 MST"))
 	w.kv("Program", "pierwise "+Version)
 	w.kv("Units", unitsLine(s.Units, u))
-	w.kv("Method", "rigid diaphragm: direct shear by rigidity, torsion about the centre of rigidity")
+	w.kv("Method", "rigid diaphragm; direct shear by rigidity, torsion about R")
 
 	w.section("1. Inputs")
 	w.kv("Shear", geometry.FormatForce(s.Shear, s.Units)+", applied along x and along y in turn")
 	w.kv("Mass centre", fmt.Sprintf("x = %s %s, y = %s %s", coord(u, s.MassCenter[0]), u.Coord, coord(u, s.MassCenter[1]), u.Coord))
-	w.kv("Plan", fmt.Sprintf("%s %s along x × %s %s along y, origin at the south-west corner", coord(u, s.Size[0]), u.Coord, coord(u, s.Size[1]), u.Coord))
-	w.kv("Accidental", fmt.Sprintf("±%.3g %% of the plan dimension across the load (ASCE 7-22 §12.8.4.2)", 100*s.Accidental))
+	w.kv("Plan", fmt.Sprintf("%s %s (x) × %s %s (y), origin at the south-west corner", coord(u, s.Size[0]), u.Coord, coord(u, s.Size[1]), u.Coord))
+	w.kv("Accidental", fmt.Sprintf("±%.3g %% of the plan size across the load (ASCE 7-22 §12.8.4.2)", 100*s.Accidental))
 	if a.Absolute {
 		w.kv("Rigidities", "R = E·t/d of each wall (classic method), "+u.Rigidity)
 	} else {
@@ -54,19 +54,30 @@ func Report(out io.Writer, a *Analysis, now time.Time) error {
 	}
 	w.blank()
 	t := &textTable{
-		head:  []string{"key", "wall", "file", "dir", "line " + u.Coord, "from " + u.Coord, "length", "height", "t", "R rel", "R " + rigUnit(a, u)},
-		right: []bool{false, false, false, false, true, true, true, true, true, true, true},
+		head:  []string{"key", "wall", "file", "length", "height", "t"},
+		right: []bool{false, false, false, true, true, true},
+	}
+	for i, wl := range a.Walls {
+		t.add(string(WallKey(i)), wl.Name, wl.Ref.File, geometry.FormatLength(wl.Wall.Length, s.Units),
+			geometry.FormatLength(wl.Wall.Height, s.Units), geometry.FormatLength(wl.Wall.Thickness, s.Units))
+	}
+	t.write(w, "  ")
+	w.blank()
+	t = &textTable{
+		head:  []string{"key", "dir", "line " + u.Coord, "from " + u.Coord, "R rel", "R " + rigUnit(a, u)},
+		right: []bool{false, false, true, true, true, true},
 	}
 	for i, wl := range a.Walls {
 		from := "centred"
 		if wl.Ref.HasStart {
 			from = coord(u, wl.Ref.Start)
 		}
-		t.add(string(WallKey(i)), wl.Name, wl.Ref.File, wl.Ref.Direction.String(), coord(u, wl.Ref.Position), from,
-			geometry.FormatLength(wl.Wall.Length, s.Units), geometry.FormatLength(wl.Wall.Height, s.Units),
-			geometry.FormatLength(wl.Wall.Thickness, s.Units), fmt.Sprintf("%.4f", wl.Unit.Rigidity), rigidity(a, u, wl.Rigidity))
+		t.add(string(WallKey(i)), wl.Ref.Direction.String(), coord(u, wl.Ref.Position), from,
+			fmt.Sprintf("%.4f", wl.Unit.Rigidity), rigidity(a, u, wl.Rigidity))
 	}
 	t.write(w, "  ")
+	w.line("  line: y of an x-wall, x of a y-wall; from: where it begins along its line;")
+	w.line("  R rel: relative rigidity, 1/(E·t) units")
 
 	w.section("2. Plan (north up; = x-wall, | y-wall, M mass centre, R centre of rigidity)")
 	w.lines(Plan(s, a, 72, 20).String(), "  ")
@@ -75,7 +86,7 @@ func Report(out io.Writer, a *Analysis, now time.Time) error {
 	w.section("3. Centre of rigidity and torsional rigidity")
 	w.kv("x_R", fmt.Sprintf("%s %s  (Σ R·x / Σ R over the y-walls, Σ R = %s %s)", num(u.CoordOf(d.CenterOfRigidity[X]), 2), u.Coord, rigidity(a, u, d.SumRigidity[Y]), rigUnit(a, u)))
 	w.kv("y_R", fmt.Sprintf("%s %s  (Σ R·y / Σ R over the x-walls, Σ R = %s %s)", num(u.CoordOf(d.CenterOfRigidity[Y]), 2), u.Coord, rigidity(a, u, d.SumRigidity[X]), rigUnit(a, u)))
-	w.kv("J", fmt.Sprintf("%s  (Σ R·d² over the walls of both directions)", torsional(a, u, d.J)))
+	w.kv("J", fmt.Sprintf("%s  (Σ R·d², all walls)", torsional(a, u, d.J)))
 
 	for _, c := range d.Cases {
 		across := c.Load.other()
@@ -88,9 +99,10 @@ func Report(out io.Writer, a *Analysis, now time.Time) error {
 		w.kv("e", fmt.Sprintf("%s_m - %s_R %s accidental = %s %s %s = %s %s",
 			across, across, sign, num(u.CoordOf(e0), 2), sign, num(u.CoordOf(d.AccidentalEccentricity[c.Load]), 2), num(u.CoordOf(c.Eccentricity), 2), u.Coord))
 		w.kv("V·e", fmt.Sprintf("%s %s", num(u.MomentOf(c.Torque), 1), u.Moment))
+		w.kv("Shears", u.Force+"; d from the centre of rigidity across the wall's line")
 		w.blank()
 		t := &textTable{
-			head:  []string{"key", "wall", "dir", "d " + u.Coord, "direct " + u.Force, "torsion " + u.Force, "total " + u.Force},
+			head:  []string{"key", "wall", "dir", "d " + u.Coord, "direct", "torsion", "total"},
 			right: []bool{false, false, false, true, true, true, true},
 		}
 		for i, wl := range a.Walls {
@@ -107,7 +119,7 @@ func Report(out io.Writer, a *Analysis, now time.Time) error {
 
 	w.section("5. Design shears (the worst case of each wall, never below its direct shear)")
 	t = &textTable{
-		head:  []string{"key", "wall", "dir", "direct " + u.Force, "design " + u.Force, "governing case", "of V"},
+		head:  []string{"key", "wall", "dir", "direct " + u.Force, "design " + u.Force, "governs", "of V"},
 		right: []bool{false, false, false, true, true, false, true},
 	}
 	for i, wl := range a.Walls {
@@ -192,7 +204,7 @@ func unitsLine(sys geometry.System, u report.Units) string {
 	if sys == geometry.SI {
 		name = "SI"
 	}
-	return fmt.Sprintf("%s (coordinates %s, forces %s, rigidities %s, moments %s)", name, u.Coord, u.Force, u.Rigidity, u.Moment)
+	return fmt.Sprintf("%s (%s, %s, %s, %s)", name, u.Coord, u.Force, u.Rigidity, u.Moment)
 }
 
 func orDash(s string) string {
