@@ -37,8 +37,9 @@
 // # Invariants
 //
 //   - A Result never holds NaN or Inf. A wall that the openings cut (no
-//     solid path from base to top, or a full-height cut that splits it into
-//     two walls) is a *CutError; a band with no pier is a *StaggeredError;
+//     solid path from base to top) is a *CutError; a full-height opening
+//     leaves two cantilever piers side by side, which §3 solves as it
+//     stands; a band with no pier is a *StaggeredError;
 //     sizes that are not positive and finite are plain errors.
 //   - The BandShare of the piers of one band sum to one; a pier's Share is
 //     its BandShare times its parent's Share, so the shares of the piers of

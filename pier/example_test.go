@@ -49,11 +49,12 @@ func ExampleCutError() {
 	w := &geometry.Wall{
 		Length: 20 * ft, Height: 10 * ft,
 		Layouts: []geometry.Layout{{Name: "main", Openings: []geometry.Opening{
-			{Name: "D1", X: 8 * ft, Width: 4 * ft, Height: 10 * ft},
+			{Name: "W1", X: 0, Sill: 3 * ft, Width: 12 * ft, Height: 4 * ft},
+			{Name: "W2", X: 12 * ft, Sill: 3 * ft, Width: 8 * ft, Height: 4 * ft},
 		}}},
 	}
 	_, err := pier.Solve(w)
 	fmt.Println(err)
 	// Output:
-	// opening D1 cuts the wall in two: there is no load path from its base to its top
+	// opening W2 cuts the wall in two: there is no load path from its base to its top
 }

@@ -36,10 +36,10 @@ type solver struct {
 
 // Solve runs the classic method of DESIGN §3 on the active layout of w. It
 // returns a *CutError when the openings cut the wall (no load path from base
-// to top, or a full-height cut that splits it in two), a *StaggeredError
-// when a band has no pier, and a plain error for a wall it cannot solve
-// (non-positive or non-finite sizes, openings outside the wall or
-// overlapping, bad material or modifiers). A Result never holds NaN or Inf.
+// to top), a *StaggeredError when a band has no pier, and a plain error for
+// a wall it cannot solve (non-positive or non-finite sizes, openings outside
+// the wall or overlapping, bad material or modifiers). A Result never holds
+// NaN or Inf.
 func Solve(w *geometry.Wall) (*Result, error) {
 	if w == nil {
 		return nil, errors.New("pier: no wall")
@@ -73,7 +73,7 @@ func Solve(w *geometry.Wall) (*Result, error) {
 		},
 		parent: make([]int, 0, len(ops)+len(ops)/2+2),
 	}
-	if name, cut := s.cutWall(wall, ops); cut {
+	if name, cut := s.cutAcross(wall, ops); cut {
 		return nil, &CutError{Region: "wall", Opening: name}
 	}
 	d, cut, err := s.region(wall, w.Support, ops, "wall", -1)
@@ -362,61 +362,6 @@ func (s *solver) cutAcross(rect geometry.Rect, ops []opening) (string, bool) {
 			}
 		}
 		if uf.find(left) == uf.find(right) {
-			return o.name, true
-		}
-	}
-	return "", false
-}
-
-// cutWall runs both wall checks on one grouping of the openings into
-// chains of touching openings (even at a corner): a chain from the left end
-// to the right end leaves no solid path from base to top (it names the
-// opening that completes the chain); a chain from the base to the top away
-// from both ends splits the wall into two walls (a full-height door, say).
-// A chain at an end only shortens the wall and is left to the classic
-// method.
-func (s *solver) cutWall(rect geometry.Rect, ops []opening) (string, bool) {
-	n := len(ops)
-	uf := newUnionFind(n + 2)
-	left, right := n, n+1
-	across := ""
-	for i, o := range ops {
-		if o.r.X0 <= rect.X0+s.eps {
-			uf.union(i, left)
-		}
-		if o.r.X1 >= rect.X1-s.eps {
-			uf.union(i, right)
-		}
-		for j := range i {
-			if s.touch(o.r, ops[j].r) {
-				uf.union(i, j)
-			}
-		}
-		if across == "" && uf.find(left) == uf.find(right) {
-			across = o.name
-		}
-	}
-	if across != "" {
-		return across, true
-	}
-	const (
-		base = 1 << iota
-		top
-	)
-	flags := make([]uint8, n+2)
-	for i, o := range ops {
-		var f uint8
-		if o.r.Y0 <= rect.Y0+s.eps {
-			f |= base
-		}
-		if o.r.Y1 >= rect.Y1-s.eps {
-			f |= top
-		}
-		flags[uf.find(i)] |= f
-	}
-	ends := [2]int{uf.find(left), uf.find(right)}
-	for i, o := range ops {
-		if root := uf.find(i); flags[root] == base|top && root != ends[0] && root != ends[1] {
 			return o.name, true
 		}
 	}

@@ -234,10 +234,6 @@ func TestErrors(t *testing.T) {
 		cut     string // opening the CutError names
 		stagger bool
 	}{
-		// A door the full height of the wall splits it into two walls.
-		{name: "full-height door", w: wallFt(20, 10, geometry.Cantilever, [4]float64{8, 0, 4, 10}), cut: "O1"},
-		// A door with a window on top of it, reaching the top: the same.
-		{name: "door and window to the top", w: wallFt(20, 10, geometry.Fixed, [4]float64{8, 0, 4, 6}, [4]float64{8, 6, 4, 4}), cut: "O1"},
 		// Windows from end to end, touching: no load path from base to top.
 		{name: "ribbon of windows", w: wallFt(20, 10, geometry.Cantilever, [4]float64{0, 3, 10, 3}, [4]float64{10, 4, 10, 3}), cut: "O2"},
 		// Two windows meeting at a corner, each at an end.
@@ -485,5 +481,37 @@ func TestExtremeProportionsAreErrorsNotInf(t *testing.T) {
 	}}}}
 	if r, err := Solve(w); err == nil {
 		t.Errorf("got %+v, want an error", r)
+	}
+}
+
+// A full-height opening leaves a solid path on each side of it: §3 solves
+// the wall as the two parts side by side. Hand arithmetic (DESIGN §3
+// formulas): each part is 8 ft long and 10 ft high, r = 1.25.
+func TestFullHeightOpenings(t *testing.T) {
+	tests := []struct {
+		name string
+		w    *geometry.Wall
+		want float64 // wall relative deflection
+	}{
+		// Cantilever: the band reaches the top, so both piers are
+		// cantilevers: d = 4r³ + 3r = 11.5625 each, 5.78125 in parallel.
+		{"full-height door", wallFt(20, 10, geometry.Cantilever, [4]float64{8, 0, 4, 10}), 11.5625 / 2},
+		// Fixed wall, a door with a window on it up to the top: the band is
+		// fixed-fixed and each opening a cut: d = r³ + 3r = 5.703125 each.
+		{"door and window to the top", wallFt(20, 10, geometry.Fixed, [4]float64{8, 0, 4, 6}, [4]float64{8, 6, 4, 4}), 5.703125 / 2},
+	}
+	for _, tc := range tests {
+		t.Run(tc.name, func(t *testing.T) {
+			r, err := Solve(tc.w)
+			if err != nil {
+				t.Fatal(err)
+			}
+			if math.Abs(r.Deflection-tc.want) > 1e-9*tc.want {
+				t.Errorf("deflection = %.6f, want %.6f", r.Deflection, tc.want)
+			}
+			if len(r.Piers) != 2 || math.Abs(r.Piers[0].Share-0.5) > 1e-12 || math.Abs(r.Piers[1].Share-0.5) > 1e-12 {
+				t.Errorf("piers = %+v, want two equal halves", r.Piers)
+			}
+		})
 	}
 }

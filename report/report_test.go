@@ -67,7 +67,7 @@ func TestWallReportDemo(t *testing.T) {
 // which opening cuts it instead of printing numbers.
 func TestWallReportCutWall(t *testing.T) {
 	w := demo.Wall()
-	w.Layouts[0].Openings = append(w.Layouts[0].Openings, geometry.Opening{Name: "SLOT", X: 20 * geometry.Foot, Width: 1 * geometry.Foot, Height: w.Height})
+	w.Layouts[0].Openings = append(w.Layouts[0].Openings, geometry.Opening{Name: "SLOT", X: 0, Sill: 10 * geometry.Foot, Width: w.Length, Height: 2 * geometry.Foot})
 	got := wallReport(t, w, "")
 	if !strings.Contains(got, "cannot be applied") || !strings.Contains(got, "SLOT") {
 		t.Errorf("cut wall report does not explain the cut:\n%s", got)
