@@ -22,9 +22,6 @@ type CompareInfo struct {
 	Version string
 }
 
-// cmpCaution is the safety caution every printed result carries.
-const cmpCaution = "Results support, and do not replace, the judgement of a licensed engineer; local codes govern."
-
 // cmpDash stands for a value that does not exist on one side.
 const cmpDash = "-"
 
@@ -36,9 +33,9 @@ func CompareReport(out io.Writer, c *study.Comparison, info CompareInfo) error {
 	w := &writer{out: out}
 	b, a := &c.Before, &c.After
 	sys := b.Wall.Units
-	w.title("Comparison of opening layouts")
+	w.title("PIERWISE LAYOUT COMPARISON")
 	if t := b.Wall.Title; t != "" {
-		w.kv("Wall", t)
+		w.kv("Title", t)
 	}
 	if a.Wall.Title != b.Wall.Title && a.Wall.Title != "" {
 		w.kv("Other wall", a.Wall.Title)
@@ -51,21 +48,28 @@ func CompareReport(out io.Writer, c *study.Comparison, info CompareInfo) error {
 	if info.Version != "" {
 		w.kv("Program", "pierwise "+info.Version)
 	}
-	u := UnitsFor(sys)
-	w.kv("Units", fmt.Sprintf("%s (lengths in %s, forces in %s, rigidity in %s)", cmpSysName(sys), u.Coord, u.Force, u.Rigidity))
-	w.kv("Method", "classic pier method, relative values with E = 1 and t = 1")
+	w.kv("Units", unitsLine(sys))
+	w.kv("Method", "classic method, relative values with E = 1 and t = 1")
+	if b.FE != nil || a.FE != nil {
+		w.kv("Check", "plane-stress finite-element model of each layout")
+	}
 
-	w.section("Elevations")
+	sec := 0
+	section := func(s string) {
+		sec++
+		w.section(fmt.Sprintf("%d. %s", sec, s))
+	}
+	section("Elevations (to scale; shares of the wall shear per leaf pier)")
 	w.para(CompareElevations(c, width, 14))
 
-	w.section("Differences")
+	section("Differences (change = after against before)")
 	t := &table{head: []string{"", "before", "after", "change"}, right: []bool{false, true, true, true}}
 	for _, r := range CompareRows(c) {
 		t.add(r.Quantity, r.Before, r.After, r.Change)
 	}
 	t.write(w, "  ")
 
-	w.section("Leaf piers, matched by position")
+	section("Leaf piers, matched by position")
 	if len(c.Piers) == 0 {
 		w.line("  No pier table: the classic method has no answer for one of the layouts.")
 	} else {
@@ -84,7 +88,7 @@ func CompareReport(out io.Writer, c *study.Comparison, info CompareInfo) error {
 	}
 
 	if len(c.Piers) > 0 && (c.Before.FE != nil || c.After.FE != nil) {
-		w.section("Leaf piers, finite-element shares")
+		section("Leaf piers, finite-element shares")
 		ft := &table{
 			head:  []string{"before", "after", "classic", "FE", "classic", "FE"},
 			right: []bool{false, false, true, true, true, true},
@@ -97,7 +101,7 @@ func CompareReport(out io.Writer, c *study.Comparison, info CompareInfo) error {
 		w.wrapped("  ", "FE shares are the shear through each pier's mid-height section of the plane-stress model, as fractions of the wall shear; columns 3-4 are the before layout, 5-6 the after layout.")
 	}
 
-	w.section("Warnings")
+	section("Warnings")
 	warn := CompareWarnings(c)
 	if len(warn) == 0 {
 		w.line("  None.")
@@ -106,8 +110,8 @@ func CompareReport(out io.Writer, c *study.Comparison, info CompareInfo) error {
 		w.wrapped("  - ", s)
 	}
 
-	w.section("Caution")
-	w.wrapped("  ", cmpCaution)
+	w.blank()
+	w.para(Caution)
 	return w.err
 }
 
@@ -117,13 +121,6 @@ func cmpSideName(s *study.Side) string {
 		name = filepath.Base(s.Path) + ", " + name
 	}
 	return name
-}
-
-func cmpSysName(s geometry.System) string {
-	if s == geometry.SI {
-		return "SI"
-	}
-	return "US"
 }
 
 // CompareElevations draws the two layouts side by side in at most cols
