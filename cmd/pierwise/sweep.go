@@ -4,6 +4,7 @@ import (
 	"encoding/json"
 	"fmt"
 	"io"
+	"math"
 
 	"pierwise/geometry"
 	"pierwise/report"
@@ -85,7 +86,9 @@ func writeSweepJSON(out io.Writer, w *geometry.Wall, pts []study.Point) error {
 	stress := float64(w.Units.BaseStress())
 	list := make([]sweepPointJSON, len(pts))
 	for i, p := range pts {
-		j := sweepPointJSON{X: float64(p.X) / base, Sill: float64(p.Y) / base, Piers: []sweepPierJSON{},
+		// Positions are k steps from the current one in metres; rounding to
+		// a nanometre-scale fraction of the base unit hides the float noise.
+		j := sweepPointJSON{X: sweepRound(float64(p.X) / base), Sill: sweepRound(float64(p.Y) / base), Piers: []sweepPierJSON{},
 			Current: p.Current, Best: p.Best}
 		if p.Err != nil {
 			j.Error = p.Err.Error()
@@ -107,3 +110,5 @@ func writeSweepJSON(out io.Writer, w *geometry.Wall, pts []study.Point) error {
 	enc.SetIndent("", "  ")
 	return enc.Encode(list)
 }
+
+func sweepRound(v float64) float64 { return math.Round(v*1e9) / 1e9 }
