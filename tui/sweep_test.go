@@ -146,3 +146,14 @@ func TestSweepOpensFromElevation(t *testing.T) {
 		t.Errorf("the sweep did not run: running %v, %d points", s.running, len(s.pts))
 	}
 }
+
+// Key repeat can deliver "lll" as one message: each rune counts.
+func TestSweepScreenRepeatedKeys(t *testing.T) {
+	c := cmpCommon("annex.toml")
+	s := sweepRun(t, c, 80, 24)
+	start := s.cursor
+	s.update(tea.KeyMsg{Type: tea.KeyRunes, Runes: []rune("lll")})
+	if s.cursor != min(start+3, len(s.pts)-1) {
+		t.Errorf("cursor %d after lll from %d", s.cursor, start)
+	}
+}
