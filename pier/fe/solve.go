@@ -3,10 +3,6 @@ package fe
 import (
 	"errors"
 	"math"
-
-	"gonum.org/v1/gonum/blas"
-	"gonum.org/v1/gonum/blas/blas64"
-	"gonum.org/v1/gonum/lapack/lapack64"
 )
 
 // model is a meshed wall with its material, element and supports.
@@ -120,6 +116,12 @@ func (md *model) bandwidth() int {
 	return kd
 }
 
+// The band factorisation Solve uses (see band.go).
+var (
+	factor    bandFactor  = choleskyBlock4
+	bandSolve bandSolveFn = solveAxpy
+)
+
 var errSingular = errors.New("fe: the stiffness matrix is singular: the wall is not held (no load path from its base to its top)")
 
 // solve returns the nodal displacements (2 per node) under the nodal forces
@@ -157,11 +159,10 @@ func (md *model) solve(f, u0 []float64) ([]float64, error) {
 		}
 	}
 	if n > 0 {
-		t, ok := lapack64.Pbtrf(blas64.SymmetricBand{Uplo: blas.Upper, N: n, K: kd, Data: ab, Stride: ld})
-		if !ok {
+		if !factor(ab, n, kd) {
 			return nil, errSingular
 		}
-		lapack64.Pbtrs(t, blas64.General{Rows: n, Cols: 1, Data: rhs, Stride: 1})
+		bandSolve(ab, n, kd, rhs)
 	}
 	u := make([]float64, len(md.eq))
 	for dof, q := range md.eq {
