@@ -64,9 +64,17 @@ func newKeyMap() KeyMap {
 	return k
 }
 
-// ShortHelp is the hint line at the bottom of the elevation.
+// ShortHelp is the hint line at the bottom of the elevation, in short
+// words, help and quit first so that a narrow window still shows them.
 func (k KeyMap) ShortHelp() []key.Binding {
-	return []key.Binding{k.Next, k.moveHint(), k.resizeHint(), k.Step, k.AddWindow, k.AddDoor, k.Delete, k.EditOpening, k.Undo, k.Save, k.Help, k.Quit}
+	return []key.Binding{short(k.Help, "help"), short(k.Quit, "quit"), short(k.Next, "select"), k.moveHint(), k.resizeHint(),
+		short(k.Step, "step"), short(k.AddWindow, "window"), short(k.AddDoor, "door"), short(k.Delete, "delete"),
+		short(k.EditOpening, "edit"), short(k.EditWall, "wall"), short(k.Undo, "undo"), short(k.Save, "save")}
+}
+
+// short is b with a shorter description for the hint line.
+func short(b key.Binding, desc string) key.Binding {
+	return key.NewBinding(key.WithKeys(b.Keys()...), key.WithHelp(b.Help().Key, desc))
 }
 
 // FullHelp is the help page, one column per group.
