@@ -1,7 +1,11 @@
 package tui
 
 import (
+	"fmt"
 	"testing"
+
+	"github.com/charmbracelet/lipgloss"
+	"github.com/muesli/termenv"
 
 	tea "github.com/charmbracelet/bubbletea"
 
@@ -39,7 +43,22 @@ func BenchmarkEdit(b *testing.B) {
 	if err := w.Validate(); err != nil {
 		b.Fatal(err)
 	}
-	b.Run("move/200x60", func(b *testing.B) {
+	for _, profile := range []termenv.Profile{termenv.Ascii, termenv.TrueColor} {
+		lipgloss.SetColorProfile(profile)
+		b.Run(fmt.Sprintf("move/200x60/%s", profileName(profile)), func(b *testing.B) { benchMove(b, w) })
+	}
+	lipgloss.SetColorProfile(termenv.Ascii)
+}
+
+func profileName(p termenv.Profile) string {
+	if p == termenv.Ascii {
+		return "mono"
+	}
+	return "colour"
+}
+
+func benchMove(b *testing.B, w *geometry.Wall) {
+	{
 		m := newModel(w, Options{})
 		m.Update(tea.WindowSizeMsg{Width: 200, Height: 60})
 		m.Update(keyTab) // select the second opening
@@ -57,5 +76,5 @@ func BenchmarkEdit(b *testing.B) {
 			m.Update(k)
 			_ = m.View()
 		}
-	})
+	}
 }
