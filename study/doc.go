@@ -9,7 +9,9 @@
 // to right and shift when an opening moves: two piers are the same pier when
 // their rectangles overlap, the pair with the larger overlap (intersection
 // over union) winning. A pier of one layout that overlaps no pier of the
-// other appears or vanishes, and the comparison says so.
+// other appears or vanishes, and the comparison says so. On request
+// (Options.FE) both layouts also get the plane-stress finite-element check
+// of package pier/fe, which answers even where the classic method cannot.
 //
 // A sweep moves one opening step by step, along x or y, through every
 // position where it fits in the wall (inside it, clear of the other

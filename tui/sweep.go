@@ -275,7 +275,9 @@ func (s *sweepScreen) view() string {
 			"the wall is solved at each. Top: the wall's relative rigidity. Below:",
 			"each pier's share of the wall shear (digits, see the legend). C marks",
 			"the current position, B the one where the highest pier shear stress",
-			"V/(L t) is lowest, x a position the classic method cannot solve.",
+			"V/(L t) is lowest (* both at once), x a position the classic method",
+			"cannot solve. Pier names follow the position: P2 is the second pier",
+			"from the left wherever the opening is.",
 			"", "Any key closes this help.")
 		return fit(strings.Join(lines, "\n"), s.width, s.height)
 	}
