@@ -409,6 +409,10 @@ func CompareWarnings(c *study.Comparison) []string {
 	return out
 }
 
+// ComparePct formats the relative change from vb to va as "+1.2 %" (never
+// "-0.0 %"), or "" when it is not defined.
+func ComparePct(vb, va float64) string { return cmpPct(vb, va) }
+
 // cmpPct formats the relative change from vb to va.
 func cmpPct(vb, va float64) string {
 	ch, ok := study.Change(vb, va)

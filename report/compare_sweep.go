@@ -52,9 +52,7 @@ func SweepTable(out io.Writer, w *geometry.Wall, name string, axis study.Axis, s
 		}
 		ch := ""
 		if cur >= 0 && pts[cur].Err == nil {
-			if c, ok := study.Change(pts[cur].Rigidity, p.Rigidity); ok {
-				ch = fmt.Sprintf("%+.1f %%", 100*c)
-			}
+			ch = cmpPct(pts[cur].Rigidity, p.Rigidity)
 		}
 		r = append(r, strconv.FormatFloat(p.Rigidity, 'f', 4, 64), ch)
 		shares := map[string]float64{}

@@ -339,8 +339,8 @@ func (s *sweepScreen) info() []string {
 	}
 	line1 := where + fmt.Sprintf("rel. rigidity %.4f", p.Rigidity)
 	if c := study.CurrentIndex(s.pts); c >= 0 && s.pts[c].Err == nil {
-		if ch, ok := study.Change(s.pts[c].Rigidity, p.Rigidity); ok {
-			line1 += fmt.Sprintf(" (%+.1f %%)", 100*ch)
+		if ch := report.ComparePct(s.pts[c].Rigidity, p.Rigidity); ch != "" {
+			line1 += " (" + ch + ")"
 		}
 	}
 	if p.MaxStress > 0 {
