@@ -244,7 +244,9 @@ func (e *elevation) summaryView(l elevLayout) string {
 	w := e.wall()
 	u := report.UnitsFor(w.Units)
 	var lines []string
+	var extra []int // lines that go first when the panel is short
 	kv := func(k, v string) { lines = append(lines, padRight(k, 12)+v) }
+	kvExtra := func(k, v string) { extra = append(extra, len(lines)); kv(k, v) }
 	lines = append(lines, st.heading.Render("Results")+st.dim.Render(" (classic method)"))
 	if e.solveErr != nil {
 		lines = append(lines, st.errText.Render("No answer:"))
@@ -273,7 +275,7 @@ func (e *elevation) summaryView(l elevLayout) string {
 					verdict, rel = st.fail.Render("FAIL"), ">"
 				}
 				kv("drift", num3(u.DeflectionOf(d.Design))+" "+rel+" "+num3(u.DeflectionOf(d.Allowable))+" "+u.Deflection+" "+verdict)
-				kv("", st.dim.Render(fmt.Sprintf("Cd %s, limit %s h", input(max(w.Drift.Cd, 1)), input(w.Drift.Limit))))
+				kvExtra("", st.dim.Render(fmt.Sprintf("Cd %s, limit %s h", input(max(w.Drift.Cd, 1)), input(w.Drift.Limit))))
 			} else {
 				kv("drift", num3(u.DeflectionOf(d.Design))+" "+u.Deflection+st.dim.Render(" (no limit)"))
 			}
@@ -282,14 +284,20 @@ func (e *elevation) summaryView(l elevLayout) string {
 			kv("bend/shear", fmt.Sprintf("%.0f%% / %.0f%%", 100*r.Split.Bending/t, 100*r.Split.Shear/t))
 		}
 		if r.Moduli.E > 0 {
-			kv("E, E_v", geometry.FormatStress(r.Moduli.E, w.Units)+", "+geometry.FormatStress(r.Moduli.Ev, w.Units))
+			kvExtra("E, E_v", geometry.FormatStress(r.Moduli.E, w.Units)+", "+geometry.FormatStress(r.Moduli.Ev, w.Units))
 		}
 		if w.Load.Shear > 0 {
-			kv("shear V", geometry.FormatForce(w.Load.Shear, w.Units))
+			kvExtra("shear V", geometry.FormatForce(w.Load.Shear, w.Units))
 		}
 	}
+	fe := e.feLines(l)
+	// On a short panel the inputs echoed above give way to the FE answer.
+	for k := len(extra) - 1; k >= 0 && len(lines)+1+len(fe) > l.topH; k-- {
+		i := extra[k]
+		lines = append(lines[:i], lines[i+1:]...)
+	}
 	lines = append(lines, "")
-	lines = append(lines, e.feLines(l)...)
+	lines = append(lines, fe...)
 	// Warnings last: on a small screen they are what gets cut (the report
 	// has them all).
 	if e.res != nil {
