@@ -368,6 +368,12 @@ func (e *elevation) tableView(l elevLayout) string {
 	if len(feShare) == 0 {
 		head, left = head[:9], left[:9]
 	}
+	if e.width < 100 { // short headers so that every column fits 80 cells
+		head[8] = "b/s"
+		if len(head) > 9 {
+			head[9] = "FE"
+		}
+	}
 	rows := [][]string{}
 	for _, p := range piers {
 		name := p.Name
@@ -515,7 +521,7 @@ func (e *elevation) helpView(l elevLayout) string {
 	}
 	lines = append(lines, "")
 	lines = append(lines, wrap("Elevation: piers are shaded by their share of the wall shear "+tintLegend(st)+
-		". The selected opening is drawn with doubled lines (= and #) in reverse video. Mouse: a click selects an opening, a drag moves it by the step. Lengths in "+unitName(e.wall().Units)+".", e.width)...)
+		". The selected opening is drawn with doubled lines (= and #) in reverse video. Mouse: a click selects an opening, a drag moves it by the step. Pier table: b/s is the bending/shear split of a pier's own deflection in %, FE the share in the finite-element model. Lengths in "+unitName(e.wall().Units)+".", e.width)...)
 	return strings.Join(lines, "\n")
 }
 
