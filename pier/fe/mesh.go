@@ -195,16 +195,29 @@ func (m *mesh) number() {
 			}
 		}
 	}
+	// Elements in the same order as the nodes, so that assembly walks the
+	// band matrix forward instead of jumping across it.
 	m.elems, m.cellOf = m.elems[:0], m.cellOf[:0]
-	for j := 0; j < m.ny; j++ {
-		for i := 0; i < m.nx; i++ {
-			if !m.solid[j*m.nx+i] {
-				continue
+	addCell := func(i, j int) {
+		if !m.solid[j*m.nx+i] {
+			return
+		}
+		m.elems = append(m.elems, [4]int{
+			m.node[j*px+i], m.node[j*px+i+1], m.node[(j+1)*px+i+1], m.node[(j+1)*px+i],
+		})
+		m.cellOf = append(m.cellOf, [2]int{i, j})
+	}
+	if m.nx <= m.ny {
+		for j := 0; j < m.ny; j++ {
+			for i := 0; i < m.nx; i++ {
+				addCell(i, j)
 			}
-			m.elems = append(m.elems, [4]int{
-				m.node[j*px+i], m.node[j*px+i+1], m.node[(j+1)*px+i+1], m.node[(j+1)*px+i],
-			})
-			m.cellOf = append(m.cellOf, [2]int{i, j})
+		}
+	} else {
+		for i := 0; i < m.nx; i++ {
+			for j := 0; j < m.ny; j++ {
+				addCell(i, j)
+			}
 		}
 	}
 }

@@ -130,7 +130,8 @@ var errSingular = errors.New("fe: the stiffness matrix is singular: the wall is 
 func (md *model) solve(f, u0 []float64) ([]float64, error) {
 	n, kd := md.neq, md.bandwidth()
 	ld := kd + 1
-	ab := make([]float64, n*ld)
+	ab, release := allocBand(n * ld)
+	defer release()
 	rhs := make([]float64, n)
 	for dof, q := range md.eq {
 		if q >= 0 {
