@@ -12,7 +12,6 @@ import (
 	tea "github.com/charmbracelet/bubbletea"
 	"github.com/charmbracelet/x/ansi"
 
-	"pierwise/demo"
 	"pierwise/geometry"
 	"pierwise/pier"
 	"pierwise/pier/fe"
@@ -106,6 +105,30 @@ func checkSize(t *testing.T, view string, w, h int) {
 	}
 }
 
+// annex is an invented wall: a copy of the demo wall as it was when these
+// tests were written, so that the golden files follow the editor, not the
+// demo.
+func annex() *geometry.Wall {
+	ft, in := geometry.Foot, geometry.Inch
+	main := []geometry.Opening{
+		{Name: "D1", X: 4 * ft, Sill: 0, Width: 3 * ft, Height: 7 * ft},
+		{Name: "W1", X: 12 * ft, Sill: 3 * ft, Width: 6 * ft, Height: 4 * ft},
+		{Name: "W2", X: 22 * ft, Sill: 3 * ft, Width: 6 * ft, Height: 4 * ft},
+		{Name: "D2", X: 31 * ft, Sill: 0, Width: 6 * ft, Height: 8 * ft},
+	}
+	wide := append([]geometry.Opening(nil), main...)
+	wide[3] = geometry.Opening{Name: "D2", X: 30 * ft, Sill: 0, Width: 8 * ft, Height: 8 * ft}
+	return &geometry.Wall{
+		Title: "Library annex, east wall", Units: geometry.US,
+		Length: 40 * ft, Height: 14 * ft, Thickness: 7.625 * in, Support: geometry.Cantilever,
+		Material:  geometry.Material{Kind: geometry.ConcreteMasonry, Strength: 2000 * geometry.PSI},
+		Load:      geometry.Load{Shear: 45 * geometry.Kip},
+		Stiffness: geometry.Stiffness{Flexure: 1, Shear: 1},
+		Drift:     geometry.Drift{Cd: 3.5, Ie: 1, Preset: "masonry-cantilever", Limit: 0.010},
+		Layouts:   []geometry.Layout{{Name: "main", Openings: main}, {Name: "wide entrance", Openings: wide}},
+	}
+}
+
 // cut is an invented wall whose two windows meet edge to edge at
 // different heights: no solid path from base to top.
 func cut() *geometry.Wall {
@@ -140,14 +163,14 @@ func TestGolden(t *testing.T) {
 			wall func() *geometry.Wall
 			keys []tea.Msg
 		}{
-			{"demo", demo.Wall, nil},
-			{"moved", demo.Wall, []tea.Msg{keyTab, runes("l"), runes("l"), runes("k")}},
-			{"refused", demo.Wall, []tea.Msg{keyLeft, keyLeft, keyLeft, keyLeft, keyLeft}},
-			{"resized", demo.Wall, []tea.Msg{keyTab, runes("."), runes("L"), runes("L"), runes("K")}},
-			{"help", demo.Wall, []tea.Msg{runes("?")}},
-			{"wallform", demo.Wall, []tea.Msg{runes("E")}},
-			{"openingform_error", demo.Wall, []tea.Msg{runes("e"), keyTab, keyCtrlU, runes("3"), runes("x"), keyEnter}},
-			{"confirm_quit", demo.Wall, []tea.Msg{runes("l"), runes("q")}},
+			{"demo", annex, nil},
+			{"moved", annex, []tea.Msg{keyTab, runes("l"), runes("l"), runes("k")}},
+			{"refused", annex, []tea.Msg{keyLeft, keyLeft, keyLeft, keyLeft, keyLeft}},
+			{"resized", annex, []tea.Msg{keyTab, runes("."), runes("L"), runes("L"), runes("K")}},
+			{"help", annex, []tea.Msg{runes("?")}},
+			{"wallform", annex, []tea.Msg{runes("E")}},
+			{"openingform_error", annex, []tea.Msg{runes("e"), keyTab, keyCtrlU, runes("3"), runes("x"), keyEnter}},
+			{"confirm_quit", annex, []tea.Msg{runes("l"), runes("q")}},
 			{"new_wall", func() *geometry.Wall { return NewWall(geometry.US) }, nil},
 			{"si", func() *geometry.Wall { return NewWall(geometry.SI) }, []tea.Msg{runes("w"), runes("d")}},
 			{"cut", cut, nil},
@@ -170,7 +193,7 @@ func TestGolden(t *testing.T) {
 // real check is run in TestFERuns.
 func TestGoldenFE(t *testing.T) {
 	for _, size := range [][2]int{{80, 24}, {160, 48}} {
-		ed := newEditor(t, demo.Wall(), "", size[0], size[1])
+		ed := newEditor(t, annex(), "", size[0], size[1])
 		e := ed.elev()
 		var piers []fe.PierShare
 		for _, p := range e.res.Leaves() {
@@ -187,7 +210,7 @@ func TestGoldenFE(t *testing.T) {
 // TestFERuns: the FE check runs on the wall of the moment and its answer
 // is shown with the difference from the classic method.
 func TestFERuns(t *testing.T) {
-	ed := newEditor(t, demo.Wall(), "", 160, 48)
+	ed := newEditor(t, annex(), "", 160, 48)
 	e := ed.elev()
 	ed.press(runFE(e.fe.id, ed.wall(), e.res)())
 	if e.fe.err != nil || e.fe.res == nil {
@@ -206,7 +229,7 @@ func TestFERuns(t *testing.T) {
 // wall file.
 func TestSnapshot(t *testing.T) {
 	path := filepath.Join(t.TempDir(), "annex.toml")
-	w := demo.Wall()
+	w := annex()
 	if err := geometry.Save(path, w); err != nil {
 		t.Fatal(err)
 	}
@@ -237,14 +260,14 @@ func TestSnapshot(t *testing.T) {
 
 func TestTooSmall(t *testing.T) {
 	for _, s := range [][2]int{{79, 24}, {80, 23}, {40, 10}, {20, 2}} {
-		ed := newEditor(t, demo.Wall(), "", s[0], s[1])
+		ed := newEditor(t, annex(), "", s[0], s[1])
 		v := ed.view()
 		if !strings.Contains(v, "too small") {
 			t.Errorf("%v: %q", s, v)
 		}
 		checkSize(t, v, s[0], min(s[1], 3))
 	}
-	ed := newEditor(t, demo.Wall(), "", 40, 10)
+	ed := newEditor(t, annex(), "", 40, 10)
 	ed.press(tea.WindowSizeMsg{Width: 100, Height: 30})
 	if v := ed.view(); strings.Contains(v, "too small") || !strings.Contains(v, "Results") {
 		t.Errorf("after growing:\n%s", v)
@@ -273,12 +296,12 @@ func sharesShown(t *testing.T, view string) map[string]string {
 // TestMoveChangesSharesAsSolver: after moving a window the table shows the
 // shares pier.Solve gives for the moved wall, pier by pier.
 func TestMoveChangesSharesAsSolver(t *testing.T) {
-	ed := newEditor(t, demo.Wall(), "", 160, 48)
+	ed := newEditor(t, annex(), "", 160, 48)
 	before := sharesShown(t, ed.view())
 	ed.press(keyTab, runes("l"), runes("l")) // W1 two feet to the right
 	after := sharesShown(t, ed.view())
 
-	w := demo.Wall()
+	w := annex()
 	w.Layouts[0].Openings[1].X = 14 * geometry.Foot
 	if got, want := ed.wall().Openings()[1], w.Layouts[0].Openings[1]; !near(float64(got.X), float64(want.X)) || got.Sill != want.Sill {
 		t.Fatalf("W1 is %+v, want %+v", got, want)
@@ -312,7 +335,7 @@ func TestMoveChangesSharesAsSolver(t *testing.T) {
 // TestRefusedMoves: moves off the wall or over another opening leave the
 // wall as it was and say why.
 func TestRefusedMoves(t *testing.T) {
-	ed := newEditor(t, demo.Wall(), "", 100, 30)
+	ed := newEditor(t, annex(), "", 100, 30)
 	orig := cloneWall(ed.wall())
 	ed.press(runes("j")) // D1 is a door: it cannot go below the base
 	if !reflect.DeepEqual(ed.wall(), orig) || !ed.elev().msgBad || !strings.Contains(ed.view(), "can't move D1") {
@@ -344,7 +367,7 @@ func near(a, b float64) bool { return a-b < 1e-9 && b-a < 1e-9 }
 // TestUndoRedo: every edit is undone in turn back to the start and redone
 // back to the end.
 func TestUndoRedo(t *testing.T) {
-	ed := newEditor(t, demo.Wall(), "", 100, 30)
+	ed := newEditor(t, annex(), "", 100, 30)
 	start := cloneWall(ed.wall())
 	keys := []tea.Msg{keyTab, runes("l"), runes("K"), runes("w"), runes("l"), runes("d"), runes("x"), runes("c"), runes("n"), runes("]"), runes("X")}
 	var states []*geometry.Wall
@@ -444,7 +467,7 @@ func TestStepCycle(t *testing.T) {
 		}
 	}
 	// Moving by the 4 in step.
-	ed := newEditor(t, demo.Wall(), "", 100, 30)
+	ed := newEditor(t, annex(), "", 100, 30)
 	ed.press(runes("."), runes("."), runes("l")) // 1 ft → 1 in → 4 in
 	if got := ed.wall().Openings()[0].X; !near(float64(got), float64(4*geometry.Foot+4*geometry.Inch)) {
 		t.Errorf("D1 at %v, want 4'-4\"", geometry.FormatLength(got, geometry.US))
@@ -452,7 +475,7 @@ func TestStepCycle(t *testing.T) {
 }
 
 func TestForms(t *testing.T) {
-	ed := newEditor(t, demo.Wall(), "", 100, 30)
+	ed := newEditor(t, annex(), "", 100, 30)
 	// Opening form: a bad width is named in place and nothing changes.
 	ed.press(runes("e"))
 	ed.press(keyTab, keyTab, keyTab)
@@ -514,11 +537,11 @@ func TestForms(t *testing.T) {
 
 // TestQuitAsks: q with unsaved changes asks; n stays, y quits.
 func TestQuitAsks(t *testing.T) {
-	ed := newEditor(t, demo.Wall(), "", 100, 30)
+	ed := newEditor(t, annex(), "", 100, 30)
 	if cmd := ed.press(runes("q")); cmd == nil || !isQuit(cmd) {
 		t.Fatal("q on an unchanged wall did not quit")
 	}
-	ed = newEditor(t, demo.Wall(), "", 100, 30)
+	ed = newEditor(t, annex(), "", 100, 30)
 	ed.press(runes("l"))
 	if cmd := ed.press(runes("q")); cmd != nil && isQuit(cmd) {
 		t.Fatal("q with unsaved changes quit without asking")
@@ -543,7 +566,7 @@ func isQuit(cmd tea.Cmd) bool {
 
 // TestStaleFE: an FE answer for an older wall is dropped.
 func TestStaleFE(t *testing.T) {
-	ed := newEditor(t, demo.Wall(), "", 100, 30)
+	ed := newEditor(t, annex(), "", 100, 30)
 	e := ed.elev()
 	old := e.fe.id
 	stale := runFE(old, ed.wall(), e.res)()
@@ -568,7 +591,7 @@ func TestStaleFE(t *testing.T) {
 func TestSaveAndLayouts(t *testing.T) {
 	dir := t.TempDir()
 	path := filepath.Join(dir, "annex.toml")
-	ed := newEditor(t, demo.Wall(), "", 100, 30)
+	ed := newEditor(t, annex(), "", 100, 30)
 	ed.press(runes("n"), runes("r"))
 	ed.typeText("door shifted")
 	ed.press(keyEnter, runes("l"))
@@ -596,7 +619,7 @@ func TestSaveAndLayouts(t *testing.T) {
 // TestMouseDrag: a click selects the opening under it, a drag moves it by
 // whole steps, and one undo takes the whole drag back.
 func TestMouseDrag(t *testing.T) {
-	ed := newEditor(t, demo.Wall(), "", 160, 48)
+	ed := newEditor(t, annex(), "", 160, 48)
 	e := ed.elev()
 	l := e.layout()
 	g := e.grid(l)
@@ -639,7 +662,7 @@ func TestMouseDrag(t *testing.T) {
 // TestFormErrorsInPlace: the wall's own rules put their message beside the
 // field they are about.
 func TestFormErrorsInPlace(t *testing.T) {
-	ed := newEditor(t, demo.Wall(), "", 120, 30)
+	ed := newEditor(t, annex(), "", 120, 30)
 	ed.press(runes("E"))
 	for range wfStrength {
 		ed.press(keyTab)

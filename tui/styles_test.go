@@ -8,8 +8,6 @@ import (
 	"github.com/charmbracelet/lipgloss"
 	"github.com/charmbracelet/x/ansi"
 	"github.com/muesli/termenv"
-
-	"pierwise/demo"
 )
 
 // TestMonochromeReads: without colour the piers' shares are still drawn
@@ -19,7 +17,7 @@ func TestMonochromeReads(t *testing.T) {
 	view := func(p termenv.Profile) string {
 		r := lipgloss.NewRenderer(io.Discard)
 		r.SetColorProfile(p)
-		c := newCommon(newDocument(demo.Wall(), "", false), r)
+		c := newCommon(newDocument(annex(), "", false), r)
 		e := newElevation(c)
 		e.setSize(160, 48)
 		return e.view()
