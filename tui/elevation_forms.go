@@ -96,6 +96,10 @@ const (
 	wfShear
 	wfDrift
 	wfCd
+	wfKf
+	wfKv
+	wfMesh
+	wfElement
 )
 
 // openWallForm edits the wall's own values.
@@ -126,6 +130,10 @@ func (e *elevation) openWallForm() {
 	if w.Drift.Cd > 0 {
 		cd = strconv.FormatFloat(w.Drift.Cd, 'g', -1, 64)
 	}
+	mesh := ""
+	if w.Check.Mesh > 0 {
+		mesh = fl(w.Check.Mesh)
+	}
 	presets := make([]string, len(geometry.DriftPresets))
 	for i, p := range geometry.DriftPresets {
 		presets[i] = p.Name
@@ -143,6 +151,10 @@ func (e *elevation) openWallForm() {
 		wfShear:     {"shear V at top", shear, "blank: no load"},
 		wfDrift:     {"drift limit", drift, "a fraction (0.01) or " + strings.Join(presets[:2], ", ") + ", ..."},
 		wfCd:        {"Cd", cd, "deflection amplification"},
+		wfKf:        {"stiffness flexure", modifier(w.Stiffness.Flexure), "x I_g; e.g. 0.35 cracked (ACI 318-14 6.6.3.1.1)"},
+		wfKv:        {"stiffness shear", modifier(w.Stiffness.Shear), "x shear area; 1 = gross"},
+		wfMesh:      {"FE mesh size", mesh, "blank: the default size"},
+		wfElement:   {"FE element", w.Check.Element, "blank: default (qm6), or q4"},
 	}
 	e.openForm(newForm("Wall", specs, func(vals []string, changed []bool) formResult {
 		r := formResult{fields: map[int]string{}}
@@ -225,6 +237,28 @@ func (e *elevation) openWallForm() {
 				n.Drift.Cd = f
 			}
 		}
+		for j, dst := range map[int]*float64{wfKf: &n.Stiffness.Flexure, wfKv: &n.Stiffness.Shear} {
+			if !changed[j] {
+				continue
+			}
+			if vals[j] == "" {
+				*dst = 1
+			} else if f, err := strconv.ParseFloat(vals[j], 64); err != nil {
+				r.fields[j] = "a number such as 0.35 or 1"
+			} else {
+				*dst = f
+			}
+		}
+		if changed[wfMesh] {
+			if vals[wfMesh] == "" {
+				n.Check.Mesh = 0
+			} else if l, err := geometry.ParseLength(vals[wfMesh], n.Units); err != nil {
+				r.fields[wfMesh] = shortReason(err)
+			} else {
+				n.Check.Mesh = l
+			}
+		}
+		n.Check.Element = vals[wfElement]
 		if len(r.fields) > 0 {
 			return r
 		}
@@ -233,6 +267,7 @@ func (e *elevation) openWallForm() {
 				"title": wfTitle, "units": wfUnits, "length": wfLength, "height": wfHeight, "thickness": wfThickness,
 				"support": wfSupport, "material.kind": wfMaterial, "material.strength": wfStrength,
 				"material.modulus": wfModulus, "load.shear": wfShear, "drift.limit": wfDrift, "drift.cd": wfCd,
+				"stiffness.flexure": wfKf, "stiffness.shear": wfKv, "check.mesh": wfMesh, "check.element": wfElement,
 			}, &r)
 			return r
 		}
@@ -319,4 +354,12 @@ func placeErrors(err error, fields map[string]int, r *formResult) {
 		rest = append(rest, e.Error())
 	}
 	r.err = strings.Join(rest, "; ")
+}
+
+// modifier shows a stiffness modifier; zero means the default, 1.
+func modifier(v float64) string {
+	if v == 0 {
+		v = 1
+	}
+	return strconv.FormatFloat(v, 'g', -1, 64)
 }

@@ -694,3 +694,30 @@ func TestFormErrorsInPlace(t *testing.T) {
 		t.Errorf("too wide an opening not refused:\n%s", ed.view())
 	}
 }
+
+// TestCrackedStiffness: a flexure modifier typed in the wall form reaches
+// the solver; the panel shows what pier.Solve gives for the cracked wall,
+// which is softer (ACI 318-14 Table 6.6.3.1.1(a): 0.35 I_g for cracked walls).
+func TestCrackedStiffness(t *testing.T) {
+	ed := newEditor(t, annex(), "", 120, 40)
+	before := ed.elev().res.Rigidity
+	ed.press(runes("E"))
+	for range wfKf {
+		ed.press(keyTab)
+	}
+	ed.typeText("0.35")
+	ed.press(keyEnter)
+	w := annex()
+	w.Stiffness.Flexure = 0.35
+	res, err := pier.Solve(w)
+	if err != nil {
+		t.Fatal(err)
+	}
+	got := ed.elev().res.Rigidity
+	if !(got < before) || got-res.Rigidity > 1e-12 || res.Rigidity-got > 1e-12 {
+		t.Errorf("relative rigidity %v after cracking (before %v), pier.Solve gives %v", got, before, res.Rigidity)
+	}
+	if !strings.Contains(ed.view(), "relative    "+num(res.Rigidity)) {
+		t.Error("cracked rigidity not shown")
+	}
+}
