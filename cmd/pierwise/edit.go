@@ -1,7 +1,10 @@
 package main
 
 import (
+	"os"
+
 	"pierwise/demo"
+	"pierwise/storey"
 	"pierwise/tui"
 )
 
@@ -9,7 +12,7 @@ func init() {
 	register(command{
 		name:  "edit",
 		args:  "FILE",
-		short: "open the wall editor on FILE (created with a plain wall when missing)",
+		short: "open the editor on a wall FILE (created with a plain wall when missing) or a storey file",
 		run:   runEdit,
 	})
 	defaultCommand = func(e *env) error {
@@ -24,7 +27,10 @@ func runEdit(e *env, args []string) error {
 		return err
 	}
 	if len(pos) != 1 {
-		return usagef("edit needs exactly one wall file")
+		return usagef("edit needs exactly one file")
+	}
+	if data, err := os.ReadFile(pos[0]); err == nil && storey.IsStoreyFile(data) {
+		return tui.EditStorey(pos[0])
 	}
 	return tui.EditFile(pos[0])
 }
