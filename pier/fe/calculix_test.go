@@ -34,7 +34,7 @@ import (
 // through-thickness strain, interpolated from its nodes, cannot make σzz
 // vanish at every Gauss point, so the expanded model is slightly stiffer than
 // 2-D plane stress (measured: 0.1 % for a solid wall, 0.7–2.1 % with
-// openings, the same at 1 ft and 3 in elements). With ν = 0 the out-of-plane
+// openings, about the same at 1 ft, 6 in and 3 in elements). With ν = 0 the out-of-plane
 // direction decouples, and in plane strain it is held, so the first two
 // variants are the exact one-to-one comparison the issue asks for
 // (deflections within 0.5 %, pier shares within 1 percentage point; they
@@ -155,6 +155,9 @@ func compareCalculix(t *testing.T, ccx string, live, update bool, v ccxVariant, 
 					if err := os.WriteFile(inpPath, inp.Bytes(), 0o644); err != nil {
 						t.Fatal(err)
 					}
+				} else if old, err := os.ReadFile(inpPath); err != nil || !bytes.Equal(old, inp.Bytes()) {
+					// Keep the record usable on machines without ccx.
+					t.Errorf("%s is missing or differs from the model written now: rerun with PIERWISE_UPDATE_CCX=1", inpPath)
 				}
 				t.Logf("ccx run live")
 			} else {
@@ -187,7 +190,9 @@ func compareCalculix(t *testing.T, ccx string, live, update bool, v ccxVariant, 
 				t.Errorf("CalculiX base reaction %.6g, want −1", rec.BaseFx)
 			}
 			// Issue 3: pier shares within 1 percentage point.
+			worst := 0.0
 			for _, p := range ours.Piers {
+				worst = max(worst, math.Abs(p.Share-rec.Shares[p.Name]))
 				want, ok := rec.Shares[p.Name]
 				if !ok {
 					t.Errorf("pier %s: no CalculiX share", p.Name)
@@ -199,6 +204,9 @@ func compareCalculix(t *testing.T, ccx string, live, update bool, v ccxVariant, 
 				if b, ok := rec.BaseShares[p.Name]; ok && math.Abs(p.Share-b) > v.pp {
 					t.Errorf("pier %s share: q4 %.4f, CalculiX base reactions %.4f (want within 0.01)", p.Name, p.Share, b)
 				}
+			}
+			if len(ours.Piers) > 0 {
+				t.Logf("pier shares: largest difference %.2g (fraction of V)", worst)
 			}
 		})
 	}
