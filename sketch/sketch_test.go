@@ -229,3 +229,30 @@ func TestNoPanic(t *testing.T) {
 		}
 	}
 }
+
+// TestLabelsFromSolver: with the solver's own result for the published wall
+// the labels show pier.Solve's shares, rounded, and agree with the hand-worked
+// ones above.
+func TestLabelsFromSolver(t *testing.T) {
+	w := chronicles()
+	res, err := pier.Solve(w)
+	if err != nil {
+		t.Fatal(err)
+	}
+	s := Elevation(w, res, 60, 20).String()
+	hand := chroniclesPiers()
+	for _, p := range res.Leaves() {
+		label := fmt.Sprintf("%.0f%%", 100*p.Share)
+		if !strings.Contains(s, label) {
+			t.Errorf("%s: %s not drawn:\n%s", p.Name, label, s)
+		}
+		for _, h := range hand.Piers {
+			if h.Name == p.Name && math.Abs(h.Share-p.Share) > 1e-9 {
+				t.Errorf("%s: solver share %.6f, hand-worked %.6f", p.Name, p.Share, h.Share)
+			}
+		}
+	}
+	if got := Elevation(w, hand, 60, 20).String(); got != s {
+		t.Errorf("drawing from the solver differs from the hand-worked piers:\n%s\n%s", s, got)
+	}
+}
