@@ -20,6 +20,23 @@ trap 'rm -rf "$tmp"' EXIT
 # Build first so compile time is not counted.
 go build -o "$tmp/fetime" ./scripts/fetime
 "$tmp/fetime" -length 20 -height 10 -mesh 1.5 -inp "$tmp/wall.inp"
+# The same wall through the command line (reads the file, solves the classic
+# method too, prints JSON); skipped when the command does not build.
+cli=""
+if go build -o "$tmp/pierwise" ./cmd/pierwise 2>/dev/null; then
+	cli="$tmp/pierwise"
+	cat >"$tmp/wall.toml" <<'TOML'
+title = "timing wall"
+units = "us"
+length = "20ft"
+height = "10ft"
+thickness = "7.625in"
+support = "cantilever"
+[material]
+kind = "concrete-masonry"
+strength = "2000psi"
+TOML
+fi
 
 # measure NAME DIR CMD...: best elapsed, its CPU time, the largest peak RSS.
 measure() {
@@ -42,9 +59,17 @@ measure() {
 echo "solid wall 20 ft x 10 ft, 160 x 80 elements (1.5 in), best of $runs runs, each program with its default threads"
 "$tmp/fetime" -length 20 -height 10 -mesh 1.5
 measure pierwise "$tmp" "$tmp/fetime" -length 20 -height 10 -mesh 1.5
+if [[ -n $cli ]]; then
+	measure cli "$tmp" "$cli" solve wall.toml --fe --mesh 1.5in --element q4 --json
+fi
 measure ccx "$tmp" ccx wall
 grep -A2 'displacements' "$tmp/wall.dat" >/dev/null || { echo "ccx produced no displacements" >&2; exit 1; }
 
+if [[ -n $cli ]]; then
+	awk -v t="$cli_t" -v ct="$ccx_t" -v m="$cli_m" -v cm="$ccx_m" 'BEGIN {
+		printf "command line (pierwise solve --fe --json): %.1fx faster, %.3f of the memory\n", ct / t, m / cm
+	}'
+fi
 awk -v pt="$pierwise_t" -v ct="$ccx_t" -v pc="$pierwise_c" -v cc="$ccx_c" -v pm="$pierwise_m" -v cm="$ccx_m" 'BEGIN {
 	printf "time ratio   ccx/pierwise %6.1fx (elapsed)  %6.1fx (cpu)   target >= 10x\n", ct / pt, cc / (pc > 0 ? pc : 0.01)
 	printf "memory ratio pierwise/ccx %6.3f                              target <= 0.100\n", pm / cm
