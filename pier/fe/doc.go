@@ -86,7 +86,11 @@
 // classic method treats each pier as fixed against rotation by a rigid
 // spandrel (or free at the top of the wall) and adds the strips and piers in
 // series and parallel, while the continuum lets spandrels bend, pier ends
-// rotate and the regions where piers and spandrels meet deform. Measured on
+// rotate and the regions where piers and spandrels meet deform. The
+// difference can be negative for squat walls held fixed-fixed: holding every
+// top node vertically also keeps the top from warping and stretching, which
+// the beam formula does not assume (a solid wall measured −10 % at
+// h/L = 0.25 and −4 % at h/L = 1). Measured on
 // the example walls at the default mesh: a solid wall 0 %, a wall with two
 // small windows held fixed-fixed 23 %, a single door under a deep spandrel
 // 44 %, a row of three windows 112 %. The FE answer converges from below in
