@@ -1,6 +1,7 @@
 package fe
 
 import (
+	"fmt"
 	"math"
 	"math/rand/v2"
 	"testing"
@@ -389,5 +390,31 @@ func TestQM6Coarse(t *testing.T) {
 			t.Errorf("%s at 1 ft: qm6 %.2f %% from the reference, q4 %.2f %%", c.name, 100*e6, 100*e4)
 		}
 		t.Logf("%s at 1 ft: qm6 %.2f %%, q4 %.2f %% from qm6 at 3 in", c.name, 100*e6, 100*e4)
+	}
+}
+
+// TestConcurrent: the editor runs checks in the background, so Solve must
+// be safe to call from several goroutines (run with -race) and give the
+// same answer as a lone call.
+func TestConcurrent(t *testing.T) {
+	c := exampleWalls()[3]
+	want, err := Solve(c.wall, c.classic, Options{})
+	if err != nil {
+		t.Fatal(err)
+	}
+	errs := make(chan error, 4)
+	for range 4 {
+		go func() {
+			got, err := Solve(c.wall, c.classic, Options{})
+			if err == nil && math.Abs(got.Deflection-want.Deflection) > 1e-12*want.Deflection {
+				err = fmt.Errorf("deflection %.15g, alone %.15g", got.Deflection, want.Deflection)
+			}
+			errs <- err
+		}()
+	}
+	for range 4 {
+		if err := <-errs; err != nil {
+			t.Error(err)
+		}
 	}
 }
