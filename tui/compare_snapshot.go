@@ -3,7 +3,6 @@ package tui
 import (
 	"errors"
 	"fmt"
-	tea "github.com/charmbracelet/bubbletea"
 	"io"
 	"io/fs"
 	"os"
@@ -73,19 +72,4 @@ func writeSnapshot(wallPath, kind string, now time.Time, write func(io.Writer) e
 // name first, so a narrow window still shows it.
 func snapshotSaid(path string) string {
 	return fmt.Sprintf("wrote %s in %s", filepath.Base(path), filepath.Dir(path))
-}
-
-// splitRunes splits a key message that holds several typed runes (a fast
-// typist or key repeat can deliver "lll" in one read) into one message per
-// rune, so that each press counts. Pastes are left whole.
-func splitRunes(msg tea.Msg) ([]tea.KeyMsg, bool) {
-	k, ok := msg.(tea.KeyMsg)
-	if !ok || k.Type != tea.KeyRunes || k.Paste || len(k.Runes) < 2 {
-		return nil, false
-	}
-	out := make([]tea.KeyMsg, len(k.Runes))
-	for i, r := range k.Runes {
-		out[i] = tea.KeyMsg{Type: tea.KeyRunes, Runes: []rune{r}, Alt: k.Alt}
-	}
-	return out, true
 }

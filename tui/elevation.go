@@ -366,7 +366,9 @@ func (e *elevation) key(msg tea.KeyMsg) tea.Cmd {
 				if next == nil {
 					return cmd
 				}
-				return tea.Batch(pushScreen(next), cmd)
+				// In sequence: the screen must be on top before the
+				// answer of its first background command arrives.
+				return tea.Sequence(pushScreen(next), cmd)
 			}
 		}
 	}

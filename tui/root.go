@@ -49,8 +49,15 @@ func (m *root) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
 		}
 		return m, nil
 	case tea.KeyMsg:
+		if keys, ok := splitRunes(msg); ok {
+			cmds := make([]tea.Cmd, len(keys))
+			for i, k := range keys {
+				_, cmds[i] = m.Update(k)
+			}
+			return m, tea.Sequence(cmds...)
+		}
 		if key.Matches(msg, m.c.keys.Quit) {
-			if m.c.doc == nil || !m.c.doc.dirty() {
+			if !m.unsaved() {
 				return m, tea.Quit
 			}
 			m.stack = m.stack[:1]
@@ -58,6 +65,36 @@ func (m *root) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
 		}
 	}
 	return m.route(msg)
+}
+
+// splitRunes splits a key message that holds several typed runes (a fast
+// typist or key repeat can deliver "lll" in one read) into one message per
+// rune, so that each press counts: the root does this once for every screen.
+// Pastes are left whole.
+func splitRunes(msg tea.Msg) ([]tea.KeyMsg, bool) {
+	k, ok := msg.(tea.KeyMsg)
+	if !ok || k.Type != tea.KeyRunes || k.Paste || len(k.Runes) < 2 {
+		return nil, false
+	}
+	out := make([]tea.KeyMsg, len(k.Runes))
+	for i, r := range k.Runes {
+		out[i] = tea.KeyMsg{Type: tea.KeyRunes, Runes: []rune{r}, Alt: k.Alt}
+	}
+	return out, true
+}
+
+// unsaved reports whether the document or any open screen holds changes
+// that are not saved.
+func (m *root) unsaved() bool {
+	if m.c.doc != nil && m.c.doc.dirty() {
+		return true
+	}
+	for _, s := range m.stack {
+		if u, ok := s.(unsavedWork); ok && u.unsaved() {
+			return true
+		}
+	}
+	return false
 }
 
 // route hands msg to the top screen. Answers of background commands that

@@ -29,8 +29,11 @@ import (
 // popScreen(); the screen revealed by a pop receives a resumeMsg so it can
 // re-read the document (the closed screen may have changed the wall or the
 // active layout). Ctrl+C (common keys.Quit) is handled by the root: with
-// unsaved changes it returns to the first screen and sends it a
-// quitRequestMsg, which the elevation answers by asking first.
+// unsaved changes (the document's, or those of a screen that implements
+// unsavedWork) it returns to the first screen and sends it a
+// quitRequestMsg, which the first screen answers by asking first. The root
+// also splits a key message of several typed runes into one per rune, so
+// a screen sees every press of a fast typist or of key repeat.
 //
 // Screens in other files join the elevation screen's keys by registering
 // from init:
@@ -101,6 +104,10 @@ func registerScreen(e screenEntry) {
 	}
 	screenEntries = append(screenEntries, e)
 }
+
+// unsavedWork is implemented by a screen that holds unsaved changes of its
+// own, beside the common document (the storey screen's walls).
+type unsavedWork interface{ unsaved() bool }
 
 // Messages of the screen contract.
 type (

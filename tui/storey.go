@@ -138,8 +138,14 @@ func (s *storeyScreen) dirty() []string {
 	return names
 }
 
+func (s *storeyScreen) unsaved() bool { return len(s.dirty()) > 0 }
+
 func (s *storeyScreen) update(msg tea.Msg) (screen, tea.Cmd) {
 	switch msg := msg.(type) {
+	case quitRequestMsg:
+		s.showHelp = false
+		s.confirmQuit = true
+		return s, nil
 	case resumeMsg:
 		if s.stale() {
 			s.analyse()
@@ -203,7 +209,7 @@ func (s *storeyScreen) open(i int) tea.Cmd {
 	cc.doc = s.docs[i]
 	e := newElevation(&cc)
 	e.say("%s: esc or q returns to the storey", s.st.Walls[i].File)
-	return tea.Batch(pushScreen(&storeyWall{e: e}), e.init())
+	return tea.Sequence(pushScreen(&storeyWall{e: e}), e.init())
 }
 
 // saveAll saves every changed wall; it reports whether all were saved.

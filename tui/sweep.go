@@ -150,14 +150,6 @@ func (s *sweepScreen) start() tea.Cmd {
 }
 
 func (s *sweepScreen) update(msg tea.Msg) (screen, tea.Cmd) {
-	if keys, ok := splitRunes(msg); ok {
-		var cmds []tea.Cmd
-		for _, k := range keys {
-			_, cmd := s.update(k)
-			cmds = append(cmds, cmd)
-		}
-		return s, tea.Sequence(cmds...)
-	}
 	switch msg := msg.(type) {
 	case resumeMsg:
 		return s, s.start()

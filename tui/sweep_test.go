@@ -147,12 +147,14 @@ func TestSweepOpensFromElevation(t *testing.T) {
 	}
 }
 
-// Key repeat can deliver "lll" as one message: each rune counts.
+// Key repeat can deliver "lll" as one message: the root splits it, so
+// each rune counts on every screen.
 func TestSweepScreenRepeatedKeys(t *testing.T) {
 	c := cmpCommon("annex.toml")
 	s := sweepRun(t, c, 80, 24)
+	m := newRoot(c, s)
 	start := s.cursor
-	s.update(tea.KeyMsg{Type: tea.KeyRunes, Runes: []rune("lll")})
+	m.Update(tea.KeyMsg{Type: tea.KeyRunes, Runes: []rune("lll")})
 	if s.cursor != min(start+3, len(s.pts)-1) {
 		t.Errorf("cursor %d after lll from %d", s.cursor, start)
 	}
