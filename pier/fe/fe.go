@@ -181,7 +181,11 @@ func buildModel(w *geometry.Wall, leaves []pier.Pier, size float64, kind string,
 		xk = append(xk, p.Rect.X0, p.Rect.X1)
 		yk = append(yk, p.Rect.Y0, p.Rect.Y1, (p.Rect.Y0+p.Rect.Y1)/2)
 	}
-	if cells := (length/size + 1) * (height/size + 1); cells > maxBand {
+	// A lower bound of the band matrix from the uniform grid (2 equations
+	// per node, a band of 2 nodes more than the shorter side), checked
+	// before anything is built.
+	nx, ny := math.Ceil(length/size), math.Ceil(height/size)
+	if est := 2 * (nx + 1) * (ny + 1) * (2*min(nx, ny) + 3); est > maxBand {
 		return nil, fmt.Errorf("fe: a mesh of %.3g m is too fine for a %.3g m × %.3g m wall", size, length, height)
 	}
 	m := newMesh(length, height, openingRects(w), xk, yk, size)
