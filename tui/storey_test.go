@@ -3,6 +3,7 @@ package tui
 import (
 	"os"
 	"path/filepath"
+	"reflect"
 	"strings"
 	"testing"
 	"time"
@@ -82,6 +83,14 @@ func (d *storeyDriver) run(cmd tea.Cmd) {
 	case pushScreenMsg, popScreenMsg:
 		_, next := d.m.Update(msg)
 		d.run(next)
+	default:
+		// tea.Sequence answers with an unexported []tea.Cmd: run its
+		// commands in order, as the runtime does.
+		if v := reflect.ValueOf(msg); v.Kind() == reflect.Slice && v.Type().Elem() == reflect.TypeFor[tea.Cmd]() {
+			for i := range v.Len() {
+				d.run(v.Index(i).Interface().(tea.Cmd))
+			}
+		}
 	}
 }
 
@@ -206,5 +215,28 @@ func TestStoreyScreenBadEdit(t *testing.T) {
 	d.press(resumeMsg{})
 	if s.err != nil || !strings.Contains(d.view(), "centre of rigidity") {
 		t.Errorf("after undo: %v\n%s", s.err, d.view())
+	}
+}
+
+// Ctrl+C inside a wall opened from the storey, with that wall edited and not
+// saved, returns to the storey screen and asks instead of quitting.
+func TestStoreyCtrlCAsksWithUnsavedWalls(t *testing.T) {
+	d := newStoreyDriver(t, copyWorkshop(t), 100, 30)
+	s := d.screen()
+	d.press(keyEnter, runes("L"))
+	if !s.docs[0].dirty() {
+		t.Fatal("the edit did not reach the wall's document")
+	}
+	_, cmd := d.m.Update(tea.KeyMsg{Type: tea.KeyCtrlC})
+	if cmd != nil {
+		if _, quit := cmd().(tea.QuitMsg); quit {
+			t.Fatal("ctrl+c quit with an unsaved wall")
+		}
+	}
+	if len(d.m.stack) != 1 || !s.confirmQuit {
+		t.Fatalf("ctrl+c: %d screens, asking %v; want the storey screen asking", len(d.m.stack), s.confirmQuit)
+	}
+	if v := d.view(); !strings.Contains(v, "unsaved walls") {
+		t.Errorf("the storey screen does not ask:\n%s", v)
 	}
 }
