@@ -186,7 +186,7 @@ func buildModel(w *geometry.Wall, leaves []pier.Pier, size float64, kind string,
 	// before anything is built.
 	nx, ny := math.Ceil(length/size), math.Ceil(height/size)
 	if est := 2 * (nx + 1) * (ny + 1) * (2*min(nx, ny) + 3); est > maxBand {
-		return nil, fmt.Errorf("fe: a mesh of %.3g m is too fine for a %.3g m × %.3g m wall", size, length, height)
+		return nil, tooFine(w, size)
 	}
 	m := newMesh(length, height, openingRects(w), xk, yk, size)
 	if len(m.elems) == 0 {
@@ -200,9 +200,18 @@ func buildModel(w *geometry.Wall, leaves []pier.Pier, size float64, kind string,
 		return j == 0 || (fixedTop && j == top && c == 1)
 	})
 	if kd := md.bandwidth(); float64(md.neq)*float64(kd+1) > maxBand {
-		return nil, fmt.Errorf("fe: a mesh of %.3g m is too fine for a %.3g m × %.3g m wall (%d equations)", size, length, height, md.neq)
+		return nil, tooFine(w, size)
 	}
 	return md, nil
+}
+
+func tooFine(w *geometry.Wall, size float64) error {
+	el := fmt.Sprintf("%.3g in", size/float64(geometry.Inch))
+	if w.Units == geometry.SI {
+		el = fmt.Sprintf("%.3g mm", size/float64(geometry.Millimetre))
+	}
+	return fmt.Errorf("fe: a mesh of %s is too fine for this %s × %s wall: the model would need more than %d MB; use a larger element size",
+		el, geometry.FormatLength(w.Length, w.Units), geometry.FormatLength(w.Height, w.Units), maxBand*8/1_000_000)
 }
 
 // topLoad spreads V = 1 over the top nodes in proportion to each node's
