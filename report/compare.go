@@ -30,89 +30,89 @@ const cmpDash = "-"
 // table with piers matched by position, warnings and the caution. It
 // computes nothing: every number comes from c.
 func CompareReport(out io.Writer, c *study.Comparison, info CompareInfo) error {
-	w := &writer{out: out}
+	w := NewText(out)
 	b, a := &c.Before, &c.After
 	sys := b.Wall.Units
-	w.title("PIERWISE LAYOUT COMPARISON")
+	w.Title("PIERWISE LAYOUT COMPARISON")
 	if t := b.Wall.Title; t != "" {
-		w.kv("Title", t)
+		w.KV("Title", t)
 	}
 	if a.Wall.Title != b.Wall.Title && a.Wall.Title != "" {
-		w.kv("Other wall", a.Wall.Title)
+		w.KV("Other wall", a.Wall.Title)
 	}
-	w.kv("Before", cmpSideName(b))
-	w.kv("After", cmpSideName(a))
+	w.KV("Before", cmpSideName(b))
+	w.KV("After", cmpSideName(a))
 	if !info.Now.IsZero() {
-		w.kv("Date", info.Now.UTC().Format("2006-01-02 15:04 UTC"))
+		w.KV("Date", info.Now.UTC().Format("2006-01-02 15:04 UTC"))
 	}
 	if info.Version != "" {
-		w.kv("Program", "pierwise "+info.Version)
+		w.KV("Program", "pierwise "+info.Version)
 	}
-	w.kv("Units", unitsLine(sys))
-	w.kv("Method", "classic method, relative values with E = 1 and t = 1")
+	w.KV("Units", unitsLine(sys))
+	w.KV("Method", "classic method, relative values with E = 1 and t = 1")
 	if b.FE != nil || a.FE != nil {
-		w.kv("Check", "plane-stress finite-element model of each layout")
+		w.KV("Check", "plane-stress finite-element model of each layout")
 	}
 
 	sec := 0
 	section := func(s string) {
 		sec++
-		w.section(fmt.Sprintf("%d. %s", sec, s))
+		w.Section(fmt.Sprintf("%d. %s", sec, s))
 	}
 	section("Elevations (to scale; shares of the wall shear per leaf pier)")
-	w.para(CompareElevations(c, width, 14))
+	w.Para(CompareElevations(c, Width, 14))
 
 	section("Differences (change = after against before)")
-	t := &table{head: []string{"", "before", "after", "change"}, right: []bool{false, true, true, true}}
+	t := &Table{Head: []string{"", "before", "after", "change"}, Right: []bool{false, true, true, true}}
 	for _, r := range CompareRows(c) {
-		t.add(r.Quantity, r.Before, r.After, r.Change)
+		t.Add(r.Quantity, r.Before, r.After, r.Change)
 	}
-	t.write(w, "  ")
+	t.Write(w, "  ")
 
 	section("Leaf piers, matched by position")
 	if len(c.Piers) == 0 {
-		w.line("  No pier table: the classic method has no answer for one of the layouts.")
+		w.Line("  No pier table: the classic method has no answer for one of the layouts.")
 	} else {
-		pt := &table{
-			head:  []string{"before", "after", "share", "share", "change", "V before", "V after", "note"},
-			right: []bool{false, false, true, true, true, true, true, false},
+		pt := &Table{
+			Head:  []string{"before", "after", "share", "share", "change", "V before", "V after", "note"},
+			Right: []bool{false, false, true, true, true, true, true, false},
 		}
 		for _, r := range ComparePierRows(c) {
-			pt.add(r.Before, r.After, r.ShareBefore, r.ShareAfter, r.Change, r.ShearBefore, r.ShearAfter, r.Note)
+			pt.Add(r.Before, r.After, r.ShareBefore, r.ShareAfter, r.Change, r.ShearBefore, r.ShearAfter, r.Note)
 		}
-		pt.write(w, "  ")
-		w.blank()
-		w.wrapped("  ", "Shares are fractions of the wall shear. Change is in percentage points. "+
+		pt.Write(w, "  ")
+		w.Blank()
+		w.Wrapped("  ", "Shares are fractions of the wall shear. Change is in percentage points. "+
 			"A pier of one layout matches the pier of the other that overlaps it most; "+
 			"the names P1, P2, ... are given left to right in each layout and may differ.")
 	}
 
 	if len(c.Piers) > 0 && (c.Before.FE != nil || c.After.FE != nil) {
 		section("Leaf piers, finite-element shares")
-		ft := &table{
-			head:  []string{"before", "after", "classic", "FE", "classic", "FE"},
-			right: []bool{false, false, true, true, true, true},
+		ft := &Table{
+			Head:  []string{"before", "after", "classic", "FE", "classic", "FE"},
+			Right: []bool{false, false, true, true, true, true},
 		}
 		for _, r := range ComparePierRows(c) {
-			ft.add(r.Before, r.After, r.ShareBefore, cmpOr(r.FEBefore), r.ShareAfter, cmpOr(r.FEAfter))
+			ft.Add(r.Before, r.After, r.ShareBefore, cmpOr(r.FEBefore), r.ShareAfter, cmpOr(r.FEAfter))
 		}
-		ft.write(w, "  ")
-		w.blank()
-		w.wrapped("  ", "FE shares are the shear through each pier's mid-height section of the plane-stress model, as fractions of the wall shear; columns 3-4 are the before layout, 5-6 the after layout.")
+		ft.Write(w, "  ")
+		w.Blank()
+		w.Wrapped("  ", "FE shares are the shear through each pier's mid-height section of the plane-stress model, as fractions of the wall shear; columns 3-4 are the before layout, 5-6 the after layout.")
 	}
 
 	section("Warnings")
 	warn := CompareWarnings(c)
 	if len(warn) == 0 {
-		w.line("  None.")
+		w.Line("  None.")
 	}
 	for _, s := range warn {
-		w.wrapped("  - ", s)
+		w.Wrapped("  - ", s)
 	}
 
-	w.blank()
-	w.para(Caution)
-	return w.err
+	w.Blank()
+	w.Para(Caution)
+	return w.Err()
 }
 
 func cmpSideName(s *study.Side) string {

@@ -38,113 +38,113 @@ type Input struct {
 
 // Wall writes the text report of one wall layout.
 func Wall(out io.Writer, in Input) error {
-	w := &writer{out: out}
+	w := NewText(out)
 	wall := in.Wall
 	u := UnitsFor(wall.Units)
 
-	w.title("PIERWISE WALL REPORT")
-	w.kv("Title", orDash(wall.Title))
-	w.kv("File", orDefault(in.Path, "(built-in demo wall)"))
-	w.kv("Layout", layoutLine(wall))
-	w.kv("Date", in.Now.Format("2006-01-02 15:04 MST"))
-	w.kv("Program", "pierwise "+in.Version)
-	w.kv("Units", unitsLine(wall.Units))
-	w.kv("Method", "classic strip method (solid wall − strips with openings + piers)")
+	w.Title("PIERWISE WALL REPORT")
+	w.KV("Title", orDash(wall.Title))
+	w.KV("File", orDefault(in.Path, "(built-in demo wall)"))
+	w.KV("Layout", layoutLine(wall))
+	w.KV("Date", in.Now.Format("2006-01-02 15:04 MST"))
+	w.KV("Program", "pierwise "+in.Version)
+	w.KV("Units", unitsLine(wall.Units))
+	w.KV("Method", "classic strip method (solid wall − strips with openings + piers)")
 
-	w.section("1. Inputs")
+	w.Section("1. Inputs")
 	inputs(w, wall, in.Result)
 
-	w.section("2. Elevation (to scale; shares of the wall shear per leaf pier)")
-	w.lines(sketch.Elevation(wall, in.Result, 72, 22).String(), "  ")
+	w.Section("2. Elevation (to scale; shares of the wall shear per leaf pier)")
+	w.Lines(sketch.Elevation(wall, in.Result, 72, 22).String(), "  ")
 
 	if in.Result == nil {
-		w.section("3. Classic method")
-		w.para(fmt.Sprintf("The classic method cannot be applied to this layout: %v.", in.Err))
+		w.Section("3. Classic method")
+		w.Para(fmt.Sprintf("The classic method cannot be applied to this layout: %v.", in.Err))
 		if in.FE != nil {
-			w.section("4. Finite-element check")
+			w.Section("4. Finite-element check")
 			feSection(w, in.FE, nil, wall)
 		}
-		w.blank()
-		w.para(Caution)
-		return w.err
+		w.Blank()
+		w.Para(Caution)
+		return w.Err()
 	}
 	res := in.Result
 
-	w.section("3. Classic method (relative deflections in units of 1/(E·t))")
+	w.Section("3. Classic method (relative deflections in units of 1/(E·t))")
 	steps(w, res, wall)
 
-	w.section("4. Piers")
+	w.Section("4. Piers")
 	pierTable(w, res, wall)
 
-	w.section("5. Results")
+	w.Section("5. Results")
 	results(w, res, wall, u)
 
 	n := 6
 	if in.FE != nil || in.FEErr != nil {
-		w.section(fmt.Sprintf("%d. Finite-element check", n))
+		w.Section(fmt.Sprintf("%d. Finite-element check", n))
 		if in.FE != nil {
 			feSection(w, in.FE, res, wall)
 		} else {
-			w.para(fmt.Sprintf("The finite-element check failed: %v.", in.FEErr))
+			w.Para(fmt.Sprintf("The finite-element check failed: %v.", in.FEErr))
 		}
 		n++
 	}
 
-	w.section(fmt.Sprintf("%d. Warnings", n))
+	w.Section(fmt.Sprintf("%d. Warnings", n))
 	warns := append([]string(nil), res.Warnings...)
 	if in.FE != nil && math.Abs(in.FE.Difference) > fe.WarnDifference {
 		warns = append(warns, fmt.Sprintf("The classic method's rigidity differs from the finite-element model's by %+.0f %% (more than %.0f %%): the piers are not as well fixed as the method assumes; prefer the finite-element rigidity for distributing shear, or justify the difference.", 100*in.FE.Difference, 100*fe.WarnDifference))
 	}
 	if len(warns) == 0 {
-		w.line("  none")
+		w.Line("  none")
 	}
 	for _, s := range warns {
-		w.wrapped("  - ", s)
+		w.Wrapped("  - ", s)
 	}
-	w.blank()
-	w.para(Caution)
-	return w.err
+	w.Blank()
+	w.Para(Caution)
+	return w.Err()
 }
 
-func inputs(w *writer, wall *geometry.Wall, res *pier.Result) {
+func inputs(w *Text, wall *geometry.Wall, res *pier.Result) {
 	sys := wall.Units
 	L := func(l geometry.Length) string { return geometry.FormatLength(l, sys) }
-	w.kv("Wall", fmt.Sprintf("length %s, height %s, thickness %s", L(wall.Length), L(wall.Height), L(wall.Thickness)))
-	w.kv("Support", supportLong(wall.Support))
-	w.kv("Material", materialLine(wall.Material, sys))
+	w.KV("Wall", fmt.Sprintf("length %s, height %s, thickness %s", L(wall.Length), L(wall.Height), L(wall.Thickness)))
+	w.KV("Support", supportLong(wall.Support))
+	w.KV("Material", materialLine(wall.Material, sys))
 	if res != nil && res.Moduli.E > 0 {
-		w.kv("E", fmt.Sprintf("%s; E_v = %s", geometry.FormatStress(res.Moduli.E, sys), geometry.FormatStress(res.Moduli.Ev, sys)))
-		w.kv("", res.Moduli.Source)
+		w.KV("E", fmt.Sprintf("%s; E_v = %s", geometry.FormatStress(res.Moduli.E, sys), geometry.FormatStress(res.Moduli.Ev, sys)))
+		w.KV("", res.Moduli.Source)
 	}
-	w.kv("Stiffness", fmt.Sprintf("flexure × %.2f, shear × %.2f (1.00 = gross section)", orOne(wall.Stiffness.Flexure), orOne(wall.Stiffness.Shear)))
+	w.KV("Stiffness", fmt.Sprintf("flexure × %.2f, shear × %.2f (1.00 = gross section)", orOne(wall.Stiffness.Flexure), orOne(wall.Stiffness.Shear)))
 	if wall.Load.Shear > 0 {
-		w.kv("Load", fmt.Sprintf("in-plane shear V = %s at the top of the wall", geometry.FormatForce(wall.Load.Shear, sys)))
+		w.KV("Load", fmt.Sprintf("in-plane shear V = %s at the top of the wall", geometry.FormatForce(wall.Load.Shear, sys)))
 	} else {
-		w.kv("Load", "none given (relative values only)")
+		w.KV("Load", "none given (relative values only)")
 	}
 	drift, source, _ := strings.Cut(driftLine(wall.Drift), "\n")
-	w.kv("Drift", drift)
+	w.KV("Drift", drift)
 	if source != "" {
-		w.kv("", source)
+		w.KV("", source)
 	}
 	ops := wall.Openings()
 	if len(ops) == 0 {
-		w.kv("Openings", "none (solid wall)")
+		w.KV("Openings", "none (solid wall)")
 		return
 	}
-	w.kv("Openings", fmt.Sprintf("%d", len(ops)))
-	t := table{head: []string{"name", "kind", "x", "sill", "width", "height", "head"}, right: []bool{false, false, true, true, true, true, true}}
+	w.KV("Openings", fmt.Sprintf("%d", len(ops)))
+	t := Table{Head: []string{"name", "kind", "x", "sill", "width", "height", "head"}, Right: []bool{false, false, true, true, true, true, true}}
 	for _, o := range ops {
 		kind := "window"
 		if o.IsDoor() {
 			kind = "door"
 		}
-		t.add(o.Name, kind, L(o.X), L(o.Sill), L(o.Width), L(o.Height), L(o.Sill+o.Height))
+		t.Add(o.Name, kind, L(o.X), L(o.Sill), L(o.Width), L(o.Height), L(o.Sill+o.Height))
 	}
-	t.write(w, "    ")
+	t.Write(w, "    ")
 }
 
-func steps(w *writer, res *pier.Result, wall *geometry.Wall) {
+func steps(w *Text, res *pier.Result, wall *geometry.Wall) {
 	u := UnitsFor(wall.Units)
 	dim := func(r geometry.Rect) string {
 		return fmt.Sprintf("h %s × L %s", geometry.FormatLength(geometry.Length(r.H()), wall.Units), geometry.FormatLength(geometry.Length(r.W()), wall.Units))
@@ -168,13 +168,13 @@ func steps(w *writer, res *pier.Result, wall *geometry.Wall) {
 			sign = "+"
 			text = fmt.Sprintf("piers %s in parallel: 1/Σ(1/Δ)", strings.Join(s.Piers, ", "))
 		}
-		w.line(fmt.Sprintf("%-58s %s %8.4f", indent+text, sign, s.Deflection))
+		w.Line(fmt.Sprintf("%-58s %s %8.4f", indent+text, sign, s.Deflection))
 	}
-	w.line(fmt.Sprintf("%-58s = %8.4f", "  wall deflection Δ", res.Deflection))
-	w.line(fmt.Sprintf("%-58s = %8.4f", "  relative rigidity R = 1/Δ", res.Rigidity))
+	w.Line(fmt.Sprintf("%-58s = %8.4f", "  wall deflection Δ", res.Deflection))
+	w.Line(fmt.Sprintf("%-58s = %8.4f", "  relative rigidity R = 1/Δ", res.Rigidity))
 }
 
-func pierTable(w *writer, res *pier.Result, wall *geometry.Wall) {
+func pierTable(w *Text, res *pier.Result, wall *geometry.Wall) {
 	u := UnitsFor(wall.Units)
 	L := func(x float64) string { return geometry.FormatLength(geometry.Length(x), wall.Units) }
 	head := []string{"pier", "h", "L", "h/L", "support", "R rel", "share", "bend/shear"}
@@ -183,7 +183,7 @@ func pierTable(w *writer, res *pier.Result, wall *geometry.Wall) {
 		head = append(head, "V "+u.Force, "M "+u.Moment)
 		right = append(right, true, true)
 	}
-	t := table{head: head, right: right}
+	t := Table{Head: head, Right: right}
 	for _, p := range res.Piers {
 		name := strings.Repeat("  ", depth(p.Name)-1) + p.Name
 		if !p.Leaf {
@@ -200,54 +200,54 @@ func pierTable(w *writer, res *pier.Result, wall *geometry.Wall) {
 		} else if res.HasLoad {
 			row = append(row, "-", "-")
 		}
-		t.add(row...)
+		t.Add(row...)
 	}
-	t.write(w, "  ")
-	w.line("  * pier with openings of its own; its share is split among the piers inside it,")
-	w.line("    which carry the forces.")
+	t.Write(w, "  ")
+	w.Line("  * pier with openings of its own; its share is split among the piers inside it,")
+	w.Line("    which carry the forces.")
 	if res.HasLoad {
-		w.line("  M is at the pier's base for a cantilever pier, at its top and base (V·h/2) for a fixed pier.")
+		w.Line("  M is at the pier's base for a cantilever pier, at its top and base (V·h/2) for a fixed pier.")
 	}
 }
 
-func results(w *writer, res *pier.Result, wall *geometry.Wall, u Units) {
-	w.kv("Δ relative", fmt.Sprintf("%.4f /(E·t)", res.Deflection))
-	w.kv("R relative", fmt.Sprintf("%.4f E·t", res.Rigidity))
+func results(w *Text, res *pier.Result, wall *geometry.Wall, u Units) {
+	w.KV("Δ relative", fmt.Sprintf("%.4f /(E·t)", res.Deflection))
+	w.KV("R relative", fmt.Sprintf("%.4f E·t", res.Rigidity))
 	if d := res.Split.Total(); d > 0 {
-		w.kv("Split", fmt.Sprintf("bending %.0f %%, shear %.0f %% of the wall's deflection", 100*res.Split.Bending/d, 100*res.Split.Shear/d))
+		w.KV("Split", fmt.Sprintf("bending %.0f %%, shear %.0f %% of the wall's deflection", 100*res.Split.Bending/d, 100*res.Split.Shear/d))
 	}
 	if res.Moduli.E <= 0 {
-		w.kv("Rigidity", "not known: the material gives no modulus")
+		w.KV("Rigidity", "not known: the material gives no modulus")
 		return
 	}
-	w.kv("Rigidity", fmt.Sprintf("R = %s %s  (R relative × E·t)", num(u.RigidityOf(res.RigidityAbs)), u.Rigidity))
+	w.KV("Rigidity", fmt.Sprintf("R = %s %s  (R relative × E·t)", num(u.RigidityOf(res.RigidityAbs)), u.Rigidity))
 	if !res.HasLoad {
-		w.kv("Deflection", "no load given")
+		w.KV("Deflection", "no load given")
 		return
 	}
-	w.kv("Deflection", fmt.Sprintf("δe = %.4g %s under V = %s", u.DeflectionOf(res.DeflectionAbs), u.Deflection, geometry.FormatForce(wall.Load.Shear, wall.Units)))
+	w.KV("Deflection", fmt.Sprintf("δe = %.4g %s under V = %s", u.DeflectionOf(res.DeflectionAbs), u.Deflection, geometry.FormatForce(wall.Load.Shear, wall.Units)))
 	d := res.Drift
-	w.kv("Drift", fmt.Sprintf("δ = Cd·δe/Ie = %.4g %s = %.5f h", u.DeflectionOf(d.Design), u.Deflection, d.Ratio))
+	w.KV("Drift", fmt.Sprintf("δ = Cd·δe/Ie = %.4g %s = %.5f h", u.DeflectionOf(d.Design), u.Deflection, d.Ratio))
 	if d.Allowable > 0 {
 		verdict := "OK"
 		if !d.OK {
 			verdict = "EXCEEDS THE LIMIT"
 		}
-		w.kv("Drift limit", fmt.Sprintf("%.4g %s (%.3f h): %s", u.DeflectionOf(d.Allowable), u.Deflection, wall.Drift.Limit, verdict))
+		w.KV("Drift limit", fmt.Sprintf("%.4g %s (%.3f h): %s", u.DeflectionOf(d.Allowable), u.Deflection, wall.Drift.Limit, verdict))
 	} else {
-		w.kv("Drift limit", "none set")
+		w.KV("Drift limit", "none set")
 	}
 }
 
-func feSection(w *writer, r *fe.Result, res *pier.Result, wall *geometry.Wall) {
-	w.kv("Model", fmt.Sprintf("plane stress, element %s, max size %s, %d elements, %d unknowns", r.Element, geometry.FormatLength(r.Mesh, wall.Units), r.Elements, r.DOFs))
-	w.kv("Supports", "base fixed; shear spread over the top edge; deflection = mean of the top nodes")
-	w.kv("Δ relative", fmt.Sprintf("%.4f /(E·t)", r.Deflection))
-	w.kv("R relative", fmt.Sprintf("%.4f E·t", r.Rigidity))
+func feSection(w *Text, r *fe.Result, res *pier.Result, wall *geometry.Wall) {
+	w.KV("Model", fmt.Sprintf("plane stress, element %s, max size %s, %d elements, %d unknowns", r.Element, geometry.FormatLength(r.Mesh, wall.Units), r.Elements, r.DOFs))
+	w.KV("Supports", "base fixed; shear spread over the top edge; deflection = mean of the top nodes")
+	w.KV("Δ relative", fmt.Sprintf("%.4f /(E·t)", r.Deflection))
+	w.KV("R relative", fmt.Sprintf("%.4f E·t", r.Rigidity))
 	if res == nil {
 		return
 	}
-	w.kv("Classic/FE", fmt.Sprintf("the classic rigidity is %+.1f %% of the model's", 100*r.Difference))
+	w.KV("Classic/FE", fmt.Sprintf("the classic rigidity is %+.1f %% of the model's", 100*r.Difference))
 	if len(r.Piers) == 0 {
 		return
 	}
@@ -255,15 +255,15 @@ func feSection(w *writer, r *fe.Result, res *pier.Result, wall *geometry.Wall) {
 	for _, p := range r.Piers {
 		share[p.Name] = p.Share
 	}
-	t := table{head: []string{"pier", "classic", "FE", "difference"}, right: []bool{false, true, true, true}}
+	t := Table{Head: []string{"pier", "classic", "FE", "difference"}, Right: []bool{false, true, true, true}}
 	for _, p := range res.Leaves() {
 		s, ok := share[p.Name]
 		if !ok {
 			continue
 		}
-		t.add(p.Name, fmt.Sprintf("%.1f %%", 100*p.Share), fmt.Sprintf("%.1f %%", 100*s), fmt.Sprintf("%+.1f pt", 100*(p.Share-s)))
+		t.Add(p.Name, fmt.Sprintf("%.1f %%", 100*p.Share), fmt.Sprintf("%.1f %%", 100*s), fmt.Sprintf("%+.1f pt", 100*(p.Share-s)))
 	}
-	t.write(w, "  ")
+	t.Write(w, "  ")
 }
 
 // depth is 0 for the wall, 1 for P1, 2 for P1.2 …

@@ -7,87 +7,106 @@ import (
 	"unicode/utf8"
 )
 
-// width is the report's line width.
-const width = 78
+// Width is the line width of the text reports.
+const Width = 78
 
-// writer writes report lines and keeps the first error.
-type writer struct {
+// Text writes the lines of a plain-text report and keeps the first write
+// error, so a report is written without checking every line. The wall,
+// comparison and storey reports all lay out their text through it.
+type Text struct {
 	out io.Writer
 	err error
 }
 
-func (w *writer) line(s string) {
+// NewText returns a Text writing to out.
+func NewText(out io.Writer) *Text { return &Text{out: out} }
+
+// Err returns the first write error.
+func (w *Text) Err() error { return w.err }
+
+// Line writes one line without trailing blanks.
+func (w *Text) Line(s string) {
 	if w.err != nil {
 		return
 	}
 	_, w.err = fmt.Fprintln(w.out, strings.TrimRight(s, " "))
 }
 
-func (w *writer) blank() { w.line("") }
+// Blank writes an empty line.
+func (w *Text) Blank() { w.Line("") }
 
-func (w *writer) title(s string) {
-	w.line(s)
-	w.line(strings.Repeat("=", utf8.RuneCountInString(s)))
+// Title writes the report's title, underlined with '='.
+func (w *Text) Title(s string) {
+	w.Line(s)
+	w.Line(strings.Repeat("=", utf8.RuneCountInString(s)))
 }
 
-func (w *writer) section(s string) {
-	w.blank()
-	w.line(s)
-	w.line(strings.Repeat("-", utf8.RuneCountInString(s)))
+// Section writes a blank line and a heading underlined with '-'.
+func (w *Text) Section(s string) {
+	w.Blank()
+	w.Line(s)
+	w.Line(strings.Repeat("-", min(utf8.RuneCountInString(s), Width)))
 }
 
-func (w *writer) kv(k, v string) {
+// KV writes "  key:  value" with the values aligned; an empty key continues
+// the value above.
+func (w *Text) KV(k, v string) {
 	if k != "" {
 		k += ":"
 	}
-	w.line(fmt.Sprintf("  %-12s %s", k, v))
+	w.Line(fmt.Sprintf("  %-12s %s", k, v))
 }
 
-func (w *writer) lines(block, indent string) {
+// Lines writes each line of block after indent.
+func (w *Text) Lines(block, indent string) {
 	for _, l := range strings.Split(strings.TrimRight(block, "\n"), "\n") {
-		w.line(indent + l)
+		w.Line(indent + l)
 	}
 }
 
-// para writes text as it is, line by line.
-func (w *writer) para(s string) { w.lines(s, "") }
+// Para writes text as it is, line by line.
+func (w *Text) Para(s string) { w.Lines(s, "") }
 
-// wrapped writes s word-wrapped to the report width after a first-line prefix.
-func (w *writer) wrapped(prefix, s string) {
+// Wrapped writes s word-wrapped to Width after a first-line prefix, the
+// following lines indented to match.
+func (w *Text) Wrapped(prefix, s string) {
 	pad := strings.Repeat(" ", utf8.RuneCountInString(prefix))
-	cur := prefix
+	cur, empty := prefix, true
 	for _, word := range strings.Fields(s) {
-		if utf8.RuneCountInString(cur)+1+utf8.RuneCountInString(word) > width && strings.TrimSpace(cur) != strings.TrimSpace(prefix) {
-			w.line(cur)
-			cur = pad
+		if !empty && utf8.RuneCountInString(cur)+1+utf8.RuneCountInString(word) > Width {
+			w.Line(cur)
+			cur, empty = pad, true
 		}
-		if cur == prefix || cur == pad {
-			cur += word
-		} else {
-			cur += " " + word
+		if !empty {
+			cur += " "
 		}
+		cur += word
+		empty = false
 	}
-	w.line(cur)
+	w.Line(cur)
 }
 
-// table is a plain text table with columns aligned left or right.
-type table struct {
-	head  []string
-	right []bool
+// Table is a plain-text table with a header, a rule, and columns aligned
+// left or right (Right[i]).
+type Table struct {
+	Head  []string
+	Right []bool
 	rows  [][]string
 }
 
-func (t *table) add(cells ...string) { t.rows = append(t.rows, cells) }
+// Add appends a row.
+func (t *Table) Add(cells ...string) { t.rows = append(t.rows, cells) }
 
-func (t *table) write(w *writer, indent string) {
-	widths := make([]int, len(t.head))
-	for i, h := range t.head {
+// Write writes the table, each line after indent.
+func (t *Table) Write(w *Text, indent string) {
+	widths := make([]int, len(t.Head))
+	for i, h := range t.Head {
 		widths[i] = utf8.RuneCountInString(h)
 	}
 	for _, r := range t.rows {
 		for i, c := range r {
-			if n := utf8.RuneCountInString(c); i < len(widths) && n > widths[i] {
-				widths[i] = n
+			if i < len(widths) {
+				widths[i] = max(widths[i], utf8.RuneCountInString(c))
 			}
 		}
 	}
@@ -95,11 +114,14 @@ func (t *table) write(w *writer, indent string) {
 		var b strings.Builder
 		b.WriteString(indent)
 		for i, c := range cells {
+			if i >= len(widths) {
+				break
+			}
 			if i > 0 {
 				b.WriteString("  ")
 			}
 			pad := strings.Repeat(" ", widths[i]-utf8.RuneCountInString(c))
-			if t.right[i] {
+			if i < len(t.Right) && t.Right[i] {
 				b.WriteString(pad + c)
 			} else {
 				b.WriteString(c + pad)
@@ -107,13 +129,13 @@ func (t *table) write(w *writer, indent string) {
 		}
 		return b.String()
 	}
-	w.line(row(t.head))
+	w.Line(row(t.Head))
 	rule := make([]string, len(widths))
 	for i, n := range widths {
 		rule[i] = strings.Repeat("-", n)
 	}
-	w.line(row(rule))
+	w.Line(row(rule))
 	for _, r := range t.rows {
-		w.line(row(r))
+		w.Line(row(r))
 	}
 }

@@ -5,7 +5,6 @@ import (
 	"io"
 	"strings"
 	"time"
-	"unicode/utf8"
 
 	"pierwise/geometry"
 	"pierwise/report"
@@ -32,78 +31,78 @@ func Report(out io.Writer, a *Analysis, now time.Time) error {
 	s := a.Storey
 	u := report.UnitsFor(s.Units)
 	d := a.Distribution
-	w := &textWriter{out: out}
+	w := report.NewText(out)
 
-	w.title("PIERWISE STOREY REPORT")
-	w.kv("Title", orDash(s.Title))
-	w.kv("File", s.Path)
-	w.kv("Date", now.Format("2006-01-02 15:04 MST"))
-	w.kv("Program", "pierwise "+Version)
-	w.kv("Units", unitsLine(s.Units, u))
-	w.kv("Method", "rigid diaphragm; direct shear by rigidity, torsion about R")
+	w.Title("PIERWISE STOREY REPORT")
+	w.KV("Title", orDash(s.Title))
+	w.KV("File", s.Path)
+	w.KV("Date", now.Format("2006-01-02 15:04 MST"))
+	w.KV("Program", "pierwise "+Version)
+	w.KV("Units", unitsLine(s.Units, u))
+	w.KV("Method", "rigid diaphragm; direct shear by rigidity, torsion about R")
 
-	w.section("1. Inputs")
-	w.kv("Shear", geometry.FormatForce(s.Shear, s.Units)+", applied along x and along y in turn")
-	w.kv("Mass centre", fmt.Sprintf("x = %s %s, y = %s %s", coord(u, s.MassCenter[0]), u.Coord, coord(u, s.MassCenter[1]), u.Coord))
-	w.kv("Plan", fmt.Sprintf("%s %s (x) × %s %s (y), origin at the south-west corner", coord(u, s.Size[0]), u.Coord, coord(u, s.Size[1]), u.Coord))
-	w.kv("Accidental", fmt.Sprintf("±%.3g %% of the plan size across the load (ASCE 7-22 §12.8.4.2)", 100*s.Accidental))
+	w.Section("1. Inputs")
+	w.KV("Shear", geometry.FormatForce(s.Shear, s.Units)+", applied along x and along y in turn")
+	w.KV("Mass centre", fmt.Sprintf("x = %s %s, y = %s %s", coord(u, s.MassCenter[0]), u.Coord, coord(u, s.MassCenter[1]), u.Coord))
+	w.KV("Plan", fmt.Sprintf("%s %s (x) × %s %s (y), origin at the south-west corner", coord(u, s.Size[0]), u.Coord, coord(u, s.Size[1]), u.Coord))
+	w.KV("Accidental", fmt.Sprintf("±%.3g %% of the plan size across the load (ASCE 7-22 §12.8.4.2)", 100*s.Accidental))
 	if a.Absolute {
-		w.kv("Rigidities", "R = E·t/d of each wall (classic method), "+u.Rigidity)
+		w.KV("Rigidities", "R = E·t/d of each wall (classic method), "+u.Rigidity)
 	} else {
-		w.kv("Rigidities", "relative rigidity × thickness (one E assumed for every wall)")
+		w.KV("Rigidities", "relative rigidity × thickness (one E assumed for every wall)")
 	}
-	w.blank()
-	t := &textTable{
-		head:  []string{"key", "wall", "file", "length", "height", "t"},
-		right: []bool{false, false, false, true, true, true},
+	w.Blank()
+	t := &report.Table{
+		Head:  []string{"key", "wall", "file", "length", "height", "t"},
+		Right: []bool{false, false, false, true, true, true},
 	}
 	for i, wl := range a.Walls {
-		t.add(string(WallKey(i)), wl.Name, wl.Ref.File, geometry.FormatLength(wl.Wall.Length, s.Units),
+		t.Add(string(WallKey(i)), wl.Name, wl.Ref.File, geometry.FormatLength(wl.Wall.Length, s.Units),
 			geometry.FormatLength(wl.Wall.Height, s.Units), geometry.FormatLength(wl.Wall.Thickness, s.Units))
 	}
-	t.write(w, "  ")
-	w.blank()
-	t = &textTable{
-		head:  []string{"key", "dir", "line " + u.Coord, "from " + u.Coord, "R rel", "R " + rigUnit(a, u)},
-		right: []bool{false, false, true, true, true, true},
+	t.Write(w, "  ")
+	w.Blank()
+	t = &report.Table{
+		Head:  []string{"key", "dir", "line " + u.Coord, "from " + u.Coord, "R rel", "R " + rigUnit(a, u)},
+		Right: []bool{false, false, true, true, true, true},
 	}
 	for i, wl := range a.Walls {
 		from := "centred"
 		if wl.Ref.HasStart {
 			from = coord(u, wl.Ref.Start)
 		}
-		t.add(string(WallKey(i)), wl.Ref.Direction.String(), coord(u, wl.Ref.Position), from,
+		t.Add(string(WallKey(i)), wl.Ref.Direction.String(), coord(u, wl.Ref.Position), from,
 			fmt.Sprintf("%.4f", wl.Unit.Rigidity), rigidity(a, u, wl.Rigidity))
 	}
-	t.write(w, "  ")
-	w.line("  line: y of an x-wall, x of a y-wall; from: where it begins along its line;")
-	w.line("  R rel: relative rigidity, 1/(E·t) units")
+	t.Write(w, "  ")
+	w.Line("  line: y of an x-wall, x of a y-wall; from: where it begins along its line;")
+	w.Line("  R rel: relative rigidity, 1/(E·t) units")
 
-	w.section("2. Plan (north up; = x-wall, | y-wall, M mass centre, R centre of rigidity)")
-	w.lines(Plan(s, a, 72, 20).String(), "  ")
-	w.line(fmt.Sprintf("  x from 0 to %s %s (east), y from 0 to %s %s (north)", coord(u, s.Size[0]), u.Coord, coord(u, s.Size[1]), u.Coord))
+	w.Section("2. Plan (north up; = x-wall, | y-wall, M mass centre, R centre of rigidity)")
+	w.Lines(Plan(s, a, 72, 20).String(), "  ")
+	w.Line(fmt.Sprintf("  x from 0 to %s %s (east), y from 0 to %s %s (north)", coord(u, s.Size[0]), u.Coord, coord(u, s.Size[1]), u.Coord))
 
-	w.section("3. Centre of rigidity and torsional rigidity")
-	w.kv("x_R", fmt.Sprintf("%s %s  (Σ R·x / Σ R over the y-walls, Σ R = %s %s)", num(u.CoordOf(d.CenterOfRigidity[X]), 2), u.Coord, rigidity(a, u, d.SumRigidity[Y]), rigUnit(a, u)))
-	w.kv("y_R", fmt.Sprintf("%s %s  (Σ R·y / Σ R over the x-walls, Σ R = %s %s)", num(u.CoordOf(d.CenterOfRigidity[Y]), 2), u.Coord, rigidity(a, u, d.SumRigidity[X]), rigUnit(a, u)))
-	w.kv("J", fmt.Sprintf("%s  (Σ R·d², all walls)", torsional(a, u, d.J)))
+	w.Section("3. Centre of rigidity and torsional rigidity")
+	w.KV("x_R", fmt.Sprintf("%s %s  (Σ R·x / Σ R over the y-walls, Σ R = %s %s)", num(u.CoordOf(d.CenterOfRigidity[X]), 2), u.Coord, rigidity(a, u, d.SumRigidity[Y]), rigUnit(a, u)))
+	w.KV("y_R", fmt.Sprintf("%s %s  (Σ R·y / Σ R over the x-walls, Σ R = %s %s)", num(u.CoordOf(d.CenterOfRigidity[Y]), 2), u.Coord, rigidity(a, u, d.SumRigidity[X]), rigUnit(a, u)))
+	w.KV("J", fmt.Sprintf("%s  (Σ R·d², all walls)", torsional(a, u, d.J)))
 
 	for _, c := range d.Cases {
 		across := c.Load.other()
 		e0 := float64(s.MassCenter[across]) - d.CenterOfRigidity[across]
-		w.section(fmt.Sprintf("4.%d Load along %s, case %s", caseNumber(c), c.Load, c.Name()))
+		w.Section(fmt.Sprintf("4.%d Load along %s, case %s", caseNumber(c), c.Load, c.Name()))
 		sign := "+"
 		if c.Sign < 0 {
 			sign = "-"
 		}
-		w.kv("e", fmt.Sprintf("%s_m - %s_R %s accidental = %s %s %s = %s %s",
+		w.KV("e", fmt.Sprintf("%s_m - %s_R %s accidental = %s %s %s = %s %s",
 			across, across, sign, num(u.CoordOf(e0), 2), sign, num(u.CoordOf(d.AccidentalEccentricity[c.Load]), 2), num(u.CoordOf(c.Eccentricity), 2), u.Coord))
-		w.kv("V·e", fmt.Sprintf("%s %s", num(u.MomentOf(c.Torque), 1), u.Moment))
-		w.kv("Shears", u.Force+"; d from the centre of rigidity across the wall's line")
-		w.blank()
-		t := &textTable{
-			head:  []string{"key", "wall", "dir", "d " + u.Coord, "direct", "torsion", "total"},
-			right: []bool{false, false, false, true, true, true, true},
+		w.KV("V·e", fmt.Sprintf("%s %s", num(u.MomentOf(c.Torque), 1), u.Moment))
+		w.KV("Shears", u.Force+"; d from the centre of rigidity across the wall's line")
+		w.Blank()
+		t := &report.Table{
+			Head:  []string{"key", "wall", "dir", "d " + u.Coord, "direct", "torsion", "total"},
+			Right: []bool{false, false, false, true, true, true, true},
 		}
 		for i, wl := range a.Walls {
 			sh := c.Shares[i]
@@ -111,69 +110,69 @@ func Report(out io.Writer, a *Analysis, now time.Time) error {
 			if wl.Ref.Direction == c.Load {
 				direct = num(u.ForceOf(geometry.Force(sh.Direct)), 2)
 			}
-			t.add(string(WallKey(i)), wl.Name, wl.Ref.Direction.String(), num(u.CoordOf(d.Distance[i]), 2), direct,
+			t.Add(string(WallKey(i)), wl.Name, wl.Ref.Direction.String(), num(u.CoordOf(d.Distance[i]), 2), direct,
 				num(u.ForceOf(geometry.Force(sh.Torsional)), 2), num(u.ForceOf(geometry.Force(sh.Total())), 2))
 		}
-		t.write(w, "  ")
+		t.Write(w, "  ")
 	}
 
-	w.section("5. Design shears (the worst case of each wall, never below its direct shear)")
-	t = &textTable{
-		head:  []string{"key", "wall", "dir", "direct " + u.Force, "design " + u.Force, "governs", "of V"},
-		right: []bool{false, false, false, true, true, false, true},
+	w.Section("5. Design shears (the worst case of each wall, never below its direct shear)")
+	t = &report.Table{
+		Head:  []string{"key", "wall", "dir", "direct " + u.Force, "design " + u.Force, "governs", "of V"},
+		Right: []bool{false, false, false, true, true, false, true},
 	}
 	for i, wl := range a.Walls {
-		t.add(string(WallKey(i)), wl.Name, wl.Ref.Direction.String(), num(u.ForceOf(geometry.Force(wl.Design.Direct)), 2),
+		t.Add(string(WallKey(i)), wl.Name, wl.Ref.Direction.String(), num(u.ForceOf(geometry.Force(wl.Design.Direct)), 2),
 			num(u.ForceOf(geometry.Force(wl.Design.Shear)), 2), CaseName(d, wl.Design.Case), fmt.Sprintf("%.1f %%", 100*wl.Design.Shear/float64(s.Shear)))
 	}
-	t.write(w, "  ")
-	w.line("  Torsional shear is taken with its sign; where torsion would relieve a wall,")
-	w.line("  the direct shear alone governs (\"direct\").")
+	t.Write(w, "  ")
+	w.Line("  Torsional shear is taken with its sign; where torsion would relieve a wall,")
+	w.Line("  the direct shear alone governs (\"direct\").")
 
-	w.section("6. Walls under their design shears")
+	w.Section("6. Walls under their design shears")
 	for i, wl := range a.Walls {
 		res := wl.Loaded
-		w.blank()
-		w.line(fmt.Sprintf("%c  %s (%s), design shear %s, case %s", WallKey(i), wl.Name, wl.Ref.File,
+		w.Blank()
+		w.Line(fmt.Sprintf("%c  %s (%s), design shear %s, case %s", WallKey(i), wl.Name, wl.Ref.File,
 			geometry.FormatForce(geometry.Force(wl.Design.Shear), s.Units), CaseName(d, wl.Design.Case)))
-		w.blank()
-		w.lines(sketch.Elevation(wl.Wall, res, 60, 12).String(), "   ")
-		w.blank()
+		w.Blank()
+		w.Lines(sketch.Elevation(wl.Wall, res, 60, 12).String(), "   ")
+		w.Blank()
 		leaves := res.Leaves()
 		if len(leaves) == 0 {
-			w.line("   solid wall: no piers; it takes the whole design shear")
+			w.Line("   solid wall: no piers; it takes the whole design shear")
 		} else {
-			t := &textTable{
-				head:  []string{"pier", "h", "L", "h/L", "support", "share", "V " + u.Force, "M " + u.Moment},
-				right: []bool{false, true, true, true, false, true, true, true},
+			t := &report.Table{
+				Head:  []string{"pier", "h", "L", "h/L", "support", "share", "V " + u.Force, "M " + u.Moment},
+				Right: []bool{false, true, true, true, false, true, true, true},
 			}
 			for _, p := range leaves {
-				t.add(p.Name, geometry.FormatLength(geometry.Length(p.H()), s.Units), geometry.FormatLength(geometry.Length(p.L()), s.Units),
+				t.Add(p.Name, geometry.FormatLength(geometry.Length(p.H()), s.Units), geometry.FormatLength(geometry.Length(p.L()), s.Units),
 					fmt.Sprintf("%.2f", p.Ratio()), supportName(p.Support), fmt.Sprintf("%.1f %%", 100*p.Share),
 					num(u.ForceOf(p.Shear), 2), num(u.MomentOf(p.Moment), 1))
 			}
-			t.write(w, "   ")
+			t.Write(w, "   ")
 		}
 		if res.DeflectionAbs > 0 {
-			w.line(fmt.Sprintf("   top deflection under the design shear: %s %s (elastic)", num(u.DeflectionOf(res.DeflectionAbs), 4), u.Deflection))
+			w.Line(fmt.Sprintf("   top deflection under the design shear: %s %s (elastic)", num(u.DeflectionOf(res.DeflectionAbs), 4), u.Deflection))
 		}
 		for _, msg := range res.Warnings {
-			w.wrapped("   ! ", msg)
+			w.Wrapped("   ! ", msg)
 		}
 	}
 
-	w.section("7. Warnings")
+	w.Section("7. Warnings")
 	if len(a.Warnings) == 0 {
-		w.line("  none for the storey (see each wall above for its own)")
+		w.Line("  none for the storey (see each wall above for its own)")
 	}
 	for _, msg := range a.Warnings {
-		w.wrapped("  ! ", msg)
+		w.Wrapped("  ! ", msg)
 	}
-	w.line("  ! The diaphragm is assumed rigid; a flexible diaphragm shares the shear by")
-	w.line("    tributary area instead.")
-	w.blank()
-	w.lines(report.Caution, "")
-	return w.err
+	w.Line("  ! The diaphragm is assumed rigid; a flexible diaphragm shares the shear by")
+	w.Line("    tributary area instead.")
+	w.Blank()
+	w.Lines(report.Caution, "")
+	return w.Err()
 }
 
 // CaseName names case i of d, or "direct" for -1.
@@ -247,105 +246,4 @@ func torsional(a *Analysis, u report.Units, j float64) string {
 		return num(u.MomentOf(j), 0) + " " + u.Moment + " per radian"
 	}
 	return fmt.Sprintf("%.4g (relative × t) %s³", u.CoordOf(u.CoordOf(u.CoordOf(j))), u.Coord)
-}
-
-// textWriter writes report lines and keeps the first error.
-type textWriter struct {
-	out io.Writer
-	err error
-}
-
-const reportWidth = 78
-
-func (w *textWriter) line(s string) {
-	if w.err != nil {
-		return
-	}
-	_, w.err = fmt.Fprintln(w.out, strings.TrimRight(s, " "))
-}
-
-func (w *textWriter) blank() { w.line("") }
-
-func (w *textWriter) title(s string) {
-	w.line(s)
-	w.line(strings.Repeat("=", utf8.RuneCountInString(s)))
-}
-
-func (w *textWriter) section(s string) {
-	w.blank()
-	w.line(s)
-	w.line(strings.Repeat("-", min(utf8.RuneCountInString(s), reportWidth)))
-}
-
-func (w *textWriter) kv(k, v string) { w.line(fmt.Sprintf("  %-12s %s", k+":", v)) }
-
-func (w *textWriter) lines(block, indent string) {
-	for _, l := range strings.Split(strings.TrimRight(block, "\n"), "\n") {
-		w.line(indent + l)
-	}
-}
-
-// wrapped writes s word-wrapped to the report width after a prefix.
-func (w *textWriter) wrapped(prefix, s string) {
-	pad := strings.Repeat(" ", utf8.RuneCountInString(prefix))
-	cur, empty := prefix, true
-	for _, word := range strings.Fields(s) {
-		if !empty && utf8.RuneCountInString(cur)+1+utf8.RuneCountInString(word) > reportWidth {
-			w.line(cur)
-			cur, empty = pad, true
-		}
-		if empty {
-			cur += word
-			empty = false
-		} else {
-			cur += " " + word
-		}
-	}
-	w.line(cur)
-}
-
-// textTable is a plain table with columns aligned left or right.
-type textTable struct {
-	head  []string
-	right []bool
-	rows  [][]string
-}
-
-func (t *textTable) add(cells ...string) { t.rows = append(t.rows, cells) }
-
-func (t *textTable) write(w *textWriter, indent string) {
-	widths := make([]int, len(t.head))
-	for i, h := range t.head {
-		widths[i] = utf8.RuneCountInString(h)
-	}
-	for _, r := range t.rows {
-		for i, c := range r {
-			widths[i] = max(widths[i], utf8.RuneCountInString(c))
-		}
-	}
-	row := func(cells []string) string {
-		var b strings.Builder
-		b.WriteString(indent)
-		for i, c := range cells {
-			if i > 0 {
-				b.WriteString("  ")
-			}
-			pad := strings.Repeat(" ", widths[i]-utf8.RuneCountInString(c))
-			if t.right[i] {
-				b.WriteString(pad + c)
-			} else {
-				b.WriteString(c + pad)
-			}
-		}
-		return b.String()
-	}
-	w.line(row(t.head))
-	rule := make([]string, len(widths))
-	for i, n := range widths {
-		rule[i] = strings.Repeat("-", n)
-	}
-	w.line(row(rule))
-	for _, r := range t.rows {
-		w.line(row(r))
-	}
 }
