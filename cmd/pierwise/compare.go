@@ -27,9 +27,7 @@ func runCompare(e *env, args []string) error {
 	fs := newFlags(e, "compare")
 	outPath := fs.String("o", "", "write the comparison report to `OUT` instead of standard output")
 	var ff feFlags
-	fs.BoolVar(&ff.on, "fe", false, "also run the finite-element check on every layout")
-	fs.StringVar(&ff.mesh, "mesh", "", "maximum element size of the finite-element mesh, e.g. 6in or 150mm")
-	fs.StringVar(&ff.element, "element", "", "finite-element type: qm6 (default) or q4")
+	ff.register(fs, "also run the finite-element check on every layout")
 	pos, err := parseInterleaved(fs, args)
 	if err != nil {
 		return err
@@ -41,9 +39,7 @@ func runCompare(e *env, args []string) error {
 	if err != nil {
 		return err
 	}
-	if ff.mesh != "" || ff.element != "" {
-		ff.on = true
-	}
+	ff.implied()
 	var opt study.Options
 	if ff.on {
 		opt.FE = true

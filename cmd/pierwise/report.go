@@ -25,9 +25,7 @@ func runReport(e *env, args []string) error {
 	fs := newFlags(e, "report")
 	outPath := fs.String("o", "", "write the report to this file (atomically) instead of standard output")
 	var ff feFlags
-	fs.BoolVar(&ff.on, "fe", false, "include the finite-element check")
-	fs.StringVar(&ff.mesh, "mesh", "", "maximum element size of the finite-element mesh")
-	fs.StringVar(&ff.element, "element", "", "finite-element type: qm6 (default) or q4")
+	ff.register(fs, "include the finite-element check")
 	files, err := parseInterleaved(fs, args)
 	if err != nil {
 		return err
@@ -35,9 +33,7 @@ func runReport(e *env, args []string) error {
 	if len(files) > 1 {
 		return usagef("report takes one FILE, got %d", len(files))
 	}
-	if ff.mesh != "" || ff.element != "" {
-		ff.on = true
-	}
+	ff.implied()
 	arg := ""
 	if len(files) == 1 {
 		arg = files[0]

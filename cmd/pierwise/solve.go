@@ -3,6 +3,7 @@ package main
 import (
 	"encoding/json"
 	"errors"
+	"flag"
 	"fmt"
 	"io"
 	"strconv"
@@ -30,6 +31,21 @@ type feFlags struct {
 	on      bool
 	mesh    string
 	element string
+}
+
+// register adds --fe, --mesh and --element to fs; what names the check in
+// the help of --fe ("also run the finite-element check", …).
+func (f *feFlags) register(fs *flag.FlagSet, what string) {
+	fs.BoolVar(&f.on, "fe", false, what)
+	fs.StringVar(&f.mesh, "mesh", "", "maximum element size of the finite-element mesh, e.g. 6in or 150mm (implies --fe)")
+	fs.StringVar(&f.element, "element", "", "finite-element type: qm6 (default) or q4 (implies --fe)")
+}
+
+// implied turns the check on when --mesh or --element was given.
+func (f *feFlags) implied() {
+	if f.mesh != "" || f.element != "" {
+		f.on = true
+	}
 }
 
 func (f *feFlags) options(w *geometry.Wall) (fe.Options, error) {
@@ -87,16 +103,12 @@ func runSolve(e *env, args []string) error {
 	fs := newFlags(e, "solve")
 	asJSON := fs.Bool("json", false, "print JSON")
 	var ff feFlags
-	fs.BoolVar(&ff.on, "fe", false, "also run the finite-element check")
-	fs.StringVar(&ff.mesh, "mesh", "", "maximum element size of the finite-element mesh, e.g. 6in or 150mm")
-	fs.StringVar(&ff.element, "element", "", "finite-element type: qm6 (default) or q4")
+	ff.register(fs, "also run the finite-element check")
 	files, err := parseInterleaved(fs, args)
 	if err != nil {
 		return err
 	}
-	if (ff.mesh != "" || ff.element != "") && !ff.on {
-		ff.on = true
-	}
+	ff.implied()
 	if len(files) == 0 {
 		files = []string{""}
 	}
