@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"math"
 	"math/rand/v2"
+	"path/filepath"
 	"testing"
 
 	"pierwise/geometry"
@@ -415,6 +416,36 @@ func TestConcurrent(t *testing.T) {
 	for range 4 {
 		if err := <-errs; err != nil {
 			t.Error(err)
+		}
+	}
+}
+
+// TestConvergenceWallFiles: the same convergence check (issue 3) on the
+// example wall files of the project (testdata/walls).
+func TestConvergenceWallFiles(t *testing.T) {
+	files, err := filepath.Glob("../../testdata/walls/*.toml")
+	if err != nil || len(files) == 0 {
+		t.Skipf("no example wall files: %v", err)
+	}
+	for _, f := range files {
+		w, err := geometry.LoadFile(f)
+		if err != nil {
+			t.Logf("%s: %v (skipped)", f, err)
+			continue
+		}
+		classic, _ := pier.Solve(w) // nil on error: no shares, same model
+		a, err := Solve(w, classic, Options{})
+		if err != nil {
+			t.Errorf("%s: %v", f, err)
+			continue
+		}
+		b, err := Solve(w, classic, Options{Mesh: a.Mesh / 2})
+		if err != nil {
+			t.Errorf("%s: %v", f, err)
+			continue
+		}
+		if rel := math.Abs(a.Deflection/b.Deflection - 1); rel > 0.01 {
+			t.Errorf("%s: qm6 %.6g at the default mesh, %.6g at half size (%.2f %%)", f, a.Deflection, b.Deflection, 100*rel)
 		}
 	}
 }
