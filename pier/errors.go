@@ -1,6 +1,11 @@
 package pier
 
-import "fmt"
+import (
+	"fmt"
+	"strings"
+
+	"pierwise/geometry"
+)
 
 // CutError says that the openings leave no continuous solid path from the
 // base of a region to its top: the wall (or a pier) has no load path and no
@@ -17,13 +22,16 @@ func (e *CutError) Error() string {
 // StaggeredError says that a band has no pier: staggered openings together
 // cover the band's whole length, which the classic method cannot represent.
 type StaggeredError struct {
-	Region   string   // "wall" or a pier name
-	Y0, Y1   float64  // the band, metres
-	Openings []string // the openings of the band
+	Region   string          // "wall" or a pier name
+	Y0, Y1   float64         // the band, metres
+	Openings []string        // the openings of the band
+	Units    geometry.System // how the message shows the heights (the wall's units)
 }
 
 func (e *StaggeredError) Error() string {
-	return fmt.Sprintf("openings %v are staggered across the whole length of the %s between heights %.3g m and %.3g m: the classic method has no pier to work with there; use the finite-element check", e.Openings, regionName(e.Region), e.Y0, e.Y1)
+	return fmt.Sprintf("openings %s are staggered across the whole length of the %s between heights %s and %s: the classic method has no pier to work with there; use the finite-element check",
+		strings.Join(e.Openings, ", "), regionName(e.Region),
+		geometry.FormatLength(geometry.Length(e.Y0), e.Units), geometry.FormatLength(geometry.Length(e.Y1), e.Units))
 }
 
 func regionName(r string) string {

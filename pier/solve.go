@@ -30,6 +30,7 @@ type solver struct {
 	p      Params
 	eps    float64 // absolute tolerance, metres
 	thick  float64 // wall thickness, metres (0 when unknown)
+	units  geometry.System
 	res    *Result
 	parent []int // per pier: index of the parent pier, -1 at the top level
 }
@@ -64,6 +65,7 @@ func Solve(w *geometry.Wall) (*Result, error) {
 		p:     p,
 		eps:   tolerance * math.Max(wall.W(), wall.H()),
 		thick: float64(w.Thickness),
+		units: w.Units,
 		res: &Result{
 			Moduli: mod,
 			// Typical layouts have about one pier per opening and a few
@@ -76,7 +78,7 @@ func Solve(w *geometry.Wall) (*Result, error) {
 	if name, cut := s.cutAcross(wall, ops); cut {
 		return nil, &CutError{Region: "wall", Opening: name}
 	}
-	d, cut, err := s.region(wall, w.Support, ops, "wall", -1)
+	d, cut, err := s.region(wall, w.Support, ops, "wall", -1, 0)
 	if err != nil {
 		return nil, err
 	}
@@ -124,10 +126,13 @@ func (r *Result) Leaves() []Pier {
 
 // region returns the relative deflection of rect with the openings ops
 // (clipped to it) under the given support: §3 steps 1–4. name is "wall" or
-// the pier's name, self the pier's index (-1 for the wall). cut reports a
-// region with no load path (no rigidity); its steps and sub-piers are
-// dropped.
-func (s *solver) region(rect geometry.Rect, sup geometry.Support, ops []opening, name string, self int) (d Parts, cut bool, err error) {
+// the pier's name, self the pier's index (-1 for the wall). above is the
+// depth of solid wall directly over rect outside it (up to the next band of
+// the enclosing regions; 0 for the wall), so that the spandrel warnings of
+// a pier's own bands measure the whole spandrel, not only its part inside
+// the pier. cut reports a region with no load path (no rigidity); its steps
+// and sub-piers are dropped.
+func (s *solver) region(rect geometry.Rect, sup geometry.Support, ops []opening, name string, self int, above float64) (d Parts, cut bool, err error) {
 	solid := Element(rect.H(), rect.W(), sup, s.p)
 	if len(ops) == 0 {
 		return solid, false, nil // step 1
@@ -165,9 +170,15 @@ func (s *solver) region(rect geometry.Rect, sup geometry.Support, ops []opening,
 
 		spans, allCuts := s.piersOf(rect, b, ops)
 		if len(spans) == 0 {
-			return Parts{}, false, &StaggeredError{Region: name, Y0: b.y0, Y1: b.y1, Openings: bandNames(b, ops)}
+			return Parts{}, false, &StaggeredError{Region: name, Y0: b.y0, Y1: b.y1, Openings: bandNames(b, ops), Units: s.units}
 		}
-		s.spandrels(rect, bands, bi, name, ops)
+		s.spandrels(rect, bands, bi, name, ops, above)
+		// The solid over this band's piers: up to the next band, or to the
+		// region's top and on through what lies over the region.
+		pierAbove := rect.Y1 + above - b.y1
+		if bi+1 < len(bands) {
+			pierAbove = bands[bi+1].y0 - b.y1
+		}
 
 		idx := make([]int, 0, len(spans))
 		names := make([]string, 0, len(spans))
@@ -184,7 +195,7 @@ func (s *solver) region(rect geometry.Rect, sup geometry.Support, ops []opening,
 				Name: pname, Parent: parentName, Rect: sp.rect, Support: bandSup, Leaf: len(sp.ops) == 0,
 			})
 			s.parent = append(s.parent, self)
-			pd, pcut, err := s.region(sp.rect, bandSup, sp.ops, pname, k)
+			pd, pcut, err := s.region(sp.rect, bandSup, sp.ops, pname, k, pierAbove)
 			if err != nil {
 				return Parts{}, false, err
 			}

@@ -30,24 +30,42 @@ func (s *solver) warn(msg string) {
 
 // spandrels warns when the solid above or below band bi of a region is
 // shallower than the band's piers, which the method assumes it fixes
-// against rotation.
-func (s *solver) spandrels(rect geometry.Rect, bands []band, bi int, region string, ops []opening) {
+// against rotation. above is the solid over the region (see region), part
+// of the spandrel of the region's top band.
+func (s *solver) spandrels(rect geometry.Rect, bands []band, bi int, region string, ops []opening, above float64) {
 	b := bands[bi]
 	h := b.y1 - b.y0
-	top := rect.Y1
+	top := rect.Y1 + above
 	if bi+1 < len(bands) {
 		top = bands[bi+1].y0
 	}
-	if depth := top - b.y1; depth > s.eps && depth < h {
-		s.warn(fmt.Sprintf("in %s the spandrel above the openings %s is %.2f times as deep as the piers beside them are tall: it is assumed to keep them from rotating, which a shallow spandrel does not do, so their rigidity is overestimated",
-			where(region), s.bandNames(b, ops), depth/h))
+	if depth := top - b.y1; depth > s.eps && depth < h-s.eps {
+		s.warn(fmt.Sprintf("in %s the spandrel above %s is %.2f times as deep as the piers beside %s are tall: it is assumed to keep them from rotating, which a shallow spandrel does not do, so their rigidity is overestimated",
+			where(region), s.openingsPhrase(b, ops), depth/h, themOrIt(b)))
 	}
 	if bi > 0 {
-		if depth := b.y0 - bands[bi-1].y1; depth < h {
-			s.warn(fmt.Sprintf("in %s the solid between the openings %s and %s below is %.2f times as deep as the piers above it are tall: it is assumed rigid, which it is not",
-				where(region), s.bandNames(b, ops), s.bandNames(bands[bi-1], ops), depth/h))
+		if depth := b.y0 - bands[bi-1].y1; depth < h-s.eps {
+			s.warn(fmt.Sprintf("in %s the solid between %s and %s below is %.2f times as deep as the piers above it are tall: it is assumed rigid, which it is not",
+				where(region), s.openingsPhrase(b, ops), s.bandNames(bands[bi-1], ops), depth/h))
 		}
 	}
+}
+
+// openingsPhrase names a band's openings in a sentence: "the opening W1",
+// "the openings W1, W2".
+func (s *solver) openingsPhrase(b band, ops []opening) string {
+	if len(b.ops) == 1 {
+		return "the opening " + s.bandNames(b, ops)
+	}
+	return "the openings " + s.bandNames(b, ops)
+}
+
+// themOrIt is the pronoun for a band's openings.
+func themOrIt(b band) string {
+	if len(b.ops) == 1 {
+		return "it"
+	}
+	return "them"
 }
 
 // where names a region in a sentence: "the wall" or "pier P2".

@@ -1,0 +1,69 @@
+package pier
+
+import (
+	"strings"
+	"testing"
+
+	"pierwise/geometry"
+)
+
+// TestNestedSpandrelMeasuredToTheNextOpening checks that the spandrel over
+// the openings inside a pier is measured through the pier's top into the
+// solid wall above it, up to the next opening or the wall's top: the cut at
+// the pier's top is a line of the method, not an edge of the masonry.
+func TestNestedSpandrelMeasuredToTheNextOpening(t *testing.T) {
+	// Masonry Chronicles wall (DESIGN §3): the window W1 (head at 6 ft) sits
+	// in pier P2 (0–8 ft) of a 16 ft wall, so 10 ft of wall lie over it,
+	// more than the 4 ft height of the piers beside it: no warning. Before
+	// the fix only the 2 ft inside P2 counted (ratio 0.50).
+	r, err := Solve(chronicles())
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, m := range r.Warnings {
+		if strings.Contains(m, "spandrel above the opening W1") {
+			t.Errorf("unexpected warning %q: 10 ft of wall lie over W1", m)
+		}
+	}
+
+	// A shallow one still warns, with the whole depth: 20 ft × 10 ft
+	// cantilever, door O1 (x 10–14 ft, 0–9 ft 8 in) and window O2 (x 2–6
+	// ft, sill 3 ft, 4 ft high) inside pier P1 (0–9 ft 8 in). Over O2: 2 ft 8
+	// in inside P1 plus 4 in above it, 3 ft in all, against piers 4 ft
+	// tall: 0.75 (arithmetic).
+	w := wallFt(20, 10, geometry.Cantilever, [4]float64{10, 0, 4, 9 + 8.0/12}, [4]float64{2, 3, 4, 4})
+	r, err = Solve(w)
+	if err != nil {
+		t.Fatal(err)
+	}
+	all := strings.Join(r.Warnings, "\n")
+	if !strings.Contains(all, "in pier P1 the spandrel above the opening O2 is 0.75 times") {
+		t.Errorf("warnings %q, want the spandrel over O2 in P1 at 0.75", all)
+	}
+	// One opening reads in the singular: a window 8 ft tall under a 1 ft
+	// spandrel.
+	r, err = Solve(wallFt(20, 12, geometry.Cantilever, [4]float64{6, 3, 4, 8}))
+	if err != nil {
+		t.Fatal(err)
+	}
+	if all := strings.Join(r.Warnings, "\n"); !strings.Contains(all, "the spandrel above the opening O1 is 0.1") {
+		t.Errorf("warnings %q, want the singular for O1", all)
+	}
+}
+
+// TestStaggeredMessageInWallUnits checks that the staggered-band message
+// shows its heights in the wall's own units and lists the openings plainly
+// (the band of these invented windows runs from 2 ft to 7 ft).
+func TestStaggeredMessageInWallUnits(t *testing.T) {
+	w := wallFt(10, 10, geometry.Cantilever, [4]float64{0, 2, 5, 2}, [4]float64{6, 3.5, 4, 2}, [4]float64{5, 5, 1, 2})
+	_, err := Solve(w)
+	want := `openings O1, O2, O3 are staggered across the whole length of the wall between heights 2'-0" and 7'-0"`
+	if err == nil || !strings.Contains(err.Error(), want) {
+		t.Errorf("err = %v, want it to contain %q", err, want)
+	}
+	w.Units = geometry.SI
+	_, err = Solve(w)
+	if want := "between heights 0.610 m and 2.134 m"; err == nil || !strings.Contains(err.Error(), want) {
+		t.Errorf("err = %v, want it to contain %q", err, want)
+	}
+}
