@@ -205,8 +205,8 @@ func Parse(filename string, data []byte) (*Storey, error) {
 			if l, ok := p.length(v, "wall.position", s.Units); ok {
 				ref.Position = l
 				if sizeOK && !inside(l, s.Size[across]) {
-					p.errorf("wall.position", "%s is off the plan: a %s-wall's position is its %s, from 0 to %s",
-						fmtLen(l, s.Units), ref.Direction, across, fmtLen(s.Size[across], s.Units))
+					p.errorf("wall.position", "%s is off the plan: %s-wall's position is its %s, from 0 to %s",
+						fmtLen(l, s.Units), article(ref.Direction), across, fmtLen(s.Size[across], s.Units))
 				}
 			}
 		}
@@ -226,6 +226,14 @@ func Parse(filename string, data []byte) (*Storey, error) {
 		return nil, p.errs
 	}
 	return s, nil
+}
+
+// article returns the direction with its indefinite article: "an x", "a y".
+func article(d Direction) string {
+	if d == X {
+		return "an x"
+	}
+	return "a y"
 }
 
 // inside reports whether 0 ≤ v ≤ size, with a little slack for rounding in
