@@ -39,6 +39,10 @@ func Parse(filename string, data []byte) (w *Wall, err error) {
 		return nil, ErrorList{{File: filename, Msg: "not valid TOML: " + err.Error()}}
 	}
 	p := &fileParser{file: filename, lines: scanKeyLines(string(data)), bad: map[string]bool{}}
+	if e := storeyFile(raw, p.lines); e != nil {
+		e.File = filename
+		return nil, ErrorList{e}
+	}
 	w = p.wall(raw)
 	for _, e := range errorList(w.Validate()) {
 		if !p.hidden(e.Key) {
@@ -56,6 +60,29 @@ func Parse(filename string, data []byte) (w *Wall, err error) {
 		return nil, p.errs
 	}
 	return w, nil
+}
+
+// storeyFile recognises a storey file (DESIGN §10: a [storey] table or
+// [[wall]] entries, and none of a wall's sizes) handed over as a wall file,
+// and returns one error that says so instead of a list of unknown and
+// missing keys.
+func storeyFile(raw map[string]any, lines keyLines) *Error {
+	_, st := raw["storey"]
+	_, wl := raw["wall"]
+	if !st && !wl {
+		return nil
+	}
+	for _, k := range []string{"length", "height", "opening"} {
+		if _, ok := raw[k]; ok {
+			return nil // a wall file with a stray key: report it as such
+		}
+	}
+	key := "storey"
+	if !st {
+		key = "wall"
+	}
+	return &Error{Line: lines.find(key), Key: key,
+		Msg: "this is a storey file ([storey] and [[wall]]), not a wall file: use it with pierwise storey or pierwise report"}
 }
 
 // LoadFile reads and parses the wall file at path. (It cannot be called

@@ -109,6 +109,9 @@ func (kl keyLines) find(key string) int {
 		if n, ok := kl[key]; ok {
 			return n
 		}
+		if n, ok := kl[key+"[1]"]; ok {
+			return n // an array of tables: its first table
+		}
 		i := strings.LastIndexAny(key, ".[")
 		if i < 0 {
 			break

@@ -1,0 +1,29 @@
+package geometry
+
+import (
+	"errors"
+	"strings"
+	"testing"
+)
+
+// A storey file (DESIGN §10) given where a wall file is expected gets one
+// error that says what it is, at the [storey] line, instead of a list of
+// unknown and missing keys; a wall file with a stray [[wall]] table is still
+// a wall file with an unknown key.
+func TestStoreyFileIsNotAWall(t *testing.T) {
+	storey := "title = \"t\"\nunits = \"us\"\n\n[storey]\nshear = \"100kip\"\n\n[[wall]]\nfile = \"a.toml\"\n"
+	_, err := Parse("plan.toml", []byte(storey))
+	var l ErrorList
+	if !errors.As(err, &l) || len(l) != 1 {
+		t.Fatalf("err = %v, want one error", err)
+	}
+	if e := l[0]; e.File != "plan.toml" || e.Line != 4 || e.Key != "storey" || !strings.Contains(e.Msg, "storey file") {
+		t.Errorf("got %q (line %d, key %q), want line 4, key storey, saying it is a storey file", e, e.Line, e.Key)
+	}
+
+	wall := "length = \"10ft\"\nheight = \"10ft\"\nthickness = \"8in\"\n[material]\nstrength = \"2000psi\"\n[[wall]]\nfile = \"a\"\n"
+	_, err = Parse("w.toml", []byte(wall))
+	if !errors.As(err, &l) || len(l) != 1 || l[0].Line != 6 || !strings.Contains(l[0].Msg, `unknown key "wall"`) {
+		t.Errorf("err = %v, want the unknown key wall at line 6", err)
+	}
+}
