@@ -268,6 +268,9 @@ func parseFeetInches(t string) (float64, string) {
 	if feet < 0 || inches < 0 {
 		return 0, "put a minus sign only in front of the whole value"
 	}
+	if strings.Contains(t, "'") && inches >= 12 {
+		return 0, inchesOver12(feet, inches)
+	}
 	v := (feet*12 + inches) * float64(Inch)
 	if math.IsInf(v, 0) || math.IsNaN(v) {
 		return 0, "out of range"
@@ -369,11 +372,21 @@ func feetThenInches(feet float64, unit string) (v float64, ok bool, msg string) 
 	if feet < 0 || in < 0 {
 		return 0, true, "put a minus sign only in front of the whole value"
 	}
+	if in >= 12 {
+		return 0, true, inchesOver12(feet, in)
+	}
 	v = (feet*12 + in) * float64(Inch)
 	if math.IsInf(v, 0) {
 		return 0, true, "out of range"
 	}
 	return v, true, ""
+}
+
+// inchesOver12 explains why 12'-13" is refused: after the feet, the inches
+// are a remainder below 12, and 13 is most likely a typing slip.
+func inchesOver12(feet, inches float64) string {
+	return "the inches after the feet must be less than 12 (did you mean " +
+		FormatLength(Length((feet*12+inches)*float64(Inch)), US) + "?)"
 }
 
 func checkUnitText(u string) string {

@@ -131,6 +131,11 @@ func TestParseLengthErrors(t *testing.T) {
 		{`6 1/0"`, "zero denominator"},
 		{"1/0 in", "zero denominator"},
 		{`1e400'`, "out of range"},
+		// After the feet the inches are a remainder: 12'-13" is a slip
+		// (common practice writes 13'-1").
+		{`12'-13"`, `less than 12 (did you mean 13'-1"?)`},
+		{`12'12"`, "less than 12"},
+		{"12ft 12in", "less than 12"},
 	}
 	for _, c := range cases {
 		_, err := ParseLength(c.in, US)
