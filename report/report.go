@@ -93,7 +93,7 @@ func Wall(out io.Writer, in Input) error {
 	w.Section(fmt.Sprintf("%d. Warnings", n))
 	warns := append([]string(nil), res.Warnings...)
 	if in.FE != nil && math.Abs(in.FE.Difference) > fe.WarnDifference {
-		warns = append(warns, fmt.Sprintf("The classic method's rigidity differs from the finite-element model's by %+.0f %% (more than %.0f %%): the piers are not as well fixed as the method assumes; prefer the finite-element rigidity for distributing shear, or justify the difference.", 100*in.FE.Difference, 100*fe.WarnDifference))
+		warns = append(warns, fmt.Sprintf("The classic method's rigidity differs from the finite-element model's by %+.0f %% (more than ±%.0f %%): the piers are not as well fixed as the method assumes; prefer the finite-element rigidity for distributing shear, or justify the difference.", 100*in.FE.Difference, 100*fe.WarnDifference))
 	}
 	if len(warns) == 0 {
 		w.Line("  none")
@@ -247,7 +247,7 @@ func feSection(w *Text, r *fe.Result, res *pier.Result, wall *geometry.Wall) {
 	if res == nil {
 		return
 	}
-	w.KV("Classic/FE", fmt.Sprintf("the classic rigidity is %+.1f %% of the model's", 100*r.Difference))
+	w.KV("Classic/FE", "the classic rigidity is "+ClassicVersusFE(r.Difference)+" the model's")
 	if len(r.Piers) == 0 {
 		return
 	}

@@ -2,6 +2,8 @@ package report
 
 import (
 	"bytes"
+	"fmt"
+	"math"
 	"strings"
 	"testing"
 	"time"
@@ -9,6 +11,7 @@ import (
 	"pierwise/demo"
 	"pierwise/geometry"
 	"pierwise/pier"
+	"pierwise/pier/fe"
 )
 
 var reportTime = time.Date(2026, 12, 1, 9, 30, 0, 0, time.UTC)
@@ -74,5 +77,51 @@ func TestWallReportCutWall(t *testing.T) {
 	}
 	if strings.Contains(got, "NaN") || strings.Contains(got, "Inf") {
 		t.Errorf("cut wall report prints a non-number")
+	}
+}
+
+// The FE section shows the model, the comparison in words and, past the
+// threshold, the warning; the numbers are fe.Solve's own.
+func TestWallReportFE(t *testing.T) {
+	w, err := geometry.LoadFile("../testdata/walls/windows-band.toml")
+	if err != nil {
+		t.Fatal(err)
+	}
+	res, err := pier.Solve(w)
+	if err != nil {
+		t.Fatal(err)
+	}
+	f, err := fe.Solve(w, res, fe.Options{})
+	if err != nil {
+		t.Fatal(err)
+	}
+	var buf bytes.Buffer
+	if err := Wall(&buf, Input{Path: "windows-band.toml", Wall: w, Result: res, FE: f, Now: reportTime, Version: "test"}); err != nil {
+		t.Fatal(err)
+	}
+	got := buf.String()
+	for _, want := range []string{
+		"Finite-element check",
+		fmt.Sprintf("%.4f /(E·t)", f.Deflection),
+		"the classic rigidity is " + ClassicVersusFE(f.Difference),
+	} {
+		if !strings.Contains(got, want) {
+			t.Errorf("report lacks %q", want)
+		}
+	}
+	warned := strings.Contains(got, "differs from the finite-element model's")
+	if over := math.Abs(f.Difference) > fe.WarnDifference; over != warned {
+		t.Errorf("difference %.3f against threshold %.2f: warned %v", f.Difference, fe.WarnDifference, warned)
+	}
+}
+
+func TestClassicVersusFE(t *testing.T) {
+	for _, tc := range []struct {
+		d    float64
+		want string
+	}{{0.342, "34.2 % higher than"}, {-0.05, "5.0 % lower than"}, {0.0001, "equal to"}} {
+		if got := ClassicVersusFE(tc.d); got != tc.want {
+			t.Errorf("ClassicVersusFE(%g) = %q, want %q", tc.d, got, tc.want)
+		}
 	}
 }

@@ -1,6 +1,10 @@
 package report
 
-import "pierwise/geometry"
+import (
+	"fmt"
+
+	"pierwise/geometry"
+)
 
 // Units are the units results are reported in for one unit system: forces
 // in kip or kN, deflections in in or mm, rigidities in kip/in or kN/mm,
@@ -32,6 +36,19 @@ func UnitsFor(sys geometry.System) Units {
 		Force: "kip", Deflection: "in", Rigidity: "kip/in", Moment: "kip·ft", Coord: "ft", Stress: "psi",
 		force: geometry.Kip, deflection: geometry.Inch, moment: float64(geometry.Kip) * float64(geometry.Foot), coord: geometry.Foot,
 	}
+}
+
+// ClassicVersusFE says how the classic rigidity stands to the finite-element
+// rigidity, given their relative difference (classic − FE)/FE: "34.2 %
+// higher than", "5.0 % lower than" or "equal to".
+func ClassicVersusFE(diff float64) string {
+	switch {
+	case diff >= 0.0005:
+		return fmt.Sprintf("%.1f %% higher than", 100*diff)
+	case diff <= -0.0005:
+		return fmt.Sprintf("%.1f %% lower than", -100*diff)
+	}
+	return "equal to"
 }
 
 // ForceOf converts a force to the report unit.

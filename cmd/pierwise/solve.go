@@ -241,7 +241,7 @@ func writeFETable(out io.Writer, s *solved) {
 	fmt.Fprintf(out, "  finite-element check (%s, mesh %s, %d elements): relative deflection %.4f, relative rigidity %.4f\n",
 		f.Element, geometry.FormatLength(f.Mesh, s.wall.Units), f.Elements, f.Deflection, f.Rigidity)
 	if s.res != nil {
-		fmt.Fprintf(out, "  the classic rigidity is %+.1f %% of the finite-element rigidity\n", 100*f.Difference)
+		fmt.Fprintf(out, "  the classic rigidity is %s the finite-element rigidity\n", report.ClassicVersusFE(f.Difference))
 	}
 	if len(f.Piers) > 0 {
 		parts := make([]string, len(f.Piers))
