@@ -8,8 +8,8 @@ import (
 	"pierwise/geometry"
 )
 
-// SplitArg splits a command-line wall argument FILE[:VARIANT] into the path
-// and the variant name ("" when none is given). A path that names an
+// SplitArg splits a command-line wall argument FILE[:LAYOUT] into the path
+// and the layout (variant) name ("" when none is given). A path that names an
 // existing file is taken whole, so a file name with a colon still works.
 func SplitArg(arg string) (path, variant string) {
 	if _, err := os.Stat(arg); err == nil {
@@ -26,7 +26,7 @@ func SplitArg(arg string) (path, variant string) {
 func Select(w *geometry.Wall, name string) error {
 	i := LayoutIndex(w, name)
 	if i < 0 {
-		return fmt.Errorf("no variant %q; the variants are %s", name, quoteNames(LayoutNames(w)))
+		return fmt.Errorf("no layout %q; the layouts are %s", name, quoteNames(LayoutNames(w)))
 	}
 	w.Active = i
 	return nil

@@ -6,9 +6,9 @@ import (
 	"pierwise/geometry"
 )
 
-// Open loads a wall file given as FILE[:VARIANT] and makes the named variant
-// the active layout. Without a variant the file's own active layout stays.
-// An unknown variant is an error that lists the variants the file has.
+// Open loads a wall file given as FILE[:LAYOUT] and makes the named layout
+// (variant) the active one. Without a layout the file's own active layout
+// stays. An unknown layout is an error that lists the layouts the file has.
 func Open(arg string) (*geometry.Wall, error) {
 	path, variant := SplitArg(arg)
 	w, err := geometry.LoadFile(path)

@@ -4,6 +4,7 @@ import (
 	"errors"
 	"fmt"
 	"math"
+	"strconv"
 	"strings"
 
 	"pierwise/geometry"
@@ -120,7 +121,7 @@ func Sweep(w *geometry.Wall, name string, axis Axis, step geometry.Length) ([]Po
 	kmax := int(math.Floor((span - cur + tol) / s))
 	if kmax-kmin+1 > MaxPoints {
 		return nil, fmt.Errorf("a step of %s makes %d positions; use a larger step (at most %d positions)",
-			geometry.FormatLength(step, w.Units), kmax-kmin+1, MaxPoints)
+			FormatStep(step, w.Units), kmax-kmin+1, MaxPoints)
 	}
 
 	// One private copy of the active layout's openings, edited in place.
@@ -149,6 +150,21 @@ func Sweep(w *geometry.Wall, name string, axis Axis, step geometry.Length) ([]Po
 	}
 	markBest(pts)
 	return pts, nil
+}
+
+// FormatStep shows a sweep step to people: as geometry.FormatLength does
+// (feet-inches to 1/8 in, metres to the millimetre), or in inches or
+// millimetres with three significant digits when that rounding would show a
+// small step as zero.
+func FormatStep(step geometry.Length, sys geometry.System) string {
+	s := geometry.FormatLength(step, sys)
+	if step == 0 || (s != `0"` && s != "0.000 m") {
+		return s
+	}
+	if sys == geometry.SI {
+		return strconv.FormatFloat(float64(step/geometry.Millimetre), 'g', 3, 64) + " mm"
+	}
+	return strconv.FormatFloat(float64(step/geometry.Inch), 'g', 3, 64) + " in"
 }
 
 func solvePoint(w *geometry.Wall, o geometry.Opening, current bool) Point {

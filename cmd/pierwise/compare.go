@@ -17,8 +17,8 @@ func init() {
 	tui.ProgramVersion = version // for the editor's comparison and sweep snapshots
 	register(command{
 		name:  "compare",
-		args:  "FILE[:VARIANT] FILE[:VARIANT]... [-o OUT] [--fe] [--mesh SIZE] [--element q4|qm6]",
-		short: "compare opening layouts side by side (the first against each other; one FILE alone: all its variants)",
+		args:  "FILE[:LAYOUT] FILE[:LAYOUT]... [-o OUT] [--fe] [--mesh SIZE] [--element q4|qm6]",
+		short: "compare opening layouts side by side (the first against each of the others; one FILE alone: all its layouts)",
 		run:   runCompare,
 	})
 }
@@ -33,7 +33,7 @@ func runCompare(e *env, args []string) error {
 		return err
 	}
 	if len(pos) == 0 {
-		return usagef("compare: give two or more walls as FILE[:VARIANT], or one FILE with variants")
+		return usagef("compare: give two or more walls as FILE[:LAYOUT], or one FILE with several layouts")
 	}
 	walls, err := compareWalls(pos)
 	if err != nil {
@@ -49,7 +49,7 @@ func runCompare(e *env, args []string) error {
 		}
 	}
 	if len(walls) < 2 {
-		return usagef("compare: %s has a single layout; give two or more walls as FILE[:VARIANT]", pos[0])
+		return usagef("compare: %s has a single layout; give two or more walls as FILE[:LAYOUT]", pos[0])
 	}
 
 	var out io.Writer = e.stdout

@@ -14,7 +14,7 @@ import (
 func init() {
 	register(command{
 		name:  "sweep",
-		args:  "FILE[:VARIANT] --opening NAME [--step SIZE] [--axis x|y] [--json]",
+		args:  "FILE[:LAYOUT] --opening NAME [--step SIZE] [--axis x|y] [--json]",
 		short: "move one opening step by step along the wall and tabulate rigidity and pier shares",
 		run:   runSweep,
 	})
@@ -31,7 +31,7 @@ func runSweep(e *env, args []string) error {
 		return err
 	}
 	if len(pos) != 1 {
-		return usagef("sweep: give one wall as FILE[:VARIANT]")
+		return usagef("sweep: give one wall as FILE[:LAYOUT]")
 	}
 	if *opening == "" {
 		return usagef("sweep: say which opening to move with --opening NAME")
@@ -52,6 +52,9 @@ func runSweep(e *env, args []string) error {
 		step, err = geometry.ParseLength(*stepText, w.Units)
 		if err != nil {
 			return usagef("sweep: --step: %v", err)
+		}
+		if !(step > 0) {
+			return usagef("sweep: --step: the step must be a positive length, not %q", *stepText)
 		}
 	}
 	pts, err := study.Sweep(w, *opening, axis, step)

@@ -95,7 +95,12 @@ func TestSweepCommandTable(t *testing.T) {
 		{[]string{"sweep", path}, exitUsage, "--opening"},
 		{[]string{"sweep", path, "--opening", "W2", "--axis", "z"}, exitUsage, "axis"},
 		{[]string{"sweep", path, "--opening", "W2", "--step", "abc"}, exitUsage, "step"},
-		{[]string{"sweep", path, "--opening", "W2", "--step", "0"}, exitInput, "positive"},
+		// A step that is not positive is a bad option value, like one that
+		// does not parse: a usage error.
+		{[]string{"sweep", path, "--opening", "W2", "--step", "0"}, exitUsage, "positive"},
+		{[]string{"sweep", path, "--opening", "W2", "--step", "-1ft"}, exitUsage, `not "-1ft"`},
+		// A tiny step is named as typed, not rounded to 0".
+		{[]string{"sweep", path, "--opening", "W2", "--step", "1mm"}, exitInput, "a step of 0.0394 in makes"},
 		{[]string{"sweep", path, "--opening", "W7"}, exitInput, "D1, W1, W2, D2"},
 		{[]string{"sweep", path + ":nope", "--opening", "W2"}, exitInput, "wide entrance"},
 	} {
