@@ -289,7 +289,6 @@ type ComparePierRow struct {
 // ComparePierRows returns the pier table of a comparison.
 func ComparePierRows(c *study.Comparison) []ComparePierRow {
 	sys := c.Before.Wall.Units
-	u := UnitsFor(sys)
 	var rows []ComparePierRow
 	for _, pc := range c.Piers {
 		r := ComparePierRow{Before: cmpDash, After: cmpDash, ShareBefore: cmpDash, ShareAfter: cmpDash,
@@ -325,9 +324,9 @@ func ComparePierRows(c *study.Comparison) []ComparePierRow {
 		}
 		switch pc.Status() {
 		case study.Appears:
-			r.Note = "appears, x " + cmpSpan(pc.After.Rect, u)
+			r.Note = "appears, x " + cmpSpan(pc.After.Rect, sys)
 		case study.Vanishes:
-			r.Note = "vanishes, x " + cmpSpan(pc.Before.Rect, u)
+			r.Note = "vanishes, x " + cmpSpan(pc.Before.Rect, sys)
 		default:
 			if pc.Before.Name != pc.After.Name {
 				r.Note = "renamed"
@@ -392,8 +391,10 @@ func CompareWarnings(c *study.Comparison) []string {
 			out = append(out, fmt.Sprintf("Pier %s of %s has no counterpart in %s: design it on its own.",
 				pc.After.Name, c.After.Label, c.Before.Label))
 		case study.Vanishes:
-			out = append(out, fmt.Sprintf("Pier %s of %s has no counterpart in %s: its reinforcement is no longer needed there, and its shear has moved to other piers.",
-				pc.Before.Name, c.Before.Label, c.After.Label))
+			// The wall of a vanished pier is now inside another pier or an
+			// opening; it may carry more shear than before, not less.
+			out = append(out, fmt.Sprintf("Pier %s of %s (x %s) has no counterpart in %s: that stretch of wall is now part of other piers or of an opening; check its reinforcement against the piers of %s.",
+				pc.Before.Name, c.Before.Label, cmpSpan(pc.Before.Rect, c.Before.Wall.Units), c.After.Label, c.After.Label))
 		}
 	}
 	if rb, ra := c.Before.Result, c.After.Result; rb != nil && ra != nil && rb.HasLoad && ra.HasLoad && rb.Drift.Allowable > 0 {
@@ -435,8 +436,14 @@ func cmpOr(s string) string {
 
 func cmpShare(s float64) string { return fmt.Sprintf("%.1f %%", 100*s) }
 
-func cmpSpan(r geometry.Rect, u Units) string {
-	return fmt.Sprintf("%s-%s %s", cmpSig(u.CoordOf(r.X0), 3), cmpSig(u.CoordOf(r.X1), 3), u.Coord)
+// cmpSpan shows where a pier runs along the wall in the wall's own units:
+// 7'-0" to 12'-0", or 2.100 to 3.600 m.
+func cmpSpan(r geometry.Rect, sys geometry.System) string {
+	x0, x1 := geometry.FormatLength(geometry.Length(r.X0), sys), geometry.FormatLength(geometry.Length(r.X1), sys)
+	if sys == geometry.SI {
+		x0 = strings.TrimSuffix(x0, " m")
+	}
+	return x0 + " to " + x1
 }
 
 // cmpSig formats v with sig significant digits in plain notation.
