@@ -4,6 +4,7 @@ import (
 	"encoding/json"
 	"fmt"
 	"io"
+	"math"
 	"strings"
 
 	"pierwise/geometry"
@@ -66,21 +67,31 @@ func writeStoreyTables(out io.Writer, a *storey.Analysis) {
 		geometry.FormatForce(s.Shear, s.Units), u.CoordOf(float64(s.MassCenter[0])), u.CoordOf(float64(s.MassCenter[1])), u.Coord,
 		u.CoordOf(d.CenterOfRigidity[0]), u.CoordOf(d.CenterOfRigidity[1]), u.Coord)
 	if a.Absolute {
-		fmt.Fprintf(out, "torsional rigidity J = %.0f %s per radian\n", u.MomentOf(d.J), u.Moment)
+		fmt.Fprintf(out, "torsional rigidity J = %s %s per radian\n", grouped(u.MomentOf(d.J)), u.Moment)
 	} else {
 		fmt.Fprintln(out, "rigidities: relative × thickness (not every wall has a modulus)")
 	}
 	for _, c := range d.Cases {
 		fmt.Fprintf(out, "\ncase %s: e = %.2f %s, V·e = %.1f %s\n", c.Name(), u.CoordOf(c.Eccentricity), u.Coord, u.MomentOf(c.Torque), u.Moment)
-		tw := newTextTable("wall", "dir", "R rel", "direct "+u.Force, "torsion "+u.Force, "total "+u.Force)
+		// The distribution uses R = E·t·R rel: when the walls' moduli or
+		// thicknesses differ, only that column explains the direct shears.
+		head := []string{"wall", "dir", "R rel"}
+		if a.Absolute {
+			head = append(head, "R "+u.Rigidity)
+		}
+		tw := newTextTable(append(head, "direct "+u.Force, "torsion "+u.Force, "total "+u.Force)...)
 		for i, w := range a.Walls {
 			sh := c.Shares[i]
 			direct := "-"
 			if w.Ref.Direction == c.Load {
 				direct = fmt.Sprintf("%.2f", u.ForceOf(geometry.Force(sh.Direct)))
 			}
-			tw.add(w.Name, w.Ref.Direction.String(), fmt.Sprintf("%.4f", w.Unit.Rigidity), direct,
-				fmt.Sprintf("%.2f", u.ForceOf(geometry.Force(sh.Torsional))), fmt.Sprintf("%.2f", u.ForceOf(geometry.Force(sh.Total()))))
+			cells := []string{w.Name, w.Ref.Direction.String(), fmt.Sprintf("%.4f", w.Unit.Rigidity)}
+			if a.Absolute {
+				cells = append(cells, grouped(u.RigidityOf(w.Rigidity)))
+			}
+			tw.add(append(cells, direct,
+				fmt.Sprintf("%.2f", u.ForceOf(geometry.Force(sh.Torsional))), fmt.Sprintf("%.2f", u.ForceOf(geometry.Force(sh.Total()))))...)
 		}
 		tw.write(out)
 	}
@@ -113,6 +124,26 @@ func writeStoreyTables(out io.Writer, a *storey.Analysis) {
 		fmt.Fprintln(out, "warning:", msg)
 	}
 	fmt.Fprintln(out, "\nResults support, and do not replace, the judgement of a licensed engineer; local codes govern.")
+}
+
+// grouped formats a large quantity rounded to a whole number with its
+// thousands grouped: 752,179,465.
+func grouped(v float64) string {
+	s := fmt.Sprintf("%.0f", math.Abs(v))
+	if s == "0" {
+		return s
+	}
+	var b strings.Builder
+	if v < 0 {
+		b.WriteByte('-')
+	}
+	for i, c := range s {
+		if i > 0 && (len(s)-i)%3 == 0 {
+			b.WriteByte(',')
+		}
+		b.WriteRune(c)
+	}
+	return b.String()
 }
 
 // textTable is a small left/right aligned table for the storey command:

@@ -111,3 +111,65 @@ func TestStoreyExitStatus(t *testing.T) {
 		}
 	}
 }
+
+// The storey table shows the rigidity the distribution used, R = E·t·R rel
+// in kip/in, so that walls of different strengths can be followed: with the
+// north wall at f'm = 4000 psi (E_m = 900 f'm = 3600 ksi, TMS 402) its R is
+// twice that of the same wall at 2000 psi, and the direct shears of the
+// x-walls split as their R (V·R_i/ΣR, Taly 2nd ed. §7.9).
+func TestStoreyTableAbsoluteRigidity(t *testing.T) {
+	dir := t.TempDir()
+	for _, f := range []string{"south.toml", "north.toml", "west.toml", "east.toml", "partition.toml", "workshop.toml"} {
+		data, err := os.ReadFile(filepath.Join("../../testdata/storey", f))
+		if err != nil {
+			t.Fatal(err)
+		}
+		if f == "north.toml" {
+			data = []byte(strings.Replace(string(data), `strength = "2000psi"`, `strength = "4000psi"`, 1))
+		}
+		if err := os.WriteFile(filepath.Join(dir, f), data, 0o644); err != nil {
+			t.Fatal(err)
+		}
+	}
+	code, out, errs := runCLI("storey", filepath.Join(dir, "workshop.toml"), "--json")
+	if code != exitOK {
+		t.Fatalf("exit %d: %s", code, errs)
+	}
+	var s struct {
+		Walls []struct {
+			Name        string   `json:"name"`
+			Direction   string   `json:"direction"`
+			RigidityRel float64  `json:"rigidity_relative"`
+			Rigidity    float64  `json:"rigidity"`
+			DirectShear *float64 `json:"direct_shear"`
+		} `json:"walls"`
+	}
+	if err := json.Unmarshal([]byte(out), &s); err != nil {
+		t.Fatal(err)
+	}
+	south, north := s.Walls[0], s.Walls[1]
+	if r := north.Rigidity / north.RigidityRel / (south.Rigidity / south.RigidityRel); math.Abs(r-2) > 1e-9 {
+		t.Errorf("E·t of the north wall is %g times the south wall's, want 2", r)
+	}
+	if got, want := *north.DirectShear / *south.DirectShear, north.Rigidity/south.Rigidity; math.Abs(got-want) > 1e-9*want {
+		t.Errorf("direct shears north/south %g, want R ratio %g", got, want)
+	}
+	code, out, errs = runCLI("storey", filepath.Join(dir, "workshop.toml"))
+	if code != exitOK {
+		t.Fatalf("exit %d: %s", code, errs)
+	}
+	if !strings.Contains(out, "R kip/in") || !strings.Contains(out, grouped(north.Rigidity)) {
+		t.Errorf("table lacks the R kip/in column with %s:\n%s", grouped(north.Rigidity), out)
+	}
+	if !strings.Contains(out, "kip·ft per radian") {
+		t.Errorf("no J line:\n%s", out)
+	}
+}
+
+func TestGrouped(t *testing.T) {
+	for v, want := range map[float64]string{0: "0", 999: "999", 1000: "1,000", 752179464.986: "752,179,465", -12989.5: "-12,990", 0.4: "0"} {
+		if got := grouped(v); got != want {
+			t.Errorf("grouped(%g) = %q, want %q", v, got, want)
+		}
+	}
+}
