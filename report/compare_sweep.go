@@ -83,7 +83,11 @@ func SweepTable(out io.Writer, w *geometry.Wall, name string, axis study.Axis, s
 		rows = append(rows, r)
 	}
 	sweepAlign(out, rows)
-	_, err := fmt.Fprintln(out, "\nShares are fractions of the wall shear. Best: lowest highest pier shear stress V_i/(L_i t).\n"+
+	best := "Best: lowest highest pier shear stress V_i/(L_i t)."
+	if !(w.Load.Shear > 0 && w.Thickness > 0) {
+		best = "Best: lowest highest pier share/L_i (the wall has no load or thickness, so no stress)."
+	}
+	_, err := fmt.Fprintln(out, "\nShares are fractions of the wall shear. "+best+"\n"+
 		"Results support, and do not replace, the judgement of a licensed engineer; local codes govern.")
 	return err
 }

@@ -1,0 +1,71 @@
+package report
+
+import (
+	"bytes"
+	"fmt"
+	"strings"
+	"testing"
+
+	"pierwise/geometry"
+	"pierwise/study"
+)
+
+// sweepWall is an invented classroom wall: 40 ft × 12 ft cantilever, three
+// 4 ft × 4 ft windows with sills at 3 ft, at 6, 18 and 30 ft.
+func sweepWall(load bool) *geometry.Wall {
+	ft := geometry.Foot
+	w := &geometry.Wall{
+		Title: "sweep", Units: geometry.US, Length: 40 * ft, Height: 12 * ft, Thickness: 7.625 * geometry.Inch,
+		Support:  geometry.Cantilever,
+		Material: geometry.Material{Kind: geometry.ConcreteMasonry, Strength: 2000 * geometry.PSI},
+		Layouts: []geometry.Layout{{Name: "main", Openings: []geometry.Opening{
+			{Name: "W1", X: 6 * ft, Sill: 3 * ft, Width: 4 * ft, Height: 4 * ft},
+			{Name: "W2", X: 18 * ft, Sill: 3 * ft, Width: 4 * ft, Height: 4 * ft},
+			{Name: "W3", X: 30 * ft, Sill: 3 * ft, Width: 4 * ft, Height: 4 * ft},
+		}}},
+	}
+	if load {
+		w.Load.Shear = 35 * geometry.Kip
+	}
+	return w
+}
+
+// The sweep table's stress column and its footnote say what ranks the
+// positions: the highest pier shear stress V_i/(L_i·t) with a load, share/L
+// without one.
+func TestSweepTableStressOrShare(t *testing.T) {
+	// With the load, at the current position the 8 ft piers P2 and P3 are
+	// the most stressed. Hand arithmetic (DESIGN §3, fixed-fixed piers 4 ft
+	// high): 6 ft piers d = (2/3)³ + 3·(2/3) = 2.2963, 8 ft piers d = 0.5³ +
+	// 1.5 = 1.625; share of P2 = (1/1.625) / (2/2.2963 + 2/1.625) = 0.2928;
+	// τ = 35 kip × 0.2928 / (96 in × 7.625 in) = 14.0 psi.
+	w := sweepWall(true)
+	pts, err := study.Sweep(w, "W2", study.AlongX, 12*geometry.Foot)
+	if err != nil {
+		t.Fatal(err)
+	}
+	var b bytes.Buffer
+	if err := SweepTable(&b, w, "W2", study.AlongX, 12*geometry.Foot, pts); err != nil {
+		t.Fatal(err)
+	}
+	out := b.String()
+	tau := 35000 * (1 / 1.625) / (2/2.2963 + 2/1.625) / (96 * 7.625)
+	want := fmt.Sprintf("%.1f P2  current", tau)
+	if !strings.Contains(out, "max stress (psi)") || !strings.Contains(out, want) || !strings.Contains(out, "shear stress V_i/(L_i t)") {
+		t.Errorf("want the stress column with %q:\n%s", want, out)
+	}
+
+	w = sweepWall(false)
+	pts, err = study.Sweep(w, "W2", study.AlongX, 12*geometry.Foot)
+	if err != nil {
+		t.Fatal(err)
+	}
+	b.Reset()
+	if err := SweepTable(&b, w, "W2", study.AlongX, 12*geometry.Foot, pts); err != nil {
+		t.Fatal(err)
+	}
+	out = b.String()
+	if !strings.Contains(out, "max share/L (1/ft)") || !strings.Contains(out, "share/L_i (the wall has no load") || strings.Contains(out, "stress V_i") {
+		t.Errorf("want the share/L column and its footnote without a load:\n%s", out)
+	}
+}
