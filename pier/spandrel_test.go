@@ -67,3 +67,23 @@ func TestStaggeredMessageInWallUnits(t *testing.T) {
 		t.Errorf("err = %v, want it to contain %q", err, want)
 	}
 }
+
+// A solid wall taller than four times its length gets the slender warning
+// that a pier of those proportions gets (h/L > SlenderRatio); a squat one
+// does not.
+func TestSlenderSolidWall(t *testing.T) {
+	r, err := Solve(solidWall(2, 10, geometry.Cantilever))
+	if err != nil {
+		t.Fatal(err)
+	}
+	if all := strings.Join(r.Warnings, "\n"); !strings.Contains(all, "the wall is slender (h/L = 5.0") {
+		t.Errorf("warnings %q, want the wall slender", all)
+	}
+	r, err = Solve(solidWall(20, 10, geometry.Cantilever))
+	if err != nil {
+		t.Fatal(err)
+	}
+	if len(r.Warnings) != 0 {
+		t.Errorf("squat solid wall: warnings %q", r.Warnings)
+	}
+}

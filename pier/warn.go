@@ -101,6 +101,9 @@ func (s *solver) assumptions(w *geometry.Wall, ops []opening) {
 			s.warn(fmt.Sprintf("pier %s is slender (h/L = %.1f > %g): the formulas are meant for wall piers; its small share depends on end fixity the method only assumes", p.Name, ratio, SlenderRatio))
 		}
 	}
+	if ratio := float64(w.Height) / float64(w.Length); ratio > SlenderRatio {
+		s.warn(fmt.Sprintf("the wall is slender (h/L = %.1f > %g): it acts as a column rather than a shear wall, and the formulas are meant for wall proportions", ratio, SlenderRatio))
+	}
 	s.edges(w, ops)
 	if anyFixed && len(ops) > 0 {
 		s.warn("piers marked fixed are assumed held against rotation at top and bottom by rigid spandrels; hand methods of this kind tend to overestimate the rigidity of walls with large openings: compare with the finite-element check")
