@@ -5,6 +5,7 @@ import (
 	"io"
 	"os"
 	"path/filepath"
+	"strings"
 	"time"
 
 	"pierwise/geometry"
@@ -62,10 +63,20 @@ func runCompare(e *env, args []string) error {
 		out = file
 	}
 	info := report.CompareInfo{Now: time.Now(), Version: version}
+	// A layout the classic method cannot solve (cut or staggered) is shown
+	// in the comparison and, as in solve, makes the exit status 1.
+	var noAnswer []string
+	seen := map[string]bool{}
 	for i := 1; i < len(walls); i++ {
 		c, err := study.CompareWith(walls[0].wall, walls[i].wall, opt)
 		if err != nil {
 			return err
+		}
+		for k, side := range []*study.Side{&c.Before, &c.After} {
+			if label := walls[[]int{0, i}[k]].label; side.Err != nil && !seen[label] {
+				seen[label] = true
+				noAnswer = append(noAnswer, fmt.Sprintf("%s: %v", label, side.Err))
+			}
 		}
 		c.Before.Path, c.Before.Label = walls[0].path, walls[0].label
 		c.After.Path, c.After.Label = walls[i].path, walls[i].label
@@ -81,6 +92,9 @@ func runCompare(e *env, args []string) error {
 			return err
 		}
 		fmt.Fprintln(e.stderr, "wrote", *outPath)
+	}
+	if len(noAnswer) > 0 {
+		return fmt.Errorf("the classic method has no answer for %s", strings.Join(noAnswer, "; "))
 	}
 	return nil
 }

@@ -107,3 +107,20 @@ func TestCompareCommandFE(t *testing.T) {
 		t.Errorf("negative mesh: exit %d %q", code, errs)
 	}
 }
+
+// A layout that its openings cut in two is shown in the comparison ("no
+// answer") and, as solve does for such a wall (README: exit status 1), the
+// command exits with status 1 and names it.
+func TestCompareCommandCutLayout(t *testing.T) {
+	w := demo.Wall()
+	// A ribbon window from end to end cuts the second layout in two.
+	w.Layouts[1].Openings = []geometry.Opening{{Name: "R1", X: 0, Sill: 3 * geometry.Foot, Width: w.Length, Height: 3 * geometry.Foot}}
+	path := filepath.Join(t.TempDir(), "cut.toml")
+	if err := geometry.Save(path, w); err != nil {
+		t.Fatal(err)
+	}
+	code, out, errs := runCmd("compare", path)
+	if code != exitInput || !strings.Contains(out, "no answer") || !strings.Contains(errs, "cut.toml:wide entrance: opening R1 cuts the wall") {
+		t.Errorf("exit %d, stderr %q; want 1 naming the cut layout", code, errs)
+	}
+}
