@@ -118,7 +118,13 @@ func Analyse(s *Storey, walls []*geometry.Wall) (*Analysis, error) {
 			if ref.Name != "" {
 				wallErr(i, "name", "%q is already the name of wall %d", sw.Name, j+1)
 			} else {
-				sw.Name += " (" + filepath.Base(ref.File) + ")"
+				// The same title twice: tell them apart by file, or by the
+				// wall's number when the same file is placed twice.
+				byFile := sw.Name + " (" + filepath.Base(ref.File) + ")"
+				if _, taken := names[byFile]; taken || filepath.Clean(ref.Path) == filepath.Clean(s.Walls[j].Path) {
+					byFile = sw.Name + " (wall " + strconv.Itoa(i+1) + ")"
+				}
+				sw.Name = byFile
 			}
 		}
 		names[sw.Name] = i

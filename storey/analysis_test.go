@@ -177,3 +177,29 @@ func TestAnalyseErrors(t *testing.T) {
 		t.Errorf("cut wall: got %v", err)
 	}
 }
+
+// Walls without a name of their own are called by their title; the same
+// wall file placed several times still gives every wall its own name, so
+// the tables and the JSON can be read.
+func TestAnalyseSameFileTwiceNamesApart(t *testing.T) {
+	s, walls := symmetricStorey(0.05)
+	for i := range s.Walls {
+		s.Walls[i].Name = ""
+		s.Walls[i].File, s.Walls[i].Path = "same.toml", "same.toml"
+		walls[i].Title = "Typical wall"
+	}
+	a, err := Analyse(s, walls)
+	if err != nil {
+		t.Fatal(err)
+	}
+	seen := map[string]bool{}
+	for _, w := range a.Walls {
+		if seen[w.Name] {
+			t.Errorf("name %q given twice", w.Name)
+		}
+		seen[w.Name] = true
+	}
+	if a.Walls[2].Name != "Typical wall (wall 3)" {
+		t.Errorf("third wall named %q, want \"Typical wall (wall 3)\"", a.Walls[2].Name)
+	}
+}
