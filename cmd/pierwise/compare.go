@@ -1,9 +1,9 @@
 package main
 
 import (
+	"bytes"
 	"fmt"
 	"io"
-	"os"
 	"path/filepath"
 	"strings"
 	"time"
@@ -53,15 +53,10 @@ func runCompare(e *env, args []string) error {
 		return usagef("compare: %s has a single layout; give two or more walls as FILE[:LAYOUT]", pos[0])
 	}
 
-	var out io.Writer = e.stdout
-	var file *os.File
-	if *outPath != "" {
-		file, err = os.Create(*outPath)
-		if err != nil {
-			return err
-		}
-		out = file
-	}
+	// The report is built in memory and written at once: to standard
+	// output, or atomically to OUT (never a half-written file).
+	var buf bytes.Buffer
+	out := io.Writer(&buf)
 	info := report.CompareInfo{Now: time.Now(), Version: version}
 	// A layout the classic method cannot solve (cut or staggered) is shown
 	// in the comparison and, as in solve, makes the exit status 1.
@@ -87,11 +82,15 @@ func runCompare(e *env, args []string) error {
 			return err
 		}
 	}
-	if file != nil {
-		if err := file.Close(); err != nil {
+	if *outPath == "" {
+		if _, err := e.stdout.Write(buf.Bytes()); err != nil {
 			return err
 		}
-		fmt.Fprintln(e.stderr, "wrote", *outPath)
+	} else {
+		if err := geometry.WriteFileAtomic(*outPath, buf.Bytes()); err != nil {
+			return err
+		}
+		fmt.Fprintln(e.stderr, "comparison written to", *outPath)
 	}
 	if len(noAnswer) > 0 {
 		return fmt.Errorf("the classic method has no answer for %s", strings.Join(noAnswer, "; "))

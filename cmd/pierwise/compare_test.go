@@ -4,6 +4,7 @@ import (
 	"bytes"
 	"fmt"
 	"math"
+	"os"
 	"path/filepath"
 	"strings"
 	"testing"
@@ -122,5 +123,27 @@ func TestCompareCommandCutLayout(t *testing.T) {
 	code, out, errs := runCmd("compare", path)
 	if code != exitInput || !strings.Contains(out, "no answer") || !strings.Contains(errs, "cut.toml:wide entrance: opening R1 cuts the wall") {
 		t.Errorf("exit %d, stderr %q; want 1 naming the cut layout", code, errs)
+	}
+}
+
+// compare -o writes the whole comparison to OUT at once (as report -o does)
+// and nothing to standard output; a path it cannot write is an error.
+func TestCompareCommandOutputFile(t *testing.T) {
+	path := studyFile(t)
+	dir := t.TempDir()
+	outFile := filepath.Join(dir, "cmp.txt")
+	code, out, errs := runCmd("compare", path, "-o", outFile)
+	if code != exitOK || out != "" || !strings.Contains(errs, outFile) {
+		t.Fatalf("exit %d, stdout %q, stderr %q", code, out, errs)
+	}
+	data, err := os.ReadFile(outFile)
+	if err != nil || !strings.Contains(string(data), "PIERWISE LAYOUT COMPARISON") || !strings.Contains(string(data), "local codes govern") {
+		t.Errorf("file: %v\n%s", err, data)
+	}
+	if code, _, _ := runCmd("compare", path, "-o", filepath.Join(dir, "missing", "cmp.txt")); code != exitInput {
+		t.Errorf("unwritable OUT: exit %d, want 1", code)
+	}
+	if entries, _ := os.ReadDir(dir); len(entries) != 1 {
+		t.Errorf("%d files in the output directory, want only cmp.txt", len(entries))
 	}
 }
