@@ -31,7 +31,9 @@
 //     sizes from 0.1 mm to 10 km, stresses and moduli up to 10^12 Pa, the
 //     shear up to 10^12 N, modifiers from 0.01 to 10, C_d and I_e up to 100,
 //     and at most 1000 FE elements along the wall's larger side;
-//   - a custom material gives its modulus; a drift limit is a known preset
+//   - a custom material gives its modulus; Poisson's ratio ([material]
+//     poisson, E_v = E/(2(1+ν))) lies in (0, 0.5) and does not come with
+//     shear_modulus; a drift limit is a known preset
 //     or a fraction in (0, 0.1], or 0 for no check;
 //   - there is at least one layout, Active names one of them, and layout
 //     names are unique;

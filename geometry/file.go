@@ -400,7 +400,7 @@ func (p *fileParser) wall(raw map[string]any) *Wall {
 }
 
 func (p *fileParser) material(w *Wall, t map[string]any) {
-	p.table(t, "material", "kind", "strength", "modulus", "shear_modulus")
+	p.table(t, "material", "kind", "strength", "modulus", "shear_modulus", "poisson")
 	if s, ok := p.str(t, "kind", "material.kind"); ok {
 		if w.Material.Kind, ok = ParseMaterialKind(s); !ok {
 			p.fail("material.kind", "unknown material "+strconv.Quote(s)+" (use concrete-masonry, clay-masonry, concrete or custom)")
@@ -422,6 +422,7 @@ func (p *fileParser) material(w *Wall, t map[string]any) {
 	}
 	w.Material.Modulus, _ = quantity(p, t, "modulus", "material.modulus", ParseStress, p.sys.BaseStress(), ex)
 	w.Material.ShearModulus, _ = quantity(p, t, "shear_modulus", "material.shear_modulus", ParseStress, p.sys.BaseStress(), ex)
+	w.Material.Poisson = p.number(t, "poisson", "material.poisson", 0)
 }
 
 func (p *fileParser) drift(w *Wall, t map[string]any) {
@@ -522,6 +523,9 @@ func Marshal(w *Wall) ([]byte, error) {
 	}
 	if m.ShearModulus != 0 {
 		kv("shear_modulus", quote(exactStress(m.ShearModulus, sys)))
+	}
+	if m.Poisson != 0 {
+		kv("poisson", strconv.FormatFloat(m.Poisson, 'g', -1, 64))
 	}
 	if w.Load.Shear != 0 {
 		b.WriteString("\n[load]\n")

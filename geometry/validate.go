@@ -108,6 +108,15 @@ func (w *Wall) validateMaterial(l *ErrorList) {
 	} else if g > float64(maxStress) {
 		l.add("material.shear_modulus", tooLargeStress(m.ShearModulus, sys))
 	}
+	// ν of an isotropic material in plane stress lies below 0.5 (E_v = E/(2(1+ν))
+	// above E/3); zero means "not given", so it is a ratio above 0.
+	if nu := m.Poisson; !finite(nu) {
+		l.add("material.poisson", "is not a finite number")
+	} else if nu < 0 || nu >= 0.5 {
+		l.add("material.poisson", "must be a Poisson's ratio from above 0 to below 0.5, such as 0.2 for concrete (is "+strconv.FormatFloat(nu, 'g', -1, 64)+")")
+	} else if nu > 0 && m.ShearModulus != 0 {
+		l.add("material.poisson", "give either shear_modulus or poisson, not both (E_v = E/(2(1+ν)))")
+	}
 }
 
 func (w *Wall) validateDriftLimit(l *ErrorList) {

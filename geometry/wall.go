@@ -34,6 +34,10 @@ type Material struct {
 	Strength     Stress // f'm for masonry, f'c for concrete; may be zero for Custom
 	Modulus      Stress // E; required for Custom, an override otherwise
 	ShearModulus Stress // E_v; default 0.4 E
+
+	// Poisson is Poisson's ratio ν when the user gives it instead of E_v:
+	// E_v = E/(2(1+ν)). Zero means not given; it cannot go with ShearModulus.
+	Poisson float64
 }
 
 // Load is the in-plane shear at the top of the wall; zero means no load given.

@@ -3,6 +3,7 @@ package pier
 import (
 	"fmt"
 	"math"
+	"strconv"
 
 	"pierwise/geometry"
 )
@@ -165,10 +166,19 @@ func MaterialModuliFor(m geometry.Material, sys geometry.System) (Moduli, error)
 	default:
 		return Moduli{}, fmt.Errorf("pier: unknown material kind %d", m.Kind)
 	}
-	if m.ShearModulus > 0 {
+	nu := m.Poisson
+	if math.IsNaN(nu) || nu < 0 || nu >= 0.5 {
+		return Moduli{}, fmt.Errorf("pier: Poisson's ratio must lie from 0 to below 0.5, got %g", nu)
+	}
+	switch {
+	case m.ShearModulus > 0:
 		mod.Ev = m.ShearModulus
 		vSrc = "E_v given"
-	} else {
+	case nu > 0:
+		// Isotropic elasticity: G = E/(2(1+ν)).
+		mod.Ev = mod.E / geometry.Stress(2*(1+nu))
+		vSrc = "E_v = E/(2(1+ν)) with ν = " + strconv.FormatFloat(nu, 'g', -1, 64) + " given"
+	default:
 		mod.Ev = DefaultG * mod.E
 	}
 	if !(mod.E > 0) || math.IsInf(float64(mod.E), 0) {

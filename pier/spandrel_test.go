@@ -87,3 +87,30 @@ func TestSlenderSolidWall(t *testing.T) {
 		t.Errorf("squat solid wall: warnings %q", r.Warnings)
 	}
 }
+
+// DESIGN §4: E_v given as Poisson's ratio, E_v = E/(2(1+ν)) (isotropic
+// elasticity, Gere & Timoshenko, Mechanics of Materials). For concrete with
+// ν = 0.2, E_v = E/2.4, so a cantilever of h/L = 0.5 deflects 4·0.125 +
+// 1.2·0.5·2.4 = 1.94 (instead of 2.0 with E_v = 0.4 E); f'c = 4000 psi
+// gives E_c = 57,000·√4000 psi = 3605 ksi (ACI 318).
+func TestPoissonGivesShearModulus(t *testing.T) {
+	w := solidWall(20, 10, geometry.Cantilever)
+	w.Material = geometry.Material{Kind: geometry.Concrete, Strength: 4000 * geometry.PSI, Poisson: 0.2}
+	r, err := Solve(w)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if !near(r.Deflection, 1.94, 1e-9) {
+		t.Errorf("deflection %g, want 1.94", r.Deflection)
+	}
+	if e := float64(r.Moduli.E / geometry.KSI); !near(e, 3604.997, 1e-6) || !near(float64(r.Moduli.Ev/r.Moduli.E), 1/2.4, 1e-12) {
+		t.Errorf("E = %g ksi, E_v/E = %g; want 3605 ksi and 1/2.4", e, float64(r.Moduli.Ev/r.Moduli.E))
+	}
+	if !strings.Contains(r.Moduli.EvSource, "ν = 0.2") {
+		t.Errorf("E_v source %q does not name ν", r.Moduli.EvSource)
+	}
+	w.Material.Poisson = 0.5
+	if _, err := Solve(w); err == nil {
+		t.Error("ν = 0.5 accepted")
+	}
+}
