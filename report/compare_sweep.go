@@ -26,7 +26,18 @@ func SweepTable(out io.Writer, w *geometry.Wall, name string, axis study.Axis, s
 	}
 	names := sweepPierNames(pts)
 	cur := study.CurrentIndex(pts)
-	head := []string{"x (" + u.Coord + ")", "sill (" + u.Coord + ")", "rel. rigidity", "change"}
+	// Positions as an engineer writes them: feet-inches for US walls (a
+	// step of 8 in reads 0'-8", not 0.67), metres to the millimetre for SI.
+	pos := func(l geometry.Length) string {
+		if w.Units == geometry.SI {
+			return strconv.FormatFloat(u.CoordOf(float64(l)), 'f', 3, 64)
+		}
+		return geometry.FormatLength(l, w.Units)
+	}
+	head := []string{"x", "sill", "rel. rigidity", "change"}
+	if w.Units == geometry.SI {
+		head[0], head[1] = "x ("+u.Coord+")", "sill ("+u.Coord+")"
+	}
 	for _, n := range names {
 		head = append(head, n)
 	}
@@ -37,10 +48,7 @@ func SweepTable(out io.Writer, w *geometry.Wall, name string, axis study.Axis, s
 	head = append(head, stressHead, "")
 	rows := [][]string{head}
 	for _, p := range pts {
-		r := []string{
-			strconv.FormatFloat(u.CoordOf(float64(p.X)), 'f', 2, 64),
-			strconv.FormatFloat(u.CoordOf(float64(p.Y)), 'f', 2, 64),
-		}
+		r := []string{pos(p.X), pos(p.Y)}
 		if p.Err != nil {
 			r = append(r, "no answer", "")
 			for range names {

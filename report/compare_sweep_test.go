@@ -54,6 +54,10 @@ func TestSweepTableStressOrShare(t *testing.T) {
 	if !strings.Contains(out, "max stress (psi)") || !strings.Contains(out, want) || !strings.Contains(out, "shear stress V_i/(L_i t)") {
 		t.Errorf("want the stress column with %q:\n%s", want, out)
 	}
+	// Positions of a US wall in feet-inches: W2 at 18 ft, sill 3 ft.
+	if !strings.Contains(out, `18'-0"  3'-0"`) {
+		t.Errorf("want the current position as 18'-0\"  3'-0\":\n%s", out)
+	}
 
 	w = sweepWall(false)
 	pts, err = study.Sweep(w, "W2", study.AlongX, 12*geometry.Foot)
