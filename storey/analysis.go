@@ -78,13 +78,33 @@ func LoadFiles(path string) (*Storey, []*geometry.Wall, error) {
 		key := "wall[" + strconv.Itoa(i+1) + "].file"
 		line := ref.lines["file"]
 		if _, err := statFile(ref.Path); err != nil {
-			errs = append(errs, newError(path, line, key, "wall file %q not found (looked for %s)", ref.File, ref.Path))
+			msg := fmt.Sprintf("wall file %q not found (looked for %s)", ref.File, ref.Path)
+			if i := strings.LastIndex(ref.Path, ":"); i > 0 {
+				if _, err := statFile(ref.Path[:i]); err == nil {
+					msg += fmt.Sprintf("; to use a layout of a wall file, write file = %q and layout = %q",
+						ref.File[:strings.LastIndex(ref.File, ":")], ref.Path[i+1:])
+				}
+			}
+			errs = append(errs, newError(path, line, key, "%s", msg))
 			continue
 		}
 		w, err := loadWall(ref.Path)
 		if err != nil {
 			errs = append(errs, newError(path, line, key, "wall file %q has errors:\n%v", ref.File, err))
 			continue
+		}
+		if ref.Layout != "" {
+			k := layoutIndex(w, ref.Layout)
+			if k < 0 {
+				names := make([]string, len(w.Layouts))
+				for j, l := range w.Layouts {
+					names[j] = strconv.Quote(l.Name)
+				}
+				errs = append(errs, newError(path, ref.lines["layout"], "wall["+strconv.Itoa(i+1)+"].layout",
+					"wall file %q has no layout %q (its layouts: %s)", ref.File, ref.Layout, strings.Join(names, ", ")))
+				continue
+			}
+			w.Active = k
 		}
 		walls[i] = w
 	}
@@ -263,14 +283,35 @@ func planWarnings(a *Analysis) []string {
 	return out
 }
 
+// layoutIndex finds a wall's layout by name, exactly first, then ignoring
+// case (as the command line's FILE:LAYOUT does); -1 when there is none.
+func layoutIndex(w *geometry.Wall, name string) int {
+	for i, l := range w.Layouts {
+		if l.Name == name {
+			return i
+		}
+	}
+	for i, l := range w.Layouts {
+		if strings.EqualFold(l.Name, name) {
+			return i
+		}
+	}
+	return -1
+}
+
 // wallName is the name given in the storey file, or the wall's title, or the
 // wall file's base name.
 func wallName(ref WallRef, w *geometry.Wall) string {
 	if ref.Name != "" {
 		return ref.Name
 	}
-	if t := strings.TrimSpace(w.Title); t != "" {
-		return t
+	name := strings.TrimSpace(w.Title)
+	if name == "" {
+		name = strings.TrimSuffix(filepath.Base(ref.File), filepath.Ext(ref.File))
 	}
-	return strings.TrimSuffix(filepath.Base(ref.File), filepath.Ext(ref.File))
+	if ref.Layout != "" {
+		// The layout chosen in the storey file is part of what the wall is.
+		name += ", " + w.Layouts[w.Active].Name
+	}
+	return name
 }

@@ -11,7 +11,9 @@
 // file), direction ("x": the wall resists shear along x; "y"), position (its
 // line: y of an x-wall, x of a y-wall), and optionally start (where it
 // begins along its line; default: centred, used for the plan sketch and the
-// fit check) and name (default: the wall file's title, else its base name).
+// fit check), name (default: the wall file's title, else its base name)
+// and layout (one of the wall file's layouts; default: the file's active
+// one; the name then carries the layout).
 // The plan runs from (0, 0), its south-west corner, to size; x points east,
 // y north. Lengths and forces are read with geometry.ParseLength and
 // ParseForce in the storey's units; a bare number is ft/kip or m/kN. Errors

@@ -37,6 +37,7 @@ type WallRef struct {
 	Direction Direction       // the axis along which the wall resists shear
 	Position  geometry.Length // its line: y of an x-wall, x of a y-wall
 	Start     geometry.Length // where it begins along its line (x of an x-wall, y of a y-wall)
+	Layout    string          // the wall file's layout to use; "" for the file's active one
 	HasStart  bool            // false: the wall is drawn centred on the plan
 	Line      int             // line of the [[wall]] header in the storey file
 	lines     map[string]int  // key → line, for messages
@@ -173,12 +174,13 @@ func Parse(filename string, data []byte) (*Storey, error) {
 		for _, k := range sortedKeys(w) {
 			ref.lines[k] = p.line("wall." + k)
 			switch k {
-			case "file", "direction", "position", "start", "name":
+			case "file", "direction", "position", "start", "name", "layout":
 			default:
-				p.errorf("wall."+k, "unknown key (a [[wall]] has file, direction, position, and optionally start and name)")
+				p.errorf("wall."+k, "unknown key (a [[wall]] has file, direction, position, and optionally start, name and layout)")
 			}
 		}
 		ref.Name = strings.TrimSpace(p.str(w, "name", "wall.name"))
+		ref.Layout = strings.TrimSpace(p.str(w, "layout", "wall.layout"))
 		if v, ok := p.need(w, "wall.file"); ok {
 			if f, isStr := v.(string); !isStr || strings.TrimSpace(f) == "" {
 				p.errorf("wall.file", "must be the path of a wall file, relative to this file, e.g. \"north.toml\"")

@@ -46,6 +46,7 @@ type JSONCase struct {
 type JSONWall struct {
 	Name             string          `json:"name"`
 	File             string          `json:"file"`
+	Layout           string          `json:"layout"` // the wall file's layout used
 	Direction        string          `json:"direction"`
 	Position         float64         `json:"position"`
 	RigidityRelative float64         `json:"rigidity_relative"`
@@ -105,7 +106,7 @@ func (a *Analysis) JSON() JSON {
 	}
 	for i, w := range a.Walls {
 		jw := JSONWall{
-			Name: w.Name, File: w.Ref.File, Direction: w.Ref.Direction.String(), Position: c(float64(w.Ref.Position)),
+			Name: w.Name, File: w.Ref.File, Layout: w.Wall.Layouts[w.Wall.Active].Name, Direction: w.Ref.Direction.String(), Position: c(float64(w.Ref.Position)),
 			RigidityRelative: w.Unit.Rigidity, Distance: c(d.Distance[i]),
 			DirectShear: f(w.Design.Direct), DesignShear: f(w.Design.Shear), GoverningCase: CaseName(d, w.Design.Case),
 			Piers: []JSONPierForce{}, Warnings: append([]string{}, w.Loaded.Warnings...),
