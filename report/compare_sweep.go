@@ -6,6 +6,7 @@ import (
 	"sort"
 	"strconv"
 	"strings"
+	"unicode/utf8"
 
 	"pierwise/geometry"
 	"pierwise/study"
@@ -34,7 +35,7 @@ func SweepTable(out io.Writer, w *geometry.Wall, name string, axis study.Axis, s
 		}
 		return geometry.FormatLength(l, w.Units)
 	}
-	head := []string{"x", "sill", "rel. rigidity", "change"}
+	head := []string{"x", "sill", "R rel", "change"}
 	if w.Units == geometry.SI {
 		head[0], head[1] = "x ("+u.Coord+")", "sill ("+u.Coord+")"
 	}
@@ -91,13 +92,32 @@ func SweepTable(out io.Writer, w *geometry.Wall, name string, axis study.Axis, s
 		rows = append(rows, r)
 	}
 	sweepAlign(out, rows)
-	best := "Best: lowest highest pier shear stress V_i/(L_i t)."
+	best := "Best: the lowest highest pier shear stress V_i/(L_i t)."
 	if !(w.Load.Shear > 0 && w.Thickness > 0) {
-		best = "Best: lowest highest pier share/L_i (the wall has no load or thickness, so no stress)."
+		best = "Best: the lowest highest pier share/L_i (the wall has no load or thickness, so no stress)."
 	}
-	_, err := fmt.Fprintln(out, "\nShares are fractions of the wall shear. "+best+"\n"+
-		"Results support, and do not replace, the judgement of a licensed engineer; local codes govern.")
+	_, err := fmt.Fprintln(out, "\n"+wrapText("R rel is the wall's relative rigidity (E = 1, t = 1) and change its change from the current position. Shares are fractions of the wall shear. "+best, 78)+"\n"+
+		wrapText("Results support, and do not replace, the judgement of a licensed engineer; local codes govern.", 78))
 	return err
+}
+
+// wrapText word-wraps s to width columns.
+func wrapText(s string, width int) string {
+	var b strings.Builder
+	n := 0
+	for _, word := range strings.Fields(s) {
+		l := utf8.RuneCountInString(word)
+		if n > 0 && n+1+l > width {
+			b.WriteByte('\n')
+			n = 0
+		} else if n > 0 {
+			b.WriteByte(' ')
+			n++
+		}
+		b.WriteString(word)
+		n += l
+	}
+	return b.String()
 }
 
 // sweepPierNames returns every leaf pier name of the sweep in name order

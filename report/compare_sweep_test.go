@@ -49,9 +49,10 @@ func TestSweepTableStressOrShare(t *testing.T) {
 		t.Fatal(err)
 	}
 	out := b.String()
+	flat := strings.Join(strings.Fields(out), " ")
 	tau := 35000 * (1 / 1.625) / (2/2.2963 + 2/1.625) / (96 * 7.625)
 	want := fmt.Sprintf("%.1f P2  current", tau)
-	if !strings.Contains(out, "max stress (psi)") || !strings.Contains(out, want) || !strings.Contains(out, "shear stress V_i/(L_i t)") {
+	if !strings.Contains(out, "max stress (psi)") || !strings.Contains(out, want) || !strings.Contains(flat, "shear stress V_i/(L_i t)") {
 		t.Errorf("want the stress column with %q:\n%s", want, out)
 	}
 	// Positions of a US wall in feet-inches: W2 at 18 ft, sill 3 ft.
@@ -69,7 +70,35 @@ func TestSweepTableStressOrShare(t *testing.T) {
 		t.Fatal(err)
 	}
 	out = b.String()
-	if !strings.Contains(out, "max share/L (1/ft)") || !strings.Contains(out, "share/L_i (the wall has no load") || strings.Contains(out, "stress V_i") {
+	flat = strings.Join(strings.Fields(out), " ")
+	if !strings.Contains(out, "max share/L (1/ft)") || !strings.Contains(flat, "share/L_i (the wall has no load") || strings.Contains(flat, "stress V_i") {
 		t.Errorf("want the share/L column and its footnote without a load:\n%s", out)
+	}
+}
+
+// The sweep table's notes keep to 78 columns like the reports.
+func TestSweepTableNotesWrap(t *testing.T) {
+	w := sweepWall(true)
+	pts, err := study.Sweep(w, "W2", study.AlongX, 4*geometry.Foot)
+	if err != nil {
+		t.Fatal(err)
+	}
+	var b bytes.Buffer
+	if err := SweepTable(&b, w, "W2", study.AlongX, 4*geometry.Foot, pts); err != nil {
+		t.Fatal(err)
+	}
+	lines := strings.Split(b.String(), "\n")
+	notes := false
+	for _, l := range lines {
+		if l == "" {
+			notes = true // the notes follow the blank line after the table
+			continue
+		}
+		if notes && len([]rune(l)) > 78 {
+			t.Errorf("note line of %d columns: %q", len([]rune(l)), l)
+		}
+	}
+	if !notes {
+		t.Error("no notes after the table")
 	}
 }
