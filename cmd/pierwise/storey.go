@@ -63,7 +63,7 @@ func writeStoreyTables(out io.Writer, a *storey.Analysis) {
 		title = s.Path
 	}
 	fmt.Fprintf(out, "%s  (%s)\n", title, s.Path)
-	fmt.Fprintf(out, "storey shear %s, mass centre (%.2f, %.2f) %s, centre of rigidity (%.2f, %.2f) %s\n",
+	fmt.Fprintf(out, "storey shear %s, mass centre (%.2f, %.2f) %s\ncentre of rigidity (%.2f, %.2f) %s\n",
 		geometry.FormatForce(s.Shear, s.Units), u.CoordOf(float64(s.MassCenter[0])), u.CoordOf(float64(s.MassCenter[1])), u.Coord,
 		u.CoordOf(d.CenterOfRigidity[0]), u.CoordOf(d.CenterOfRigidity[1]), u.Coord)
 	if a.Absolute {
@@ -72,14 +72,14 @@ func writeStoreyTables(out io.Writer, a *storey.Analysis) {
 		fmt.Fprintln(out, "rigidities: relative × thickness (not every wall has a modulus)")
 	}
 	for _, c := range d.Cases {
-		fmt.Fprintf(out, "\ncase %s: e = %.2f %s, V·e = %.1f %s\n", c.Name(), u.CoordOf(c.Eccentricity), u.Coord, u.MomentOf(c.Torque), u.Moment)
+		fmt.Fprintf(out, "\ncase %s: e = %.2f %s, V·e = %.1f %s; shears in %s\n", c.Name(), u.CoordOf(c.Eccentricity), u.Coord, u.MomentOf(c.Torque), u.Moment, u.Force)
 		// The distribution uses R = E·t·R rel: when the walls' moduli or
 		// thicknesses differ, only that column explains the direct shears.
 		head := []string{"wall", "dir", "R rel"}
 		if a.Absolute {
 			head = append(head, "R "+u.Rigidity)
 		}
-		tw := newTextTable(append(head, "direct "+u.Force, "torsion "+u.Force, "total "+u.Force)...)
+		tw := newTextTable(append(head, "direct", "torsion", "total")...)
 		for i, w := range a.Walls {
 			sh := c.Shares[i]
 			direct := "-"
@@ -121,9 +121,9 @@ func writeStoreyTables(out io.Writer, a *storey.Analysis) {
 		tw.write(out)
 	}
 	for _, msg := range a.Warnings {
-		fmt.Fprintln(out, "warning:", msg)
+		fmt.Fprintln(out, wrap("warning: ", msg, 78))
 	}
-	fmt.Fprintln(out, "\nResults support, and do not replace, the judgement of a licensed engineer; local codes govern.")
+	fmt.Fprintln(out, "\nResults support, and do not replace, the judgement of a licensed engineer;\nlocal codes govern.")
 }
 
 // grouped formats a large quantity rounded to a whole number with its

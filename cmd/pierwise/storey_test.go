@@ -81,6 +81,12 @@ func TestStoreyTable(t *testing.T) {
 			t.Errorf("output lacks %q:\n%s", want, out)
 		}
 	}
+	// It fits an 80-column terminal, with the report's 78-column margin.
+	for _, l := range strings.Split(out, "\n") {
+		if n := len([]rune(l)); n > 78 {
+			t.Errorf("line of %d columns: %q", n, l)
+		}
+	}
 }
 
 func TestStoreyExitStatus(t *testing.T) {
