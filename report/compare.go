@@ -282,7 +282,7 @@ type ComparePierRow struct {
 	Change                  string // "+1.9 pt"
 	ShearBefore, ShearAfter string // pier shear with unit, "-" without a load
 	FEBefore, FEAfter       string // FE shares when the check ran, else ""
-	Note                    string // "appears at x 12.0-18.0 ft", "vanishes …"
+	Note                    string // "appears", "vanishes" or "renamed" (where: CompareWarnings)
 	Status                  study.Status
 }
 
@@ -324,9 +324,9 @@ func ComparePierRows(c *study.Comparison) []ComparePierRow {
 		}
 		switch pc.Status() {
 		case study.Appears:
-			r.Note = "appears, x " + cmpSpan(pc.After.Rect, sys)
+			r.Note = "appears" // where: in the warnings, to keep 78 columns
 		case study.Vanishes:
-			r.Note = "vanishes, x " + cmpSpan(pc.Before.Rect, sys)
+			r.Note = "vanishes"
 		default:
 			if pc.Before.Name != pc.After.Name {
 				r.Note = "renamed"
@@ -388,8 +388,8 @@ func CompareWarnings(c *study.Comparison) []string {
 	for _, pc := range c.Piers {
 		switch pc.Status() {
 		case study.Appears:
-			out = append(out, fmt.Sprintf("Pier %s of %s has no counterpart in %s: design it on its own.",
-				pc.After.Name, c.After.Label, c.Before.Label))
+			out = append(out, fmt.Sprintf("Pier %s of %s (x %s) has no counterpart in %s: design it on its own.",
+				pc.After.Name, c.After.Label, cmpSpan(pc.After.Rect, c.Before.Wall.Units), c.Before.Label))
 		case study.Vanishes:
 			// The wall of a vanished pier is now inside another pier or an
 			// opening; it may carry more shear than before, not less.

@@ -87,9 +87,16 @@ func TestCompareReportGolden(t *testing.T) {
 	if !strings.Contains(text, "do not replace, the judgement of a licensed engineer; local codes govern") {
 		t.Error("no caution")
 	}
-	// The pier right of W2 vanishes when W2 moves to the wall's end.
-	if !strings.Contains(text, "vanishes") {
-		t.Error("no vanishing pier called out")
+	// The pier right of W2 vanishes when W2 moves to the wall's end; the
+	// warning says where it was, in the wall's units.
+	if !strings.Contains(text, "vanishes") || !strings.Contains(text, `Pier P2.3 of main (x 24'-0" to 30'-0") has no counterpart`) {
+		t.Error("no vanishing pier called out with its place")
+	}
+	// Every line but the shared caution keeps the 78-column margin.
+	for _, l := range strings.Split(buf.String(), "\n") {
+		if n := len([]rune(l)); n > 78 && !strings.Contains(Caution, l) {
+			t.Errorf("line of %d columns: %q", n, l)
+		}
 	}
 }
 
