@@ -393,8 +393,12 @@ func CompareWarnings(c *study.Comparison) []string {
 		case study.Vanishes:
 			// The wall of a vanished pier is now inside another pier or an
 			// opening; it may carry more shear than before, not less.
-			out = append(out, fmt.Sprintf("Pier %s of %s (x %s) has no counterpart in %s: that stretch of wall is now part of other piers or of an opening; check its reinforcement against the piers of %s.",
-				pc.Before.Name, c.Before.Label, cmpSpan(pc.Before.Rect, c.Before.Wall.Units), c.After.Label, c.After.Label))
+			where := fmt.Sprintf("Pier %s of %s (x %s) has no counterpart in %s", pc.Before.Name, c.Before.Label, cmpSpan(pc.Before.Rect, c.Before.Wall.Units), c.After.Label)
+			if len(c.After.Wall.Openings()) == 0 {
+				out = append(out, where+": that layout has no openings, so the whole wall works as one solid pier.")
+			} else {
+				out = append(out, where+": that stretch of wall is now part of other piers or of an opening; check its reinforcement against the piers of "+c.After.Label+".")
+			}
 		}
 	}
 	if rb, ra := c.Before.Result, c.After.Result; rb != nil && ra != nil && rb.HasLoad && ra.HasLoad && rb.Drift.Allowable > 0 {

@@ -177,3 +177,19 @@ func TestCompareReportFE(t *testing.T) {
 		}
 	}
 }
+
+// Against a layout without openings every pier vanishes, and the warning
+// says the wall is one solid pier there rather than pointing at piers that
+// do not exist.
+func TestCompareWarningsSolidLayout(t *testing.T) {
+	w := cmpTestWall()
+	w.Layouts[1].Openings = nil
+	c, err := study.Compare(study.WithLayout(w, 0), study.WithLayout(w, 1))
+	if err != nil {
+		t.Fatal(err)
+	}
+	text := strings.Join(CompareWarnings(c), "\n")
+	if !strings.Contains(text, "that layout has no openings, so the whole wall works as one solid pier") || strings.Contains(text, "check its reinforcement against the piers of") {
+		t.Errorf("warnings:\n%s", text)
+	}
+}
