@@ -96,4 +96,30 @@ type Result struct {
 	Drift         DriftCheck      // filled when HasLoad
 
 	Warnings []string // where the method's assumptions are weak
+
+	// WarningKinds gives the kind of each warning (one of the Warn…
+	// constants), parallel to Warnings, so that tools can tell them apart
+	// without reading the text.
+	WarningKinds []string
+}
+
+// Kinds of warnings (Result.WarningKinds).
+const (
+	WarnCutPier      = "pier without load path"
+	WarnStaggered    = "staggered band"
+	WarnSpandrel     = "shallow spandrel"
+	WarnSolidBetween = "thin solid between bands"
+	WarnSliver       = "sliver pier"
+	WarnSlender      = "slender pier"
+	WarnSlenderWall  = "slender wall"
+	WarnNearEdge     = "opening near base or top"
+	WarnFixedPiers   = "fixed piers"
+	WarnFixedTop     = "fixed top"
+)
+
+// LayoutWarning reports whether a warning kind comes from the layout of the
+// openings (where they are), rather than from the method as a whole (fixed
+// piers, a fixed top), which every layout of the wall shares.
+func LayoutWarning(kind string) bool {
+	return kind != WarnFixedPiers && kind != WarnFixedTop
 }

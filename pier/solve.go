@@ -139,7 +139,7 @@ func (s *solver) region(rect geometry.Rect, sup geometry.Support, ops []opening,
 	}
 	if self >= 0 { // step 2 (the wall was checked by Solve)
 		if op, cut := s.cutAcross(rect, ops); cut {
-			s.warn(fmt.Sprintf("pier %s: opening %s leaves no load path through it; it is given no rigidity and no share", name, op))
+			s.warn(WarnCutPier, fmt.Sprintf("pier %s: opening %s leaves no load path through it; it is given no rigidity and no share", name, op))
 			return Parts{}, true, nil
 		}
 	}
@@ -236,7 +236,7 @@ func (s *solver) region(rect geometry.Rect, sup geometry.Support, ops []opening,
 		s.step(StepPiers, name, bandRect, bandSup, dBand, names)
 		if allCuts {
 			s.res.Steps[len(s.res.Steps)-1].AllCuts = true
-			s.warn(fmt.Sprintf("in %s no opening of %s spans the full height of their band: each is taken as a cut and the piers between them as the band's full height, a rough reading of staggered openings", where(name), strings.Join(bandNames(b, ops), ", ")))
+			s.warn(WarnStaggered, fmt.Sprintf("in %s no opening of %s spans the full height of their band: each is taken as a cut and the piers between them as the band's full height, a rough reading of staggered openings", where(name), strings.Join(bandNames(b, ops), ", ")))
 		}
 	}
 	return d, false, nil

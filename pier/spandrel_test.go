@@ -114,3 +114,29 @@ func TestPoissonGivesShearModulus(t *testing.T) {
 		t.Error("ν = 0.5 accepted")
 	}
 }
+
+// Every warning has a kind, parallel to the text; the sliver pier of a
+// window 6 in from the end is a layout warning, the note on fixed piers is
+// not (every layout of the wall has it).
+func TestWarningKinds(t *testing.T) {
+	r, err := Solve(wallFt(20, 10, geometry.Cantilever, [4]float64{0.5, 3, 4, 4}))
+	if err != nil {
+		t.Fatal(err)
+	}
+	if len(r.WarningKinds) != len(r.Warnings) {
+		t.Fatalf("%d kinds for %d warnings", len(r.WarningKinds), len(r.Warnings))
+	}
+	kinds := map[string]string{}
+	for i, k := range r.WarningKinds {
+		kinds[k] = r.Warnings[i]
+	}
+	if m := kinds[WarnSliver]; !strings.Contains(m, "sliver") {
+		t.Errorf("sliver kind on %q", m)
+	}
+	if m := kinds[WarnFixedPiers]; !strings.Contains(m, "piers marked fixed") {
+		t.Errorf("fixed-piers kind on %q", m)
+	}
+	if !LayoutWarning(WarnSliver) || LayoutWarning(WarnFixedPiers) || LayoutWarning(WarnFixedTop) {
+		t.Error("LayoutWarning: sliver is one, fixed piers and fixed top are not")
+	}
+}

@@ -48,6 +48,7 @@ func SweepTable(out io.Writer, w *geometry.Wall, name string, axis study.Axis, s
 	}
 	head = append(head, stressHead, "")
 	rows := [][]string{head}
+	weak := false
 	for _, p := range pts {
 		r := []string{pos(p.X), pos(p.Y)}
 		if p.Err != nil {
@@ -88,6 +89,10 @@ func SweepTable(out io.Writer, w *geometry.Wall, name string, axis study.Axis, s
 		if p.Best {
 			marks = append(marks, "best")
 		}
+		if len(p.Weak) > 0 {
+			marks = append(marks, "! "+strings.Join(p.Weak, ", "))
+			weak = true
+		}
 		r = append(r, st, strings.Join(marks, ", "))
 		rows = append(rows, r)
 	}
@@ -95,6 +100,9 @@ func SweepTable(out io.Writer, w *geometry.Wall, name string, axis study.Axis, s
 	best := "Best: the lowest highest pier shear stress V_i/(L_i t)."
 	if !(w.Load.Shear > 0 && w.Thickness > 0) {
 		best = "Best: the lowest highest pier share/L_i (the wall has no load or thickness, so no stress)."
+	}
+	if weak {
+		best += " ! marks a position where the classic method warns of something it does not at the current position (solve that layout to read the warning); such a position is not taken as best."
 	}
 	_, err := fmt.Fprintln(out, "\n"+wrapText("R rel is the wall's relative rigidity (E = 1, t = 1) and change its change from the current position. Shares are fractions of the wall shear. "+best, 78)+"\n"+
 		wrapText("Results support, and do not replace, the judgement of a licensed engineer; local codes govern.", 78))

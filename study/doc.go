@@ -22,7 +22,10 @@
 // highest leaf-pier shear stress, V_i/(L_i·t), is lowest; with the wall's
 // thickness and shear the same at every position this is the position with
 // the lowest max(share_i/L_i), which is what is ranked, so a wall without a
-// load still has a best position.
+// load still has a best position. A position where the classic method warns
+// about the layout in a way it does not at the current position (a sliver
+// pier, a thin strip between bands, a shallow spandrel, a staggered band:
+// Point.Weak) is flagged, and is taken as best only when every position is.
 //
 // Units follow package geometry: lengths in metres, forces in newtons,
 // stresses in pascals; relative values are computed with E = 1 and t = 1.

@@ -4,6 +4,7 @@ import (
 	"errors"
 	"fmt"
 	"math"
+	"slices"
 	"strconv"
 	"strings"
 
@@ -61,7 +62,13 @@ type Point struct {
 	MaxStress   geometry.Stress
 
 	Current bool // the opening's position in the wall as given
-	Best    bool // the lowest StressIndex of the sweep (first such point)
+	Best    bool // the lowest StressIndex of the sweep (first such point), preferring points without Weak
+
+	// Weak lists the kinds of layout warnings (pier.LayoutWarning) the
+	// classic method gives here but not at the current position: a sliver
+	// pier, a thin strip between bands, a shallow spandrel… Its numbers are
+	// less to be trusted there.
+	Weak []string
 
 	Result *pier.Result // the full answer; nil when Err is set
 	Err    error        // the classic method has no answer here
@@ -148,8 +155,32 @@ func Sweep(w *geometry.Wall, name string, axis Axis, step geometry.Length) ([]Po
 		moved[idx] = m
 		pts = append(pts, solvePoint(&work, m, k == 0))
 	}
+	markWeak(pts)
 	markBest(pts)
 	return pts, nil
+}
+
+// markWeak sets Weak on the points with layout warnings of a kind the
+// current position does not have (all of their layout warnings when the
+// current position has no answer).
+func markWeak(pts []Point) {
+	base := map[string]bool{}
+	if i := CurrentIndex(pts); i >= 0 && pts[i].Result != nil {
+		for _, k := range pts[i].Result.WarningKinds {
+			base[k] = true
+		}
+	}
+	for i := range pts {
+		r := pts[i].Result
+		if r == nil {
+			continue
+		}
+		for _, k := range r.WarningKinds {
+			if pier.LayoutWarning(k) && !base[k] && !slices.Contains(pts[i].Weak, k) {
+				pts[i].Weak = append(pts[i].Weak, k)
+			}
+		}
+	}
 }
 
 // FormatStep shows a sweep step to people: as geometry.FormatLength does
@@ -192,11 +223,19 @@ func solvePoint(w *geometry.Wall, o geometry.Opening, current bool) Point {
 	return p
 }
 
-// markBest sets Best on the first solved point with the lowest StressIndex.
+// markBest sets Best on the first solved point with the lowest StressIndex,
+// among the points without Weak when there are any.
 func markBest(pts []Point) {
+	sound := false
+	for _, p := range pts {
+		if p.Err == nil && len(p.Weak) == 0 {
+			sound = true
+			break
+		}
+	}
 	best := -1
 	for i, p := range pts {
-		if p.Err != nil {
+		if p.Err != nil || (sound && len(p.Weak) > 0) {
 			continue
 		}
 		// A relative tolerance keeps ties (mirror positions) on the first.

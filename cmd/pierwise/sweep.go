@@ -81,6 +81,7 @@ type sweepPointJSON struct {
 	MaxStress        *float64        `json:"max_stress,omitempty"` // psi or MPa, with a load
 	Current          bool            `json:"current"`
 	Best             bool            `json:"best"`
+	Weak             []string        `json:"weak,omitempty"` // layout warnings here that the current position has not
 	Error            string          `json:"error,omitempty"`
 }
 
@@ -92,7 +93,7 @@ func writeSweepJSON(out io.Writer, w *geometry.Wall, pts []study.Point) error {
 		// Positions are k steps from the current one in metres; rounding to
 		// a nanometre-scale fraction of the base unit hides the float noise.
 		j := sweepPointJSON{X: sweepRound(float64(p.X) / base), Sill: sweepRound(float64(p.Y) / base), Piers: []sweepPierJSON{},
-			Current: p.Current, Best: p.Best}
+			Current: p.Current, Best: p.Best, Weak: p.Weak}
 		if p.Err != nil {
 			j.Error = p.Err.Error()
 		} else {
