@@ -267,6 +267,30 @@ func planWarnings(a *Analysis) []string {
 			out = append(out, fmt.Sprintf("every %s-wall stands on one line: the walls along %s resist all the torsion", d, d.other()))
 		}
 	}
+	// Two walls of one direction on one line that overlap along it are
+	// most likely the same wall listed twice: it would count double.
+	span := func(w Wall) (float64, float64) {
+		x0 := float64(w.Ref.Start)
+		if !w.Ref.HasStart {
+			x0 = (float64(s.Size[w.Ref.Direction]) - float64(w.Wall.Length)) / 2
+		}
+		return x0, x0 + float64(w.Wall.Length)
+	}
+	for i, wi := range a.Walls {
+		for j := i + 1; j < len(a.Walls); j++ {
+			wj := a.Walls[j]
+			tol := 1e-6 * float64(s.Size[wi.Ref.Direction.other()])
+			if wi.Ref.Direction != wj.Ref.Direction || math.Abs(float64(wi.Ref.Position-wj.Ref.Position)) > tol {
+				continue
+			}
+			a0, a1 := span(wi)
+			b0, b1 := span(wj)
+			if overlap := math.Min(a1, b1) - math.Max(a0, b0); overlap > tol {
+				out = append(out, fmt.Sprintf("walls %d (%s) and %d (%s) stand on the same line and overlap along it by %s: if they are one wall, it is counted twice",
+					i+1, wi.Name, j+1, wj.Name, fmtLen(geometry.Length(overlap), s.Units)))
+			}
+		}
+	}
 	hmin, hmax := math.Inf(1), math.Inf(-1)
 	for _, w := range a.Walls {
 		hmin = math.Min(hmin, float64(w.Wall.Height))

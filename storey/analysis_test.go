@@ -203,3 +203,34 @@ func TestAnalyseSameFileTwiceNamesApart(t *testing.T) {
 		t.Errorf("third wall named %q, want \"Typical wall (wall 3)\"", a.Walls[2].Name)
 	}
 }
+
+// The same wall listed twice on one line is counted twice by the
+// distribution; the storey says so. Walls on distinct lines or apart along
+// one line are not called out.
+func TestAnalyseWarnsOverlappingWalls(t *testing.T) {
+	s, walls := symmetricStorey(0.05)
+	a, err := Analyse(s, walls)
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, m := range a.Warnings {
+		if strings.Contains(m, "overlap") {
+			t.Errorf("symmetric storey: %q", m)
+		}
+	}
+	s.Walls = append(s.Walls, s.Walls[0])
+	s.Walls[len(s.Walls)-1].Name = "S again"
+	walls = append(walls, walls[0])
+	if a, err = Analyse(s, walls); err != nil {
+		t.Fatal(err)
+	}
+	found := false
+	for _, m := range a.Warnings {
+		if strings.Contains(m, "walls 1 (S) and 7 (S again) stand on the same line and overlap along it by 80'-0\"") {
+			found = true
+		}
+	}
+	if !found {
+		t.Errorf("no overlap warning in %q", a.Warnings)
+	}
+}
