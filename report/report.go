@@ -9,8 +9,10 @@ import (
 	"fmt"
 	"io"
 	"math"
+	"os"
 	"strings"
 	"time"
+	"unicode/utf8"
 
 	"pierwise/geometry"
 	"pierwise/pier"
@@ -44,7 +46,7 @@ func Wall(out io.Writer, in Input) error {
 
 	w.Title("PIERWISE WALL REPORT")
 	w.KV("Title", orDash(wall.Title))
-	w.KV("File", orDefault(in.Path, "(built-in demo wall)"))
+	w.KV("File", orDefault(fileOf(in.Path), "(built-in demo wall)"))
 	w.KV("Layout", layoutLine(wall))
 	w.KV("Date", in.Now.Format("2006-01-02 15:04 MST"))
 	w.KV("Program", "pierwise "+in.Version)
@@ -59,7 +61,7 @@ func Wall(out io.Writer, in Input) error {
 
 	if in.Result == nil {
 		w.Section("3. Classic method")
-		w.Para(fmt.Sprintf("The classic method cannot be applied to this layout: %v.", in.Err))
+		w.Wrapped("  ", fmt.Sprintf("The classic method cannot be applied to this layout: %v.", in.Err))
 		if in.FE != nil {
 			w.Section("4. Finite-element check")
 			feSection(w, in.FE, nil, wall)
@@ -92,6 +94,9 @@ func Wall(out io.Writer, in Input) error {
 
 	w.Section(fmt.Sprintf("%d. Warnings", n))
 	warns := append([]string(nil), res.Warnings...)
+	if in.FE != nil {
+		warns = append(warns, in.FE.Warnings...)
+	}
 	if in.FE != nil && math.Abs(in.FE.Difference) > fe.WarnDifference {
 		warns = append(warns, fmt.Sprintf("The classic method's rigidity differs from the finite-element model's by %+.0f %% (more than ±%.0f %%): the piers are not as well fixed as the method assumes; prefer the finite-element rigidity for distributing shear, or justify the difference.", 100*in.FE.Difference, 100*fe.WarnDifference))
 	}
@@ -145,33 +150,46 @@ func inputs(w *Text, wall *geometry.Wall, res *pier.Result) {
 }
 
 func steps(w *Text, res *pier.Result, wall *geometry.Wall) {
-	u := UnitsFor(wall.Units)
 	dim := func(r geometry.Rect) string {
 		return fmt.Sprintf("h %s × L %s", geometry.FormatLength(geometry.Length(r.H()), wall.Units), geometry.FormatLength(geometry.Length(r.W()), wall.Units))
 	}
-	_ = u
+	type row struct {
+		label, sign string
+		value       float64
+	}
+	var rows []row
 	for _, s := range res.Steps {
 		indent := "  " + strings.Repeat("    ", depth(s.Region))
 		where := "wall"
 		if s.Region != "" && s.Region != "wall" {
 			where = "pier " + s.Region
 		}
-		var text, sign string
 		switch s.Kind {
 		case pier.StepSolid:
-			sign = "+"
-			text = fmt.Sprintf("%s as solid, %s, %s", where, dim(s.Rect), supportShort(s.Support))
+			rows = append(rows, row{indent + fmt.Sprintf("%s as solid, %s, %s", where, dim(s.Rect), supportShort(s.Support)), "+", s.Deflection})
 		case pier.StepStrip:
-			sign = "−"
-			text = fmt.Sprintf("strip %s…%s, %s, %s", yText(s.Rect.Y0, wall), yText(s.Rect.Y1, wall), dim(s.Rect), supportShort(s.Support))
+			rows = append(rows, row{indent + fmt.Sprintf("strip %s…%s, %s, %s", yText(s.Rect.Y0, wall), yText(s.Rect.Y1, wall), dim(s.Rect), supportShort(s.Support)), "−", s.Deflection})
 		case pier.StepPiers:
-			sign = "+"
-			text = fmt.Sprintf("piers %s in parallel: 1/Σ(1/Δ)", strings.Join(s.Piers, ", "))
+			rows = append(rows, row{indent + fmt.Sprintf("piers %s in parallel: 1/Σ(1/Δ)", pierList(s.Piers)), "+", s.Deflection})
 		}
-		w.Line(fmt.Sprintf("%-58s %s %8.4f", indent+text, sign, s.Deflection))
 	}
-	w.Line(fmt.Sprintf("%-58s = %8.4f", "  wall deflection Δ", res.Deflection))
-	w.Line(fmt.Sprintf("%-58s = %8.4f", "  relative rigidity R = 1/Δ", res.Rigidity))
+	rows = append(rows, row{"  wall deflection Δ", "=", res.Deflection}, row{"  relative rigidity R = 1/Δ", "=", res.Rigidity})
+	width := 0
+	for _, r := range rows {
+		width = max(width, utf8.RuneCountInString(r.label))
+	}
+	for _, r := range rows {
+		w.Line(fmt.Sprintf("%-*s %s %8.4f", width, r.label, r.sign, r.value))
+	}
+}
+
+// pierList names the piers of a band: all of them up to three, else the
+// first and the last (a band's piers are numbered in a row).
+func pierList(names []string) string {
+	if len(names) <= 3 {
+		return strings.Join(names, ", ")
+	}
+	return fmt.Sprintf("%s … %s (%d)", names[0], names[len(names)-1], len(names))
 }
 
 func pierTable(w *Text, res *pier.Result, wall *geometry.Wall) {
@@ -220,7 +238,7 @@ func results(w *Text, res *pier.Result, wall *geometry.Wall, u Units) {
 		w.KV("Rigidity", "not known: the material gives no modulus")
 		return
 	}
-	w.KV("Rigidity", fmt.Sprintf("R = %s %s  (R relative × E·t)", num(u.RigidityOf(res.RigidityAbs)), u.Rigidity))
+	w.KV("Rigidity", fmt.Sprintf("R = %s %s  (R relative × E·t)", Number(u.RigidityOf(res.RigidityAbs)), u.Rigidity))
 	if !res.HasLoad {
 		w.KV("Deflection", "no load given")
 		return
@@ -278,6 +296,18 @@ func yText(y float64, wall *geometry.Wall) string {
 	return geometry.FormatLength(geometry.Length(y), wall.Units)
 }
 
+// fileOf returns the file of a FILE[:LAYOUT] argument; the layout has its
+// own line.
+func fileOf(arg string) string {
+	if _, err := os.Stat(arg); err == nil {
+		return arg
+	}
+	if i := strings.LastIndex(arg, ":"); i > 0 {
+		return arg[:i]
+	}
+	return arg
+}
+
 func layoutLine(w *geometry.Wall) string {
 	if len(w.Layouts) == 0 {
 		return "-"
@@ -328,6 +358,9 @@ func materialLine(m geometry.Material, sys geometry.System) string {
 	if m.ShearModulus > 0 {
 		s += ", E_v given = " + geometry.FormatStress(m.ShearModulus, sys)
 	}
+	if m.Poisson > 0 {
+		s += fmt.Sprintf(", ν = %.3g given", m.Poisson)
+	}
 	return s
 }
 
@@ -361,9 +394,9 @@ func orDefault(s, d string) string {
 	return s
 }
 
-// num prints a positive number with about four significant figures without
-// switching to exponent notation for ordinary magnitudes.
-func num(x float64) string {
+// Number prints a result with about four significant figures and never in
+// exponent notation for the magnitudes of this trade (11604, not 1.16e+04).
+func Number(x float64) string {
 	switch a := math.Abs(x); {
 	case a >= 1000:
 		return fmt.Sprintf("%.0f", x)
