@@ -4,6 +4,7 @@ import (
 	"errors"
 	"fmt"
 	"math"
+	"strings"
 
 	"pierwise/geometry"
 	"pierwise/pier"
@@ -67,7 +68,8 @@ type Result struct {
 	DOFs       int    // free degrees of freedom (equations solved)
 	Element    string // "q4" or "qm6"
 	Piers      []PierShare
-	Difference float64 // (classic rigidity − FE rigidity) / FE rigidity; 0 without a classic result
+	Difference float64  // (classic rigidity − FE rigidity) / FE rigidity; 0 without a classic result
+	Warnings   []string // where the model's answer is not comparable with the classic one
 }
 
 // PierShare is the fraction of the wall shear that crosses a leaf pier's
@@ -103,7 +105,27 @@ func Solve(w *geometry.Wall, classic *pier.Result, opt Options) (*Result, error)
 	if classic != nil && classic.Rigidity > 0 && !math.IsInf(classic.Rigidity, 0) {
 		r.Difference = (classic.Rigidity - r.Rigidity) / r.Rigidity
 	}
+	r.Warnings = topWarnings(w)
 	return r, nil
+}
+
+// topWarnings warns when openings reach the top of the wall. The model
+// spreads the shear over the top edge by tributary length and nothing ties
+// the pier tops together, so each pier there takes the load on its own
+// top: its share follows the load, not its stiffness, while the classic
+// method (and a real collector or bond beam) makes the tops move together.
+func topWarnings(w *geometry.Wall) []string {
+	top := float64(w.Height)
+	var names []string
+	for _, o := range w.Openings() {
+		if r := o.Rect(); r.Y1 >= top-1e-9*top {
+			names = append(names, o.Name)
+		}
+	}
+	if len(names) == 0 {
+		return nil
+	}
+	return []string{fmt.Sprintf("openings %s reach the top of the wall: the model has no collector tying the pier tops together, so each pier takes the shear on its own top length; its pier shares and rigidity are not comparable with the classic method's for this wall", strings.Join(names, ", "))}
 }
 
 // prepare checks the arguments of Solve and returns the element, the element
@@ -114,7 +136,7 @@ func prepare(w *geometry.Wall, classic *pier.Result, opt Options) (kind string, 
 	}
 	length, height := float64(w.Length), float64(w.Height)
 	if !(length > 0) || !(height > 0) || math.IsInf(length, 0) || math.IsInf(height, 0) {
-		return "", 0, d, nil, fmt.Errorf("fe: the wall needs a positive length and height (got %g m × %g m)", length, height)
+		return "", 0, d, nil, fmt.Errorf("the wall needs a positive length and height (got %g m × %g m)", length, height)
 	}
 	kind = opt.Element
 	if kind == "" {
@@ -124,14 +146,14 @@ func prepare(w *geometry.Wall, classic *pier.Result, opt Options) (kind string, 
 		kind = ElementQM6
 	}
 	if kind != ElementQ4 && kind != ElementQM6 {
-		return "", 0, d, nil, fmt.Errorf("fe: unknown element %q (want %q or %q)", kind, ElementQ4, ElementQM6)
+		return "", 0, d, nil, fmt.Errorf("unknown finite-element type %q (want %q or %q)", kind, ElementQ4, ElementQM6)
 	}
 	size = float64(opt.Mesh)
 	if size == 0 {
 		size = float64(w.Check.Mesh)
 	}
 	if size < 0 || math.IsNaN(size) || math.IsInf(size, 0) {
-		return "", 0, d, nil, fmt.Errorf("fe: the mesh size must be positive (got %g m)", size)
+		return "", 0, d, nil, fmt.Errorf("the mesh size must be positive (got %g m)", size)
 	}
 	if size == 0 {
 		size = float64(DefaultMesh)
@@ -190,7 +212,7 @@ func buildModel(w *geometry.Wall, leaves []pier.Pier, size float64, kind string,
 	}
 	m := newMesh(length, height, openingRects(w), xk, yk, size)
 	if len(m.elems) == 0 {
-		return nil, errors.New("fe: the openings leave no solid wall to model")
+		return nil, errors.New("the openings leave no solid wall to model")
 	}
 	md := newModel(m, kind, d)
 	top := m.ny
@@ -210,7 +232,7 @@ func tooFine(w *geometry.Wall, size float64) error {
 	if w.Units == geometry.SI {
 		el = fmt.Sprintf("%.3g mm", size/float64(geometry.Millimetre))
 	}
-	return fmt.Errorf("fe: a mesh of %s is too fine for this %s × %s wall: the model would need more than %d MB; use a larger element size",
+	return fmt.Errorf("a mesh of %s is too fine for this %s × %s wall: the model would need more than %d MB; use a larger element size",
 		el, geometry.FormatLength(w.Length, w.Units), geometry.FormatLength(w.Height, w.Units), maxBand*8/1_000_000)
 }
 
@@ -226,7 +248,7 @@ func topLoad(m *mesh) ([]float64, []int, error) {
 		}
 	}
 	if !(total > 0) {
-		return nil, nil, errors.New("fe: the top edge of the wall is all opening: the shear has nowhere to go")
+		return nil, nil, errors.New("the top edge of the wall is all opening: the shear has nowhere to go")
 	}
 	var tops []int
 	for i := 0; i < m.nx; i++ {
@@ -303,7 +325,7 @@ func elasticityOf(w *geometry.Wall) (elasticity, error) {
 		nu = float64(mod.E)/(2*float64(mod.Ev)) - 1
 	}
 	if !(nu > -1 && nu < 0.5) {
-		return elasticity{}, fmt.Errorf("fe: E_v/E = %.3g gives Poisson's ratio %.3g; a plane-stress model needs E_v/E above 1/3", 1/(2*(nu+1)), nu)
+		return elasticity{}, fmt.Errorf("E_v/E = %.3g gives Poisson's ratio %.3g; a plane-stress model needs E_v/E above 1/3", 1/(2*(nu+1)), nu)
 	}
 	kf, kv := w.Stiffness.Flexure, w.Stiffness.Shear
 	if kf == 0 {
@@ -313,7 +335,7 @@ func elasticityOf(w *geometry.Wall) (elasticity, error) {
 		kv = 1
 	}
 	if !(kf > 0) || !(kv > 0) || kf*nu*nu >= 1 || math.IsInf(kf, 0) || math.IsInf(kv, 0) {
-		return elasticity{}, fmt.Errorf("fe: stiffness modifiers flexure = %g, shear = %g are out of range", kf, kv)
+		return elasticity{}, fmt.Errorf("stiffness modifiers flexure = %g, shear = %g are out of range", kf, kv)
 	}
 	if kf == 1 && kv == 1 {
 		return isotropic(1, nu), nil

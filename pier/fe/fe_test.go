@@ -5,6 +5,7 @@ import (
 	"math"
 	"math/rand/v2"
 	"path/filepath"
+	"strings"
 	"testing"
 
 	"pierwise/geometry"
@@ -447,5 +448,28 @@ func TestConvergenceWallFiles(t *testing.T) {
 		if rel := math.Abs(a.Deflection/b.Deflection - 1); rel > 0.01 {
 			t.Errorf("%s: qm6 %.6g at the default mesh, %.6g at half size (%.2f %%)", f, a.Deflection, b.Deflection, 100*rel)
 		}
+	}
+}
+
+// A wall whose openings reach its top has pier tops that nothing ties
+// together in the model: the result says its shares are not comparable.
+func TestWarnsWhenOpeningsReachTheTop(t *testing.T) {
+	ft := geometry.Foot
+	w := &geometry.Wall{
+		Length: 30 * ft, Height: 12 * ft, Thickness: 8 * geometry.Inch,
+		Layouts: []geometry.Layout{{Name: "main", Openings: []geometry.Opening{
+			{Name: "W1", X: 3 * ft, Sill: 4 * ft, Width: 5 * ft, Height: 8 * ft},
+		}}},
+	}
+	res, err := Solve(w, nil, Options{Mesh: 1 * ft})
+	if err != nil {
+		t.Fatal(err)
+	}
+	if len(res.Warnings) != 1 || !strings.Contains(res.Warnings[0], "W1") {
+		t.Errorf("warnings = %q, want one naming W1", res.Warnings)
+	}
+	w.Layouts[0].Openings[0].Height = 4 * ft // now under a spandrel
+	if res, err = Solve(w, nil, Options{Mesh: 1 * ft}); err != nil || len(res.Warnings) != 0 {
+		t.Errorf("under a spandrel: warnings %q, err %v; want none", res.Warnings, err)
 	}
 }

@@ -122,7 +122,7 @@ var (
 	bandSolve bandSolveFn = solveAxpy
 )
 
-var errSingular = errors.New("fe: the stiffness matrix is singular: the wall is not held (no load path from its base to its top)")
+var errSingular = errors.New("the model has no load path from its base to its top (its stiffness matrix is singular)")
 
 // solve returns the nodal displacements (2 per node) under the nodal forces
 // f (2 per node), with the prescribed DOFs held at the values of u0 (nil =
