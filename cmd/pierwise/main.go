@@ -98,7 +98,9 @@ func status(e *env, err error) int {
 	if err == nil {
 		return exitOK
 	}
-	if errors.Is(err, flag.ErrHelp) {
+	var help *helpRequest
+	if errors.As(err, &help) {
+		help.print(e.stdout)
 		return exitOK
 	}
 	var ue *usageError
@@ -133,8 +135,28 @@ func printUsage(w io.Writer) {
 // errors instead of exiting.
 func newFlags(e *env, name string) *flag.FlagSet {
 	fs := flag.NewFlagSet("pierwise "+name, flag.ContinueOnError)
-	fs.SetOutput(e.stderr)
+	// The flag package would print a parse error and the flags itself;
+	// status prints the error once, and -h prints the flags (helpRequest).
+	fs.SetOutput(io.Discard)
+	fs.Usage = func() {}
 	return fs
+}
+
+// helpRequest is the answer to -h: print the command's synopsis and flags.
+type helpRequest struct{ fs *flag.FlagSet }
+
+func (h *helpRequest) Error() string { return "help requested" }
+
+func (h *helpRequest) Is(target error) bool { return target == flag.ErrHelp }
+
+func (h *helpRequest) print(w io.Writer) {
+	name := strings.TrimPrefix(h.fs.Name(), "pierwise ")
+	if c, ok := commands[name]; ok {
+		fmt.Fprintf(w, "usage: pierwise %s %s\n  %s\n\nflags:\n", c.name, c.args, c.short)
+	}
+	h.fs.SetOutput(w)
+	h.fs.PrintDefaults()
+	h.fs.SetOutput(io.Discard)
 }
 
 // parseInterleaved parses flags that may come before, between or after the
@@ -144,7 +166,7 @@ func parseInterleaved(fs *flag.FlagSet, args []string) ([]string, error) {
 	for {
 		if err := fs.Parse(args); err != nil {
 			if errors.Is(err, flag.ErrHelp) {
-				return nil, err
+				return nil, &helpRequest{fs}
 			}
 			return nil, usagef("%v", err)
 		}

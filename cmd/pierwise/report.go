@@ -42,6 +42,9 @@ func runReport(e *env, args []string) error {
 	var classicErr error // the report is written, but the wall has no answer
 	now := time.Now()
 	if isStorey(arg) {
+		if ff.on {
+			return usagef("--fe, --mesh and --element apply to wall files, not to the storey file %s", arg)
+		}
 		if err := storey.WriteReport(&buf, arg, now); err != nil {
 			return err
 		}

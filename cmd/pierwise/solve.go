@@ -187,26 +187,31 @@ func writeSolveTable(out io.Writer, s *solved) {
 	}
 	fmt.Fprintf(out, "  relative deflection %.4f /(E·t), relative rigidity %.4f E·t (bending %.0f %%, shear %.0f %%)\n", r.Deflection, r.Rigidity, 100*bend, 100*(1-bend))
 	if r.Moduli.E > 0 {
-		fmt.Fprintf(out, "  E = %s, E_v = %s; rigidity %.4g %s\n", geometry.FormatStress(r.Moduli.E, w.Units), geometry.FormatStress(r.Moduli.Ev, w.Units), u.RigidityOf(r.RigidityAbs), u.Rigidity)
+		fmt.Fprintf(out, "  E = %s, E_v = %s; rigidity %s %s\n", geometry.FormatStress(r.Moduli.E, w.Units), geometry.FormatStress(r.Moduli.Ev, w.Units), report.Number(u.RigidityOf(r.RigidityAbs)), u.Rigidity)
 	}
 	if r.HasLoad {
 		d := r.Drift
 		check := "no limit set"
 		if d.Allowable > 0 {
-			check = fmt.Sprintf("limit %.4g %s: ", u.DeflectionOf(d.Allowable), u.Deflection)
+			check = fmt.Sprintf("limit %s %s: ", report.Number(u.DeflectionOf(d.Allowable)), u.Deflection)
 			if d.OK {
 				check += "OK"
 			} else {
 				check += "EXCEEDED"
 			}
 		}
-		fmt.Fprintf(out, "  V = %s: δe = %.4g %s, δ = Cd·δe/Ie = %.4g %s (%.5f h), %s\n", geometry.FormatForce(w.Load.Shear, w.Units), u.DeflectionOf(r.DeflectionAbs), u.Deflection, u.DeflectionOf(d.Design), u.Deflection, d.Ratio, check)
+		fmt.Fprintf(out, "  V = %s: δe = %s %s, δ = Cd·δe/Ie = %s %s (%.5f h), %s\n", geometry.FormatForce(w.Load.Shear, w.Units), report.Number(u.DeflectionOf(r.DeflectionAbs)), u.Deflection, report.Number(u.DeflectionOf(d.Design)), u.Deflection, d.Ratio, check)
+	}
+	if len(r.Piers) == 0 {
+		fmt.Fprintln(out, "  no openings: the wall is one solid pier")
 	}
 	head := fmt.Sprintf("  %-8s %9s %9s %6s %-10s %9s %7s", "pier", "h", "L", "h/L", "support", "R rel", "share")
 	if r.HasLoad {
 		head += fmt.Sprintf(" %9s %11s", "V "+u.Force, "M "+u.Moment)
 	}
-	fmt.Fprintln(out, head)
+	if len(r.Piers) > 0 {
+		fmt.Fprintln(out, head)
+	}
 	for _, p := range r.Piers {
 		name := p.Name
 		if !p.Leaf {
@@ -249,6 +254,9 @@ func writeFETable(out io.Writer, s *solved) {
 			parts[i] = fmt.Sprintf("%s %.1f%%", p.Name, 100*p.Share)
 		}
 		fmt.Fprintf(out, "  finite-element shares: %s\n", strings.Join(parts, ", "))
+	}
+	for _, warn := range f.Warnings {
+		fmt.Fprintln(out, wrap("  warning: ", warn, 100))
 	}
 }
 
@@ -315,6 +323,7 @@ type jsonFE struct {
 	Elements           int           `json:"elements"`
 	DOFs               int           `json:"dofs"`
 	Piers              []jsonFEShare `json:"piers"`
+	Warnings           []string      `json:"warnings"`
 	Error              string        `json:"error,omitempty"`
 }
 
@@ -378,7 +387,7 @@ func toJSON(s *solved) jsonWall {
 		j.Warnings = append(j.Warnings, r.Warnings...)
 	}
 	if s.fe != nil || s.feErr != nil {
-		f := &jsonFE{Piers: []jsonFEShare{}}
+		f := &jsonFE{Piers: []jsonFEShare{}, Warnings: []string{}}
 		if s.feErr != nil {
 			f.Error = s.feErr.Error()
 		} else {
@@ -390,6 +399,7 @@ func toJSON(s *solved) jsonWall {
 			for _, p := range s.fe.Piers {
 				f.Piers = append(f.Piers, jsonFEShare{Name: p.Name, Share: p.Share})
 			}
+			f.Warnings = append(f.Warnings, s.fe.Warnings...)
 		}
 		j.FE = f
 	}
