@@ -27,3 +27,13 @@ func TestStoreyFileIsNotAWall(t *testing.T) {
 		t.Errorf("err = %v, want the unknown key wall at line 6", err)
 	}
 }
+
+// A size out of the plausible range is shown in the wall's own unit too, so
+// that a US user sees the feet they typed (1e5 ft = 30.48 km).
+func TestImplausibleSizeInWallUnits(t *testing.T) {
+	src := "length = \"1e5ft\"\nheight = \"10ft\"\nthickness = \"8in\"\n[material]\nstrength = \"2000psi\"\n"
+	_, err := Parse("big.toml", []byte(src))
+	if err == nil || !strings.Contains(err.Error(), "big.toml:1: length: is implausible (1e+05 ft = 3.048e+04 m)") {
+		t.Errorf("err = %v", err)
+	}
+}

@@ -407,7 +407,11 @@ func positiveLength(l *ErrorList, key string, v Length, sys System) bool {
 		return false
 	}
 	if v < minSize || v > maxSize {
-		l.add(key, "is implausible ("+strconv.FormatFloat(float64(v), 'g', 4, 64)+" m); sizes run from 0.1 mm to 10 km, check the unit")
+		shown := strconv.FormatFloat(float64(v), 'g', 4, 64) + " m"
+		if sys == US {
+			shown = strconv.FormatFloat(float64(v/Foot), 'g', 4, 64) + " ft = " + shown
+		}
+		l.add(key, "is implausible ("+shown+"); sizes run from 0.1 mm to 10 km, check the unit")
 		return false
 	}
 	return true
