@@ -4,6 +4,8 @@ import (
 	"bytes"
 	"encoding/json"
 	"math"
+	"os"
+	"path/filepath"
 	"strings"
 	"testing"
 )
@@ -160,6 +162,29 @@ func TestSolveDemoTable(t *testing.T) {
 	for _, want := range []string{"Library annex", "relative rigidity", "kip/in", "P1.2.1", "OK"} {
 		if !strings.Contains(out, want) {
 			t.Errorf("demo table lacks %q:\n%s", want, out)
+		}
+	}
+}
+
+// The wall file shown in the README is a working file: it parses, and its
+// variant solves too.
+func TestReadmeWallFile(t *testing.T) {
+	data, err := os.ReadFile("../../README.md")
+	if err != nil {
+		t.Fatal(err)
+	}
+	_, rest, ok := strings.Cut(string(data), "```toml\n")
+	block, _, ok2 := strings.Cut(rest, "```")
+	if !ok || !ok2 {
+		t.Fatal("README has no toml block")
+	}
+	path := filepath.Join(t.TempDir(), "readme.toml")
+	if err := os.WriteFile(path, []byte(block), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	for _, arg := range []string{path, path + ":door moved"} {
+		if code, _, errs := runCLI("solve", arg); code != exitOK {
+			t.Errorf("solve %s: exit %d: %s", arg, code, errs)
 		}
 	}
 }
