@@ -37,6 +37,14 @@ func TestPoissonReadWriteAndErrors(t *testing.T) {
 	if err != nil || back.Material != w.Material {
 		t.Errorf("round trip: %v, material %+v, want %+v\n%s", err, back.Material, w.Material, data)
 	}
+	// The editor's save keeps comments and must keep ν too.
+	kept, err := MarshalKeeping([]byte(nuWall), w)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if back, err := Parse("kept.toml", kept); err != nil || back.Material != w.Material {
+		t.Errorf("save keeping comments: %v, material %+v\n%s", err, back.Material, kept)
+	}
 
 	for _, c := range []struct{ text, msg string }{
 		{strings.Replace(nuWall, "0.2", "0.5", 1), "below 0.5"},
