@@ -92,13 +92,7 @@ func (p Point) Pos(a Axis) geometry.Length {
 // MaxPoints positions.
 func Sweep(w *geometry.Wall, name string, axis Axis, step geometry.Length) ([]Point, error) {
 	ops := w.Openings()
-	idx := -1
-	for i, o := range ops {
-		if o.Name == name {
-			idx = i
-			break
-		}
-	}
+	idx := FindOpening(w, name)
 	if idx < 0 {
 		names := make([]string, len(ops))
 		for i, o := range ops {
@@ -196,6 +190,17 @@ func FormatStep(step geometry.Length, sys geometry.System) string {
 		return strconv.FormatFloat(float64(step/geometry.Millimetre), 'g', 3, 64) + " mm"
 	}
 	return strconv.FormatFloat(float64(step/geometry.Inch), 'g', 3, 64) + " in"
+}
+
+// FindOpening returns the index of the active layout's opening called name,
+// or -1. Names match exactly first, then ignoring case (w2 finds W2), as
+// layout names do.
+func FindOpening(w *geometry.Wall, name string) int {
+	ops := w.Openings()
+	if i := slices.IndexFunc(ops, func(o geometry.Opening) bool { return o.Name == name }); i >= 0 {
+		return i
+	}
+	return slices.IndexFunc(ops, func(o geometry.Opening) bool { return strings.EqualFold(o.Name, name) })
 }
 
 func solvePoint(w *geometry.Wall, o geometry.Opening, current bool) Point {

@@ -67,3 +67,22 @@ func TestSweepWeakPositionsAreNotBest(t *testing.T) {
 		t.Errorf("best at %d, want the current position", i)
 	}
 }
+
+// An opening is found by its name typed in any case, as layouts are; the
+// exact name wins when two differ only in case.
+func TestFindOpeningIgnoresCase(t *testing.T) {
+	w := classroom()
+	if i := FindOpening(w, "w2"); i != 1 {
+		t.Errorf("w2 → %d, want 1", i)
+	}
+	w.Layouts[0].Openings[2].Name = "w2"
+	if i := FindOpening(w, "w2"); i != 2 {
+		t.Errorf("exact w2 → %d, want 2", i)
+	}
+	if i := FindOpening(w, "W9"); i != -1 {
+		t.Errorf("W9 → %d, want -1", i)
+	}
+	if _, err := Sweep(classroom(), "w1", AlongX, geometry.Foot); err != nil {
+		t.Errorf("sweep of w1: %v", err)
+	}
+}

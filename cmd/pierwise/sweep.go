@@ -64,7 +64,11 @@ func runSweep(e *env, args []string) error {
 	if *asJSON {
 		return writeSweepJSON(e.stdout, w, pts)
 	}
-	return report.SweepTable(e.stdout, w, *opening, axis, step, pts)
+	name := *opening
+	if i := study.FindOpening(w, name); i >= 0 {
+		name = w.Openings()[i].Name // as written in the file, whatever the case typed
+	}
+	return report.SweepTable(e.stdout, w, name, axis, step, pts)
 }
 
 type sweepPierJSON struct {
