@@ -1,5 +1,7 @@
 package geometry
 
+import "strings"
+
 // System is the unit system a wall is entered and reported in.
 type System int
 
@@ -115,6 +117,23 @@ func (w *Wall) Openings() []Opening {
 		return nil
 	}
 	return w.Layouts[w.Active].Openings
+}
+
+// LayoutIndex returns the index of the layout called name, or -1. Names are
+// matched exactly first, then ignoring case (as FILE:LAYOUT on the command
+// line and a storey's layout key are typed).
+func (w *Wall) LayoutIndex(name string) int {
+	for i, l := range w.Layouts {
+		if l.Name == name {
+			return i
+		}
+	}
+	for i, l := range w.Layouts {
+		if strings.EqualFold(l.Name, name) {
+			return i
+		}
+	}
+	return -1
 }
 
 // Rect returns the wall's outline in wall coordinates (metres).

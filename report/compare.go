@@ -102,16 +102,7 @@ func CompareReport(out io.Writer, c *study.Comparison, info CompareInfo) error {
 	}
 
 	section("Warnings")
-	warn := CompareWarnings(c)
-	if len(warn) == 0 {
-		w.Line("  None.")
-	}
-	for _, s := range warn {
-		w.Wrapped("  - ", s)
-	}
-
-	w.Blank()
-	w.Para(Caution)
+	w.Close(CompareWarnings(c))
 	return w.Err()
 }
 

@@ -100,14 +100,7 @@ func Wall(out io.Writer, in Input) error {
 	if in.FE != nil && math.Abs(in.FE.Difference) > fe.WarnDifference {
 		warns = append(warns, fmt.Sprintf("The classic method's rigidity differs from the finite-element model's by %+.0f %% (more than ±%.0f %%): the piers are not as well fixed as the method assumes; prefer the finite-element rigidity for distributing shear, or justify the difference.", 100*in.FE.Difference, 100*fe.WarnDifference))
 	}
-	if len(warns) == 0 {
-		w.Line("  none")
-	}
-	for _, s := range warns {
-		w.Wrapped("  - ", s)
-	}
-	w.Blank()
-	w.Para(Caution)
+	w.Close(warns)
 	return w.Err()
 }
 

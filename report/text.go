@@ -86,6 +86,19 @@ func (w *Text) Wrapped(prefix, s string) {
 	w.Line(cur)
 }
 
+// Close ends a report: its warnings as a list ("none" when there are
+// none) under the heading the caller wrote, then the caution.
+func (w *Text) Close(warnings []string) {
+	if len(warnings) == 0 {
+		w.Line("  none")
+	}
+	for _, s := range warnings {
+		w.Wrapped("  - ", s)
+	}
+	w.Blank()
+	w.Para(Caution)
+}
+
 // Table is a plain-text table with a header, a rule, and columns aligned
 // left or right (Right[i]).
 type Table struct {

@@ -94,7 +94,7 @@ func LoadFiles(path string) (*Storey, []*geometry.Wall, error) {
 			continue
 		}
 		if ref.Layout != "" {
-			k := layoutIndex(w, ref.Layout)
+			k := w.LayoutIndex(ref.Layout)
 			if k < 0 {
 				names := make([]string, len(w.Layouts))
 				for j, l := range w.Layouts {
@@ -305,22 +305,6 @@ func planWarnings(a *Analysis) []string {
 		out = append(out, "the plan is more than three times as long as it is wide: check that the diaphragm is rigid enough to be treated as rigid")
 	}
 	return out
-}
-
-// layoutIndex finds a wall's layout by name, exactly first, then ignoring
-// case (as the command line's FILE:LAYOUT does); -1 when there is none.
-func layoutIndex(w *geometry.Wall, name string) int {
-	for i, l := range w.Layouts {
-		if l.Name == name {
-			return i
-		}
-	}
-	for i, l := range w.Layouts {
-		if strings.EqualFold(l.Name, name) {
-			return i
-		}
-	}
-	return -1
 }
 
 // wallName is the name given in the storey file, or the wall's title, or the

@@ -161,17 +161,9 @@ func Report(out io.Writer, a *Analysis, now time.Time) error {
 		}
 	}
 
-	w.Section("7. Warnings")
-	if len(a.Warnings) == 0 {
-		w.Line("  none for the storey (see each wall above for its own)")
-	}
-	for _, msg := range a.Warnings {
-		w.Wrapped("  ! ", msg)
-	}
-	w.Line("  ! The diaphragm is assumed rigid; a flexible diaphragm shares the shear by")
-	w.Line("    tributary area instead.")
-	w.Blank()
-	w.Lines(report.Caution, "")
+	w.Section("7. Warnings (each wall's own are listed with it above)")
+	w.Close(append(append([]string(nil), a.Warnings...),
+		"The diaphragm is assumed rigid; a flexible diaphragm shares the shear by tributary area instead."))
 	return w.Err()
 }
 

@@ -34,19 +34,7 @@ func Select(w *geometry.Wall, name string) error {
 
 // LayoutIndex returns the index of the layout called name, or -1. Names are
 // matched exactly first, then ignoring case.
-func LayoutIndex(w *geometry.Wall, name string) int {
-	for i, l := range w.Layouts {
-		if l.Name == name {
-			return i
-		}
-	}
-	for i, l := range w.Layouts {
-		if strings.EqualFold(l.Name, name) {
-			return i
-		}
-	}
-	return -1
-}
+func LayoutIndex(w *geometry.Wall, name string) int { return w.LayoutIndex(name) }
 
 // LayoutNames returns the names of the wall's layouts in file order.
 func LayoutNames(w *geometry.Wall) []string {
