@@ -40,7 +40,7 @@ func (d *document) dirty() bool { return d.version != d.saved }
 // the wall and the old one goes on the undo stack. f's error is returned
 // unchanged and leaves everything as it was.
 func (d *document) change(f func(w *geometry.Wall) error) error {
-	w := cloneWall(d.wall)
+	w := d.wall.Clone()
 	if err := f(w); err != nil {
 		return err
 	}
@@ -54,7 +54,7 @@ func (d *document) change(f func(w *geometry.Wall) error) error {
 // amend is change without a new undo step: the result replaces the
 // current wall, so a drag of the mouse is undone in one go.
 func (d *document) amend(f func(w *geometry.Wall) error) error {
-	w := cloneWall(d.wall)
+	w := d.wall.Clone()
 	if err := f(w); err != nil {
 		return err
 	}
@@ -97,7 +97,7 @@ func (d *document) save(path string) error {
 	if path == "" {
 		return errors.New("no file name yet: use save as")
 	}
-	if err := saveWall(path, d.wall); err != nil {
+	if err := geometry.Save(path, d.wall); err != nil {
 		return err
 	}
 	d.path, d.saved = path, d.version

@@ -136,7 +136,7 @@ func (e *elevation) wall() *geometry.Wall { return e.c.doc.wall }
 // the selection. It is the only place the editor asks pier for answers.
 func (e *elevation) resolve() {
 	w := e.wall()
-	e.res, e.solveErr = solveWall(w)
+	e.res, e.solveErr = pier.Solve(w)
 	e.version = e.c.doc.version
 	n := len(w.Openings())
 	if e.sel >= n {
@@ -403,7 +403,7 @@ func (e *elevation) reshape(verb string, f func(o *geometry.Opening)) {
 		}
 	}
 	err := e.c.doc.change(func(w *geometry.Wall) error {
-		if err := checkOpening(w, e.sel, o); err != nil {
+		if err := w.CheckOpening(e.sel, o); err != nil {
 			return err
 		}
 		w.Layouts[w.Active].Openings[e.sel] = o
@@ -469,7 +469,7 @@ func nextName(w *geometry.Wall, door bool) string {
 
 func (e *elevation) add(door bool) {
 	w := e.wall()
-	o, ok := freeSpot(w, newOpening(w, door))
+	o, ok := w.FreeSpot(newOpening(w, door))
 	if !ok {
 		e.refuse("no free place for a %s: make room or edit its size (e)", kindName(door))
 		return
@@ -479,7 +479,7 @@ func (e *elevation) add(door bool) {
 
 func (e *elevation) insert(o geometry.Opening) {
 	err := e.c.doc.change(func(w *geometry.Wall) error {
-		if err := checkOpening(w, -1, o); err != nil {
+		if err := w.CheckOpening(-1, o); err != nil {
 			return err
 		}
 		w.Layouts[w.Active].Openings = append(w.Layouts[w.Active].Openings, o)
@@ -509,7 +509,7 @@ func (e *elevation) duplicate() {
 	o := w.Openings()[e.sel]
 	o.Name = nextName(w, o.IsDoor())
 	o.X += o.Width
-	o, ok := freeSpot(w, o)
+	o, ok := w.FreeSpot(o)
 	if !ok {
 		e.refuse("no free place for a copy of %s", w.Openings()[e.sel].Name)
 		return
@@ -647,7 +647,7 @@ func (e *elevation) mouse(msg tea.MouseMsg) tea.Cmd {
 			apply = e.c.doc.amend
 		}
 		err := apply(func(w *geometry.Wall) error {
-			if err := checkOpening(w, d.i, o); err != nil {
+			if err := w.CheckOpening(d.i, o); err != nil {
 				return err
 			}
 			w.Layouts[w.Active].Openings[d.i] = o

@@ -67,7 +67,7 @@ func (e *elevation) openOpeningForm() {
 			}
 		}
 		err := e.c.doc.change(func(w *geometry.Wall) error {
-			if err := checkOpening(w, i, n); err != nil {
+			if err := w.CheckOpening(i, n); err != nil {
 				return err
 			}
 			w.Layouts[w.Active].Openings[i] = n
@@ -158,7 +158,7 @@ func (e *elevation) openWallForm() {
 	}
 	e.openForm(newForm("Wall", specs, func(vals []string, changed []bool) formResult {
 		r := formResult{fields: map[int]string{}}
-		n := cloneWall(w)
+		n := w.Clone()
 		n.Title = vals[wfTitle]
 		if s, ok := geometry.ParseSystem(vals[wfUnits]); ok {
 			n.Units = s
@@ -262,7 +262,7 @@ func (e *elevation) openWallForm() {
 		if len(r.fields) > 0 {
 			return r
 		}
-		if err := validateWall(n); err != nil {
+		if err := n.Validate(); err != nil {
 			placeErrors(err, map[string]int{
 				"title": wfTitle, "units": wfUnits, "length": wfLength, "height": wfHeight, "thickness": wfThickness,
 				"support": wfSupport, "material.kind": wfMaterial, "material.strength": wfStrength,

@@ -341,7 +341,7 @@ func TestMoveChangesSharesAsSolver(t *testing.T) {
 // wall as it was and say why.
 func TestRefusedMoves(t *testing.T) {
 	ed := newEditor(t, annex(), "", 100, 30)
-	orig := cloneWall(ed.wall())
+	orig := ed.wall().Clone()
 	ed.press(runes("j")) // D1 is a door: it cannot go below the base
 	if !reflect.DeepEqual(ed.wall(), orig) || !ed.elev().msgBad || !strings.Contains(ed.view(), "can't move D1") {
 		t.Errorf("door moved below the base; message %q", ed.elev().msg)
@@ -373,14 +373,14 @@ func near(a, b float64) bool { return a-b < 1e-9 && b-a < 1e-9 }
 // back to the end.
 func TestUndoRedo(t *testing.T) {
 	ed := newEditor(t, annex(), "", 100, 30)
-	start := cloneWall(ed.wall())
+	start := ed.wall().Clone()
 	keys := []tea.Msg{keyTab, runes("l"), runes("K"), runes("w"), runes("l"), runes("d"), runes("x"), runes("c"), runes("n"), runes("]"), runes("X")}
 	var states []*geometry.Wall
 	for _, k := range keys {
 		v := ed.m.c.doc.version
 		ed.press(k)
 		if ed.m.c.doc.version != v {
-			states = append(states, cloneWall(ed.wall()))
+			states = append(states, ed.wall().Clone())
 		}
 	}
 	if len(states) < 8 {
@@ -510,7 +510,7 @@ func TestForms(t *testing.T) {
 	}
 	// Wall form: unchanged fields keep their exact values; a changed length
 	// and shear are read in the wall's units.
-	before := cloneWall(ed.wall())
+	before := ed.wall().Clone()
 	ed.press(runes("E"), keyEnter)
 	if !reflect.DeepEqual(ed.wall(), before) {
 		t.Errorf("applying the wall form unchanged changed the wall:\n%+v\n%+v", ed.wall(), before)

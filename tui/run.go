@@ -50,11 +50,11 @@ func EditFile(path string, opts ...tea.ProgramOption) error {
 // openFile reads the wall at path, or writes a new plain wall there when
 // there is no file; msg says when it did.
 func openFile(path string) (w *geometry.Wall, msg string, err error) {
-	w, err = loadWall(path)
+	w, err = geometry.LoadFile(path)
 	switch {
 	case errors.Is(err, fs.ErrNotExist):
 		w = NewWall(geometry.US)
-		if err := saveWall(path, w); err != nil {
+		if err := geometry.Save(path, w); err != nil {
 			return nil, "", err
 		}
 		return w, fmt.Sprintf("created %s with a plain wall: w adds a window, d a door, E edits the wall", path), nil
