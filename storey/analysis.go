@@ -217,6 +217,11 @@ func Analyse(s *Storey, walls []*geometry.Wall) (*Analysis, error) {
 			return nil, fmt.Errorf("storey: wall %s under its design shear: %w", w.Name, err)
 		}
 		w.Loaded = res // its own warnings stay with it
+		if res.HasLoad && res.Drift.Allowable > 0 && !res.Drift.OK {
+			u := report.UnitsFor(s.Units)
+			a.Warnings = append(a.Warnings, fmt.Sprintf("%s: under its design shear the drift δ = Cd·δe/Ie = %.3g %s exceeds the limit of its wall file, %.3g %s",
+				w.Name, u.DeflectionOf(res.Drift.Design), u.Deflection, u.DeflectionOf(res.Drift.Allowable), u.Deflection))
+		}
 	}
 	a.Warnings = append(a.Warnings, planWarnings(a)...)
 	return a, nil

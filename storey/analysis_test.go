@@ -2,8 +2,10 @@ package storey
 
 import (
 	"errors"
+	"math"
 	"strings"
 	"testing"
+	"time"
 
 	"pierwise/geometry"
 )
@@ -232,5 +234,47 @@ func TestAnalyseWarnsOverlappingWalls(t *testing.T) {
 	}
 	if !found {
 		t.Errorf("no overlap warning in %q", a.Warnings)
+	}
+}
+
+// A wall file's drift settings are checked under the wall's design shear
+// (δ = Cd·δe/Ie, ASCE 7-22 §12.8.6): the report states it, and a storey
+// warning names a wall whose drift exceeds its limit.
+func TestAnalyseDriftUnderDesignShear(t *testing.T) {
+	s, walls := symmetricStorey(0.05)
+	walls[0].Drift = geometry.Drift{Cd: 3.5, Ie: 1, Limit: 0.010}
+	a, err := Analyse(s, walls)
+	if err != nil {
+		t.Fatal(err)
+	}
+	res := a.Walls[0].Loaded
+	if want := 3.5 * float64(res.DeflectionAbs); math.Abs(float64(res.Drift.Design)-want) > 1e-12*want || !res.Drift.OK {
+		t.Fatalf("drift %g m, want %g m and OK", float64(res.Drift.Design), want)
+	}
+	var b strings.Builder
+	if err := Report(&b, a, time.Date(2026, 12, 1, 0, 0, 0, 0, time.UTC)); err != nil {
+		t.Fatal(err)
+	}
+	if !strings.Contains(b.String(), "design drift δ = Cd·δe/Ie =") || !strings.Contains(b.String(), ": OK") {
+		t.Errorf("report lacks the drift line")
+	}
+	for _, m := range a.Warnings {
+		if strings.Contains(m, "drift") {
+			t.Errorf("unexpected warning %q", m)
+		}
+	}
+	// A limit far below the drift is exceeded and said so.
+	walls[0].Drift.Limit = 1e-7
+	if a, err = Analyse(s, walls); err != nil {
+		t.Fatal(err)
+	}
+	found := false
+	for _, m := range a.Warnings {
+		if strings.Contains(m, "S: under its design shear the drift") && strings.Contains(m, "exceeds the limit") {
+			found = true
+		}
+	}
+	if !found {
+		t.Errorf("no drift warning in %q", a.Warnings)
 	}
 }

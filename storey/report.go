@@ -7,6 +7,7 @@ import (
 	"time"
 
 	"pierwise/geometry"
+	"pierwise/pier"
 	"pierwise/report"
 	"pierwise/sketch"
 )
@@ -156,6 +157,9 @@ func Report(out io.Writer, a *Analysis, now time.Time) error {
 		if res.DeflectionAbs > 0 {
 			w.Line(fmt.Sprintf("   top deflection under the design shear: %s %s (elastic)", num(u.DeflectionOf(res.DeflectionAbs), 4), u.Deflection))
 		}
+		if line := DriftLine(res, u); line != "" {
+			w.Line("   " + line)
+		}
 		for _, msg := range res.Warnings {
 			w.Wrapped("   ! ", msg)
 		}
@@ -168,6 +172,22 @@ func Report(out io.Writer, a *Analysis, now time.Time) error {
 }
 
 // CaseName names case i of d, or "direct" for -1.
+// DriftLine states a wall's drift check under its design shear, with the
+// wall file's own Cd, Ie and limit (ASCE 7-22 §12.8.6: δ = Cd·δe/Ie), or ""
+// when the wall file sets no limit.
+func DriftLine(res *pier.Result, u report.Units) string {
+	if res == nil || !res.HasLoad || res.Drift.Allowable <= 0 {
+		return ""
+	}
+	d := res.Drift
+	verdict := "OK"
+	if !d.OK {
+		verdict = "EXCEEDS THE LIMIT"
+	}
+	return fmt.Sprintf("design drift δ = Cd·δe/Ie = %.4g %s (%.5f h), limit %.4g %s: %s",
+		u.DeflectionOf(d.Design), u.Deflection, d.Ratio, u.DeflectionOf(d.Allowable), u.Deflection, verdict)
+}
+
 func CaseName(d *Distribution, i int) string {
 	if i < 0 || i >= len(d.Cases) {
 		return "direct"

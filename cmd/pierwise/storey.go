@@ -104,6 +104,9 @@ func writeStoreyTables(out io.Writer, a *storey.Analysis) {
 	tw.write(out)
 	for _, w := range a.Walls {
 		fmt.Fprintf(out, "\n%s under %s:\n", w.Name, geometry.FormatForce(geometry.Force(w.Design.Shear), s.Units))
+		if line := storey.DriftLine(w.Loaded, u); line != "" {
+			fmt.Fprintln(out, wrap("  ", line, 78))
+		}
 		leaves := w.Loaded.Leaves()
 		if len(leaves) == 0 {
 			fmt.Fprintln(out, "  solid wall, no piers")
