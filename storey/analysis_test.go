@@ -263,6 +263,10 @@ func TestAnalyseDriftUnderDesignShear(t *testing.T) {
 			t.Errorf("unexpected warning %q", m)
 		}
 	}
+	// The JSON carries the check of the wall that sets a limit only.
+	if j := a.JSON(); j.Walls[0].Drift == nil || !j.Walls[0].Drift.OK || j.Walls[1].Drift != nil {
+		t.Errorf("JSON drift %+v and %+v", j.Walls[0].Drift, j.Walls[1].Drift)
+	}
 	// A limit far below the drift is exceeded and said so.
 	walls[0].Drift.Limit = 1e-7
 	if a, err = Analyse(s, walls); err != nil {

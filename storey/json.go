@@ -42,6 +42,15 @@ type JSONCase struct {
 	Torque       float64 `json:"torque"`
 }
 
+// JSONDrift is a wall's drift check under its design shear: δ = Cd·δe/Ie
+// (in or mm), δ/h, the allowable drift (in or mm) and whether it passes.
+type JSONDrift struct {
+	Design    float64 `json:"design"`
+	Ratio     float64 `json:"ratio"`
+	Allowable float64 `json:"allowable"`
+	OK        bool    `json:"ok"`
+}
+
 // JSONWall is one wall's answer.
 type JSONWall struct {
 	Name             string          `json:"name"`
@@ -57,6 +66,7 @@ type JSONWall struct {
 	GoverningCase    string          `json:"governing_case"` // a case name, or "direct"
 	Cases            []JSONWallCase  `json:"cases"`
 	Deflection       *float64        `json:"deflection,omitempty"` // top deflection under the design shear, in or mm
+	Drift            *JSONDrift      `json:"drift,omitempty"`      // the wall file's drift check under the design shear, when it sets a limit
 	Piers            []JSONPierForce `json:"piers"`
 	Warnings         []string        `json:"warnings"`
 }
@@ -122,6 +132,9 @@ func (a *Analysis) JSON() JSON {
 		if w.Loaded.DeflectionAbs > 0 {
 			v := tidy(u.DeflectionOf(w.Loaded.DeflectionAbs))
 			jw.Deflection = &v
+		}
+		if dr := w.Loaded.Drift; w.Loaded.HasLoad && dr.Allowable > 0 {
+			jw.Drift = &JSONDrift{Design: tidy(u.DeflectionOf(dr.Design)), Ratio: tidy(dr.Ratio), Allowable: tidy(u.DeflectionOf(dr.Allowable)), OK: dr.OK}
 		}
 		for _, p := range w.Loaded.Leaves() {
 			jw.Piers = append(jw.Piers, JSONPierForce{
