@@ -249,14 +249,26 @@ func CompareRows(c *study.Comparison) []CompareRow {
 			ch = cmpPct(b.FE.Rigidity, a.FE.Rigidity)
 		}
 		add("fe_rigidity_relative", "FE relative rigidity", feVal(b, rel), feVal(a, rel), ch)
-		diff := func(r *fe.Result) string {
-			if rb == nil && ra == nil {
+		// The classic rigidity against the FE one, per side: only where
+		// both methods answered.
+		diff := func(s *study.Side) string {
+			switch {
+			case s.FE == nil && s.FEErr != nil:
+				return "no answer"
+			case s.FE == nil || s.Result == nil:
 				return cmpDash
 			}
-			return fmt.Sprintf("%+.1f %%", 100*r.Difference)
+			d := 100 * s.FE.Difference
+			switch {
+			case math.Abs(d) < 0.05:
+				return "equal"
+			case d > 0:
+				return fmt.Sprintf("%.1f %% higher", d)
+			}
+			return fmt.Sprintf("%.1f %% lower", -d)
 		}
 		if (b.FE != nil && rb != nil) || (a.FE != nil && ra != nil) {
-			add("fe_difference", "Classic above FE by", feVal(b, diff), feVal(a, diff), "")
+			add("fe_difference", "Classic vs FE rigidity", diff(b), diff(a), "")
 		}
 		mesh := func(r *fe.Result) string {
 			return fmt.Sprintf("%s %s", r.Element, geometry.FormatLength(r.Mesh, sys))

@@ -3,6 +3,7 @@ package report
 import (
 	"bytes"
 	"flag"
+	"fmt"
 	"os"
 	"path/filepath"
 	"strings"
@@ -174,6 +175,18 @@ func TestCompareReportFE(t *testing.T) {
 	} {
 		if !strings.Contains(text, want) {
 			t.Errorf("report lacks %q:\n%s", want, text)
+		}
+	}
+	// The classic rigidity against the FE one, in words, from the two
+	// relative rigidities of each layout.
+	for _, s := range []*study.Side{&c.Before, &c.After} {
+		d := 100 * (s.Result.Rigidity/s.FE.Rigidity - 1)
+		word := "higher"
+		if d < 0 {
+			word, d = "lower", -d
+		}
+		if want := fmt.Sprintf("%.1f %% %s", d, word); !strings.Contains(text, want) {
+			t.Errorf("report lacks %q in the Classic vs FE row:\n%s", want, text)
 		}
 	}
 }
