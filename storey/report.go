@@ -158,7 +158,7 @@ func Report(out io.Writer, a *Analysis, now time.Time) error {
 			w.Line(fmt.Sprintf("   top deflection under the design shear: %s %s (elastic)", num(u.DeflectionOf(res.DeflectionAbs), 4), u.Deflection))
 		}
 		if line := DriftLine(res, u); line != "" {
-			w.Line("   " + line)
+			w.Wrapped("   ", line)
 		}
 		for _, msg := range res.Warnings {
 			w.Wrapped("   ! ", msg)
