@@ -4,6 +4,7 @@ import (
 	"bytes"
 	"fmt"
 	"io"
+	"os"
 	"path/filepath"
 	"strings"
 	"time"
@@ -39,6 +40,13 @@ func runCompare(e *env, args []string) error {
 	walls, err := compareWalls(pos)
 	if err != nil {
 		return err
+	}
+	if *outPath != "" {
+		for _, w := range walls {
+			if sameFile(*outPath, w.path) {
+				return usagef("compare: -o %s would overwrite the wall file %s; write the comparison to another file", *outPath, w.path)
+			}
+		}
 	}
 	ff.implied()
 	var opt study.Options
@@ -125,4 +133,15 @@ func compareWalls(args []string) ([]compareSide, error) {
 		out = append(out, lw(w))
 	}
 	return out, nil
+}
+
+// sameFile reports whether the paths name one existing file (a report
+// written with -o onto its own wall file would destroy the wall).
+func sameFile(a, b string) bool {
+	fa, err := os.Stat(a)
+	if err != nil {
+		return false
+	}
+	fb, err := os.Stat(b)
+	return err == nil && os.SameFile(fa, fb)
 }

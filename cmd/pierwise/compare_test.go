@@ -147,3 +147,20 @@ func TestCompareCommandOutputFile(t *testing.T) {
 		t.Errorf("%d files in the output directory, want only cmp.txt", len(entries))
 	}
 }
+
+// compare -o onto one of the wall files it reads would replace the wall by
+// its comparison: it is refused as a usage error and the wall is intact.
+func TestCompareRefusesToOverwriteAWall(t *testing.T) {
+	path := studyFile(t)
+	before, err := os.ReadFile(path)
+	if err != nil {
+		t.Fatal(err)
+	}
+	code, _, errs := runCmd("compare", path, "-o", path)
+	if code != exitUsage || !strings.Contains(errs, "would overwrite the wall file") {
+		t.Errorf("exit %d, %q; want a usage error", code, errs)
+	}
+	if after, _ := os.ReadFile(path); string(after) != string(before) {
+		t.Error("the wall file changed")
+	}
+}
