@@ -16,10 +16,12 @@ const edgeTol = 1e-9
 // so that no accepted wall can drive the mechanics to overflow (h/L stays
 // within 1e8, E·t·Δ within float64) and so that a wrong unit is caught.
 const (
-	minSize      Length = 1e-4 // 0.1 mm
-	maxSize      Length = 1e4  // 10 km
-	maxStress    Stress = 1e12 // 1000 GPa, five times steel's modulus
-	maxForce     Force  = 1e12 // 10^9 kN
+	minSize      Length = 1e-4  // 0.1 mm
+	maxSize      Length = 1e4   // 10 km
+	maxStress    Stress = 1e12  // 1000 GPa, five times steel's modulus
+	minStrength  Stress = 1e6   // f'm, f'c: 1 MPa (145 psi), below any structural masonry
+	maxStrength  Stress = 250e6 // 250 MPa (36 ksi), above ultra-high-performance concrete
+	maxForce     Force  = 1e12  // 10^9 kN
 	minModifier         = 0.01
 	maxModifier         = 10.0
 	maxFactor           = 100.0 // C_d and I_e
@@ -91,6 +93,11 @@ func (w *Wall) validateMaterial(l *ErrorList) {
 		l.add("material.strength", "must be greater than zero (is "+FormatStress(m.Strength, sys)+")")
 	} else if s > float64(maxStress) {
 		l.add("material.strength", tooLargeStress(m.Strength, sys))
+	} else if s > 0 && (m.Strength < minStrength || m.Strength > maxStrength) {
+		// f'm and f'c of real walls lie within a few MPa to about 100 MPa;
+		// far outside that, a unit was most likely left out or mistyped
+		// (strength = 2000 in an SI file is 2000 MPa, not psi).
+		l.add("material.strength", "is implausible for f'm or f'c ("+FormatStress(m.Strength, sys)+"); strengths run from 1 MPa to 250 MPa (145 psi to 36 ksi): check the unit")
 	}
 	if e := float64(m.Modulus); !finite(e) {
 		l.add("material.modulus", "is not a finite number")

@@ -1,0 +1,33 @@
+package geometry
+
+import (
+	"errors"
+	"strings"
+	"testing"
+)
+
+// A strength far outside what masonry and concrete reach is a unit slip:
+// strength = 2000 in an SI file is 2000 MPa (f'm of concrete masonry is a
+// few to about 40 MPa, f'c up to about 100 MPa; common practice). It is an
+// error at its line; everyday strengths pass.
+func TestImplausibleStrengthIsAnError(t *testing.T) {
+	wall := func(units, strength string) string {
+		return "units = \"" + units + "\"\nlength = \"10\"\nheight = \"3\"\nthickness = \"0.2\"\n[material]\nstrength = \"" + strength + "\"\n"
+	}
+	for _, c := range []struct{ units, strength string }{
+		{"si", "2000"}, {"us", "2"}, {"si", "0.5MPa"}, {"us", "50ksi"},
+	} {
+		_, err := Parse("w.toml", []byte(wall(c.units, c.strength)))
+		var l ErrorList
+		if !errors.As(err, &l) || len(l) != 1 || l[0].Line != 6 || l[0].Key != "material.strength" || !strings.Contains(l[0].Msg, "check the unit") {
+			t.Errorf("%s %q: err = %v, want one implausible-strength error at line 6", c.units, c.strength, err)
+		}
+	}
+	for _, c := range []struct{ units, strength string }{
+		{"si", "12"}, {"si", "100MPa"}, {"us", "1500"}, {"us", "4000psi"},
+	} {
+		if _, err := Parse("w.toml", []byte(wall(c.units, c.strength))); err != nil {
+			t.Errorf("%s %q: %v", c.units, c.strength, err)
+		}
+	}
+}
