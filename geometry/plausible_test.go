@@ -31,3 +31,24 @@ func TestImplausibleStrengthIsAnError(t *testing.T) {
 		}
 	}
 }
+
+// thickness = 8 in a US file is 8 ft, a unit left out (shear walls are a
+// few inches to about two feet thick; common practice): an error at its
+// line. 7.625 in and 200 mm pass.
+func TestImplausibleThicknessIsAnError(t *testing.T) {
+	wall := func(units, thick string) string {
+		return "units = \"" + units + "\"\nlength = \"30ft\"\nheight = \"12ft\"\nthickness = " + thick + "\n[material]\nstrength = \"2000psi\"\n"
+	}
+	for _, c := range []struct{ units, thick string }{{"us", "8"}, {"si", "190"}, {"us", `"1in"`}} {
+		_, err := Parse("w.toml", []byte(wall(c.units, c.thick)))
+		var l ErrorList
+		if !errors.As(err, &l) || len(l) != 1 || l[0].Line != 4 || l[0].Key != "thickness" || !strings.Contains(l[0].Msg, "check the unit") {
+			t.Errorf("%s %s: err = %v, want one implausible-thickness error at line 4", c.units, c.thick, err)
+		}
+	}
+	for _, c := range []struct{ units, thick string }{{"us", `"7.625in"`}, {"si", `"200mm"`}, {"si", "0.19"}} {
+		if _, err := Parse("w.toml", []byte(wall(c.units, c.thick))); err != nil {
+			t.Errorf("%s %s: %v", c.units, c.thick, err)
+		}
+	}
+}

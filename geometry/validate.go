@@ -19,6 +19,8 @@ const (
 	minSize      Length = 1e-4  // 0.1 mm
 	maxSize      Length = 1e4   // 10 km
 	maxStress    Stress = 1e12  // 1000 GPa, five times steel's modulus
+	minThickness Length = 0.05  // 50 mm (2 in), thinner than any shear wall
+	maxThickness Length = 1.5   // 1.5 m (5 ft), thicker than any shear wall
 	minStrength  Stress = 1e6   // f'm, f'c: 1 MPa (145 psi), below any structural masonry
 	maxStrength  Stress = 250e6 // 250 MPa (36 ksi), above ultra-high-performance concrete
 	maxForce     Force  = 1e12  // 10^9 kN
@@ -47,7 +49,15 @@ func (w *Wall) validate(l *ErrorList) {
 	sys := w.Units
 	positiveLength(l, "length", w.Length, sys)
 	positiveLength(l, "height", w.Height, sys)
-	positiveLength(l, "thickness", w.Thickness, sys)
+	if positiveLength(l, "thickness", w.Thickness, sys) && (w.Thickness < minThickness || w.Thickness > maxThickness) {
+		// Masonry and concrete shear walls are 4 in to 2 ft thick or so;
+		// thickness = 8 in a US file is 8 ft, a unit left out.
+		bare := "feet"
+		if sys == SI {
+			bare = "metres"
+		}
+		l.add("thickness", "is implausible for a wall ("+FormatLength(w.Thickness, sys)+"); thicknesses run from 2 in to 5 ft (50 mm to 1.5 m): check the unit (a bare number is in "+bare+")")
+	}
 	if w.Support != Cantilever && w.Support != Fixed {
 		l.add("support", "unknown support "+w.Support.String()+` (use "cantilever" or "fixed")`)
 	}
