@@ -29,7 +29,8 @@
 //   - values stay in ranges far wider than any building needs, so that a
 //     wrong unit is caught and no accepted wall can overflow the mechanics:
 //     sizes from 0.1 mm to 10 km, thicknesses from 50 mm to 1.5 m,
-//     strengths (f'm, f'c) from 1 to 250 MPa,
+//     strengths (f'm, f'c) from 1 to 250 MPa, E from 0.5 to 500 GPa and
+//     E_v from 0.1 to 250 GPa,
 //     other stresses and moduli up to 10^12 Pa, the
 //     shear up to 10^12 N, modifiers from 0.01 to 10, C_d and I_e up to 100,
 //     and at most 1000 FE elements along the wall's larger side;

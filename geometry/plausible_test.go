@@ -52,3 +52,26 @@ func TestImplausibleThicknessIsAnError(t *testing.T) {
 		}
 	}
 }
+
+// modulus = 1500 in a US file is 1500 psi, a thousand times softer than
+// the 1500 ksi meant (masonry E is some 5–30 GPa, concrete 20–50 GPa;
+// common practice): an error at its line, as is an E_v far out of range.
+func TestImplausibleModulusIsAnError(t *testing.T) {
+	wall := func(extra string) string {
+		return "length = \"30ft\"\nheight = \"12ft\"\nthickness = \"8in\"\n[material]\nkind = \"custom\"\n" + extra
+	}
+	for _, c := range []struct{ extra, key string }{
+		{"modulus = 1500\n", "material.modulus"},
+		{"modulus = \"1500ksi\"\nshear_modulus = 600\n", "material.shear_modulus"},
+		{"modulus = \"1000GPa\"\n", "material.modulus"},
+	} {
+		_, err := Parse("w.toml", []byte(wall(c.extra)))
+		var l ErrorList
+		if !errors.As(err, &l) || len(l) != 1 || l[0].Key != c.key || !strings.Contains(l[0].Msg, "check the unit") {
+			t.Errorf("%q: err = %v, want one implausible error on %s", c.extra, err, c.key)
+		}
+	}
+	if _, err := Parse("w.toml", []byte(wall("modulus = \"1500ksi\"\nshear_modulus = \"600ksi\"\n"))); err != nil {
+		t.Errorf("1500 ksi, 600 ksi: %v", err)
+	}
+}

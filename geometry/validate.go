@@ -21,6 +21,8 @@ const (
 	maxStress    Stress = 1e12  // 1000 GPa, five times steel's modulus
 	minThickness Length = 0.05  // 50 mm (2 in), thinner than any shear wall
 	maxThickness Length = 1.5   // 1.5 m (5 ft), thicker than any shear wall
+	minModulus   Stress = 0.5e9 // E: 0.5 GPa (73 ksi), below any masonry
+	maxModulus   Stress = 500e9 // E: 500 GPa, above steel
 	minStrength  Stress = 1e6   // f'm, f'c: 1 MPa (145 psi), below any structural masonry
 	maxStrength  Stress = 250e6 // 250 MPa (36 ksi), above ultra-high-performance concrete
 	maxForce     Force  = 1e12  // 10^9 kN
@@ -117,6 +119,9 @@ func (w *Wall) validateMaterial(l *ErrorList) {
 		l.add("material.modulus", tooLargeStress(m.Modulus, sys))
 	} else if e == 0 && m.Kind == Custom {
 		l.add("material.modulus", `is required for kind = "custom"`)
+	} else if e > 0 && (m.Modulus < minModulus || m.Modulus > maxModulus) {
+		// modulus = 1500 in a US file is 1500 psi, a thousand times too soft.
+		l.add("material.modulus", "is implausible for E ("+FormatStress(m.Modulus, sys)+"); moduli run from 0.5 GPa to 500 GPa (73 ksi to 72,500 ksi): check the unit")
 	}
 	if g := float64(m.ShearModulus); !finite(g) {
 		l.add("material.shear_modulus", "is not a finite number")
@@ -124,6 +129,8 @@ func (w *Wall) validateMaterial(l *ErrorList) {
 		l.add("material.shear_modulus", "must be greater than zero (is "+FormatStress(m.ShearModulus, sys)+")")
 	} else if g > float64(maxStress) {
 		l.add("material.shear_modulus", tooLargeStress(m.ShearModulus, sys))
+	} else if g > 0 && (m.ShearModulus < minModulus/5 || m.ShearModulus > maxModulus/2) {
+		l.add("material.shear_modulus", "is implausible for E_v ("+FormatStress(m.ShearModulus, sys)+"); shear moduli run from 0.1 GPa to 250 GPa (15 ksi to 36,000 ksi): check the unit")
 	}
 	// ν of an isotropic material in plane stress lies below 0.5 (E_v = E/(2(1+ν))
 	// above E/3); zero means "not given", so it is a ratio above 0.
