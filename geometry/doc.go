@@ -30,14 +30,13 @@
 //     wrong unit is caught and no accepted wall can overflow the mechanics:
 //     sizes from 0.1 mm to 10 km, thicknesses from 50 mm to 1.5 m,
 //     strengths (f'm, f'c) from 1 to 250 MPa, E from 0.5 to 500 GPa and
-//     E_v from 0.1 to 250 GPa,
-//     other stresses and moduli up to 10^12 Pa, the
-//     shear up to 10^12 N, modifiers from 0.01 to 10, C_d and I_e up to 100,
-//     and at most 1000 FE elements along the wall's larger side;
+//     E_v from 0.1 to 250 GPa, the shear up to 10^12 N, modifiers from
+//     0.01 to 10, C_d and I_e up to 100, and at most 1000 FE elements
+//     along the wall's larger side;
 //   - a custom material gives its modulus; Poisson's ratio ([material]
 //     poisson, E_v = E/(2(1+ν))) lies in (0, 0.5) and does not come with
-//     shear_modulus; a drift limit is a known preset
-//     or a fraction in (0, 0.1], or 0 for no check;
+//     shear_modulus; a drift limit is a known preset or a fraction in
+//     (0, 0.1], or 0 for no check;
 //   - there is at least one layout, Active names one of them, and layout
 //     names are unique;
 //   - every opening has positive finite sizes, lies inside the wall (it may
