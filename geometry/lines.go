@@ -220,3 +220,27 @@ func bracketDepth(s string, d int) (int, string) {
 	}
 	return d, ""
 }
+
+// OpeningKey returns the key path of the active layout's opening called
+// name as errors name it ("opening[2]", "variant[1].opening[3]"), or "" when
+// there is none. With KeyLine it lets a caller that finds a problem after
+// parsing (the classic method's cut wall) point at the opening's line.
+func OpeningKey(w *Wall, name string) string {
+	if w == nil || w.Active < 0 || w.Active >= len(w.Layouts) {
+		return ""
+	}
+	for i, o := range w.Layouts[w.Active].Openings {
+		if o.Name == name {
+			return openingKey(w.Active, i)
+		}
+	}
+	return ""
+}
+
+// KeyLine returns the line, counted from 1, of a key path ("length",
+// "material.strength", "opening[2]", "variant[1].opening[3].x") in the TOML
+// source src, or of its nearest enclosing key or table; 0 when none of them
+// is there.
+func KeyLine(src []byte, key string) int {
+	return scanKeyLines(string(src)).find(key)
+}

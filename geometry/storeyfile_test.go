@@ -2,6 +2,7 @@ package geometry
 
 import (
 	"errors"
+	"os"
 	"strings"
 	"testing"
 )
@@ -35,5 +36,34 @@ func TestImplausibleSizeInWallUnits(t *testing.T) {
 	_, err := Parse("big.toml", []byte(src))
 	if err == nil || !strings.Contains(err.Error(), "big.toml:1: length: is implausible (1e+05 ft = 3.048e+04 m)") {
 		t.Errorf("err = %v", err)
+	}
+}
+
+// OpeningKey and KeyLine point at an opening's [[opening]] or
+// [[variant.opening]] line after parsing (for errors found by the solver).
+func TestOpeningKeyAndLine(t *testing.T) {
+	src, err := os.ReadFile("../testdata/walls/variants.toml")
+	if err != nil {
+		t.Fatal(err)
+	}
+	w, err := Parse("variants.toml", src)
+	if err != nil {
+		t.Fatal(err)
+	}
+	lines := strings.Split(string(src), "\n")
+	for _, active := range []int{0, 1} {
+		w.Active = active
+		key := OpeningKey(w, "W2")
+		want := map[int]string{0: "opening[3]", 1: "variant[1].opening[3]"}[active]
+		if key != want {
+			t.Fatalf("layout %d: key %q, want %q", active, key, want)
+		}
+		n := KeyLine(src, key)
+		if n < 1 || n >= len(lines) || !strings.Contains(lines[n-1], "opening]]") || !strings.Contains(lines[n], `name = "W2"`) {
+			t.Errorf("layout %d: line %d is not W2's header", active, n)
+		}
+	}
+	if OpeningKey(w, "nope") != "" || KeyLine(src, "nope") != 0 {
+		t.Error("unknown names must give nothing")
 	}
 }
