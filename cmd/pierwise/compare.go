@@ -2,6 +2,7 @@ package main
 
 import (
 	"bytes"
+	"errors"
 	"fmt"
 	"io"
 	"os"
@@ -10,6 +11,7 @@ import (
 	"time"
 
 	"pierwise/geometry"
+	"pierwise/pier"
 	"pierwise/report"
 	"pierwise/study"
 	"pierwise/tui"
@@ -76,9 +78,9 @@ func runCompare(e *env, args []string) error {
 			return err
 		}
 		for k, side := range []*study.Side{&c.Before, &c.After} {
-			if label := walls[[]int{0, i}[k]].label; side.Err != nil && !seen[label] {
-				seen[label] = true
-				noAnswer = append(noAnswer, fmt.Sprintf("%s: %v", label, side.Err))
+			if cw := walls[[]int{0, i}[k]]; side.Err != nil && !seen[cw.label] {
+				seen[cw.label] = true
+				noAnswer = append(noAnswer, noAnswerLine(cw, side.Err))
 			}
 		}
 		c.Before.Path, c.Before.Label = walls[0].path, walls[0].label
@@ -144,4 +146,18 @@ func sameFile(a, b string) bool {
 	}
 	fb, err := os.Stat(b)
 	return err == nil && os.SameFile(fa, fb)
+}
+
+// noAnswerLine says which layout the classic method cannot solve; for a
+// cut wall it names the file, line and key of the opening that cuts it.
+func noAnswerLine(cw compareSide, err error) string {
+	var ce *pier.CutError
+	if errors.As(err, &ce) {
+		if data, rerr := os.ReadFile(cw.path); rerr == nil {
+			if key := geometry.OpeningKey(cw.wall, ce.Opening); key != "" {
+				return fmt.Sprintf("%s:%d: %s: %v (layout %q)", cw.path, geometry.KeyLine(data, key), key, err, cw.wall.Layouts[cw.wall.Active].Name)
+			}
+		}
+	}
+	return fmt.Sprintf("%s: %v", cw.label, err)
 }

@@ -121,8 +121,19 @@ func TestCompareCommandCutLayout(t *testing.T) {
 		t.Fatal(err)
 	}
 	code, out, errs := runCmd("compare", path)
-	if code != exitInput || !strings.Contains(out, "no answer") || !strings.Contains(errs, "cut.toml:wide entrance: opening R1 cuts the wall") {
-		t.Errorf("exit %d, stderr %q; want 1 naming the cut layout", code, errs)
+	// The message names the file, the line of R1's [[variant.opening]]
+	// header and its key, as the parser's errors do, and the layout.
+	src, err := os.ReadFile(path)
+	if err != nil {
+		t.Fatal(err)
+	}
+	line := geometry.KeyLine(src, "variant[1].opening[1]")
+	want := fmt.Sprintf("cut.toml:%d: variant[1].opening[1]: opening R1 cuts the wall", line)
+	if code != exitInput || !strings.Contains(out, "no answer") || !strings.Contains(errs, want) || !strings.Contains(errs, `(layout "wide entrance")`) {
+		t.Errorf("exit %d, stderr %q; want 1 and %q", code, errs, want)
+	}
+	if lines := strings.Split(string(src), "\n"); line < 1 || !strings.Contains(lines[line-1], "[[variant.opening]]") {
+		t.Errorf("line %d is not an opening header", line)
 	}
 }
 
