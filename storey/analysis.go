@@ -164,7 +164,7 @@ func Analyse(s *Storey, walls []*geometry.Wall) (*Analysis, error) {
 
 		res, err := pier.Solve(w)
 		if err != nil {
-			wallErr(i, "file", "%s: %v", ref.File, err)
+			wallErr(i, "file", "%s: %v", wallWhere(ref, w, err), err)
 			a.Walls = append(a.Walls, sw)
 			continue
 		}
@@ -310,6 +310,22 @@ func planWarnings(a *Analysis) []string {
 		out = append(out, "the plan is more than three times as long as it is wide: check that the diaphragm is rigid enough to be treated as rigid")
 	}
 	return out
+}
+
+// wallWhere names the wall file of an error of the classic method; for a
+// cut wall also the line and key of the opening that cuts it
+// ("north.toml:31: opening[2]").
+func wallWhere(ref WallRef, w *geometry.Wall, err error) string {
+	var ce *pier.CutError
+	if !errors.As(err, &ce) {
+		return ref.File
+	}
+	data, rerr := readFile(ref.Path)
+	key := geometry.OpeningKey(w, ce.Opening)
+	if rerr != nil || key == "" {
+		return ref.File
+	}
+	return fmt.Sprintf("%s:%d: %s", ref.File, geometry.KeyLine(data, key), key)
 }
 
 // wallName is the name given in the storey file, or the wall's title, or the

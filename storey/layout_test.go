@@ -2,6 +2,7 @@ package storey
 
 import (
 	"errors"
+	"fmt"
 	"math"
 	"os"
 	"path/filepath"
@@ -92,5 +93,34 @@ position = "40ft"
 	var e *Error
 	if !errors.As(err, &e) || e.Line != 9 || e.Key != "wall[1].layout" || !strings.Contains(e.Msg, `"main", "wide"`) {
 		t.Errorf("unknown layout: %v, want line 9, wall[1].layout, listing the layouts", err)
+	}
+}
+
+// A wall that its openings cut in two is named by the storey line that
+// points at it and by the line and key of the cutting opening in its own
+// file, as parse errors are.
+func TestCutWallNamesTheOpeningLine(t *testing.T) {
+	dir := t.TempDir()
+	cut := blockWall("cut", 30*ft, 14*ft, window("R1", 0, 4*ft, 30*ft, 3*ft)) // a ribbon from end to end
+	cut.Stiffness = geometry.Stiffness{Flexure: 1, Shear: 1}
+	cut.Drift = geometry.Drift{Cd: 1, Ie: 1}
+	if err := geometry.Save(filepath.Join(dir, "cut.toml"), cut); err != nil {
+		t.Fatal(err)
+	}
+	src, err := os.ReadFile(filepath.Join(dir, "cut.toml"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	plan := "[storey]\nshear = \"100kip\"\nmass_center = [\"20ft\", \"15ft\"]\nsize = [\"40ft\", \"30ft\"]\n\n" +
+		"[[wall]]\nfile = \"cut.toml\"\ndirection = \"x\"\nposition = \"0ft\"\n"
+	path := filepath.Join(dir, "plan.toml")
+	if err := os.WriteFile(path, []byte(plan), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	_, err = Load(path)
+	want := fmt.Sprintf("cut.toml:%d: opening[1]: opening R1 cuts the wall", geometry.KeyLine(src, "opening[1]"))
+	var e *Error
+	if !errors.As(err, &e) || e.Line != 7 || e.Key != "wall[1].file" || !strings.Contains(e.Msg, want) {
+		t.Errorf("got %v, want line 7, wall[1].file, with %q", err, want)
 	}
 }
