@@ -1,6 +1,7 @@
 package report
 
 import (
+	"errors"
 	"fmt"
 	"io"
 	"sort"
@@ -9,6 +10,7 @@ import (
 	"unicode/utf8"
 
 	"pierwise/geometry"
+	"pierwise/pier"
 	"pierwise/study"
 )
 
@@ -56,7 +58,7 @@ func SweepTable(out io.Writer, w *geometry.Wall, name string, axis study.Axis, s
 			for range names {
 				r = append(r, "")
 			}
-			r = append(r, "", p.Err.Error())
+			r = append(r, "", sweepNoAnswer(p.Err))
 			rows = append(rows, r)
 			continue
 		}
@@ -107,6 +109,19 @@ func SweepTable(out io.Writer, w *geometry.Wall, name string, axis study.Axis, s
 	_, err := fmt.Fprintln(out, "\n"+wrapText("R rel is the wall's relative rigidity (E = 1, t = 1) and change its change from the current position. Shares are fractions of the wall shear. "+best, 78)+"\n"+
 		wrapText("Results support, and do not replace, the judgement of a licensed engineer; local codes govern.", 78))
 	return err
+}
+
+// sweepNoAnswer says in a few words why a position has no classic answer.
+func sweepNoAnswer(err error) string {
+	var ce *pier.CutError
+	var se *pier.StaggeredError
+	switch {
+	case errors.As(err, &ce):
+		return "no load path: " + ce.Opening + " cuts the wall"
+	case errors.As(err, &se):
+		return "staggered band without a pier: use the FE check"
+	}
+	return err.Error()
 }
 
 // wrapText word-wraps s to width columns.

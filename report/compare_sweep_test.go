@@ -102,3 +102,21 @@ func TestSweepTableNotesWrap(t *testing.T) {
 		t.Error("no notes after the table")
 	}
 }
+
+// A position without a classic answer says why in a few words: a ribbon
+// window from end to end leaves no load path at any height.
+func TestSweepTableNoAnswerReason(t *testing.T) {
+	w := sweepWall(true)
+	w.Layouts[0].Openings = []geometry.Opening{{Name: "R1", X: 0, Sill: 3 * geometry.Foot, Width: w.Length, Height: 2 * geometry.Foot}}
+	pts, err := study.Sweep(w, "R1", study.AlongY, 4*geometry.Foot)
+	if err != nil {
+		t.Fatal(err)
+	}
+	var b bytes.Buffer
+	if err := SweepTable(&b, w, "R1", study.AlongY, 4*geometry.Foot, pts); err != nil {
+		t.Fatal(err)
+	}
+	if n := strings.Count(b.String(), "no load path: R1 cuts the wall"); n != len(pts) || n == 0 {
+		t.Errorf("%d reasons for %d points:\n%s", n, len(pts), b.String())
+	}
+}
