@@ -10,6 +10,7 @@ import (
 	"io"
 	"math"
 	"os"
+	"strconv"
 	"strings"
 	"time"
 	"unicode/utf8"
@@ -21,9 +22,9 @@ import (
 )
 
 // Caution is printed at the end of every report.
-const Caution = "CAUTION: these results support, and do not replace, the judgement of a licensed\n" +
-	"engineer; local codes govern. Check the inputs, the method's assumptions and the\n" +
-	"warnings above before using any number in a design."
+const Caution = "CAUTION: these results support, and do not replace, the judgement of a\n" +
+	"licensed engineer; local codes govern. Check the inputs, the method's\n" +
+	"assumptions and the warnings above before using any number in a design."
 
 // Input is everything a wall report shows. Result is nil when the classic
 // method failed; Err then says why.
@@ -112,7 +113,9 @@ func inputs(w *Text, wall *geometry.Wall, res *pier.Result) {
 	w.KV("Material", materialLine(wall.Material, sys))
 	if res != nil && res.Moduli.E > 0 {
 		w.KV("E", fmt.Sprintf("%s; E_v = %s", geometry.FormatStress(res.Moduli.E, sys), geometry.FormatStress(res.Moduli.Ev, sys)))
-		w.KV("", res.Moduli.Source)
+		for _, src := range strings.Split(res.Moduli.Source, "; ") {
+			w.KV("", src)
+		}
 	}
 	w.KV("Stiffness", fmt.Sprintf("flexure × %.2f, shear × %.2f (1.00 = gross section)", orOne(wall.Stiffness.Flexure), orOne(wall.Stiffness.Shear)))
 	if wall.Load.Shear > 0 {
@@ -188,36 +191,54 @@ func pierList(names []string) string {
 func pierTable(w *Text, res *pier.Result, wall *geometry.Wall) {
 	u := UnitsFor(wall.Units)
 	L := func(x float64) string { return geometry.FormatLength(geometry.Length(x), wall.Units) }
-	head := []string{"pier", "h", "L", "h/L", "support", "R rel", "share", "bend/shear"}
-	right := []bool{false, true, true, true, false, true, true, true}
-	if res.HasLoad {
-		head = append(head, "V "+u.Force, "M "+u.Moment)
-		right = append(right, true, true)
+	name := func(p pier.Pier) string {
+		n := strings.Repeat("  ", depth(p.Name)-1) + p.Name
+		switch {
+		case p.Cut:
+			n += "†"
+		case !p.Leaf:
+			n += "*"
+		}
+		return n
 	}
-	t := Table{Head: head, Right: right}
+	// Geometry and rigidity first; shares and forces in a second table, so
+	// each fits the report's width.
+	t := Table{Head: []string{"pier", "h", "L", "h/L", "support", "R rel"}, Right: []bool{false, true, true, true, false, true}}
+	f := Table{Head: []string{"pier", "share", "bending/shear"}, Right: []bool{false, true, true}}
+	if res.HasLoad {
+		f.Head = append(f.Head, "V "+u.Force, "M "+u.Moment)
+		f.Right = append(f.Right, true, true)
+	}
+	var cut, nested bool
 	for _, p := range res.Piers {
-		name := strings.Repeat("  ", depth(p.Name)-1) + p.Name
-		if !p.Leaf {
-			name += "*"
-		}
-		bf := 0.0
+		rel, split := fmt.Sprintf("%.4f", p.Rigidity), "-"
 		if d := p.Parts.Total(); d > 0 {
-			bf = p.Parts.Bending / d
+			split = fmt.Sprintf("%.0f/%.0f %%", 100*p.Parts.Bending/d, 100*p.Parts.Shear/d)
 		}
-		row := []string{name, L(p.H()), L(p.L()), fmt.Sprintf("%.2f", p.Ratio()), supportShort(p.Support),
-			fmt.Sprintf("%.4f", p.Rigidity), fmt.Sprintf("%.1f %%", 100*p.Share), fmt.Sprintf("%.0f/%.0f %%", 100*bf, 100*(1-bf))}
-		if res.HasLoad && p.Leaf {
+		if p.Cut {
+			rel, cut = "-", true
+		}
+		nested = nested || (!p.Leaf && !p.Cut)
+		t.Add(name(p), L(p.H()), L(p.L()), fmt.Sprintf("%.2f", p.Ratio()), supportShort(p.Support), rel)
+		row := []string{name(p), fmt.Sprintf("%.1f %%", 100*p.Share), split}
+		if res.HasLoad && p.Leaf && !p.Cut {
 			row = append(row, fmt.Sprintf("%.2f", u.ForceOf(p.Shear)), fmt.Sprintf("%.2f", u.MomentOf(p.Moment)))
 		} else if res.HasLoad {
 			row = append(row, "-", "-")
 		}
-		t.Add(row...)
+		f.Add(row...)
 	}
 	t.Write(w, "  ")
-	w.Line("  * pier with openings of its own; its share is split among the piers inside it,")
-	w.Line("    which carry the forces.")
+	w.Blank()
+	f.Write(w, "  ")
+	if nested {
+		w.Wrapped("  * ", "pier with openings of its own; its share is split among the piers inside it, which carry the forces.")
+	}
+	if cut {
+		w.Wrapped("  † ", "pier that its own openings cut: it has no load path, no rigidity and no share.")
+	}
 	if res.HasLoad {
-		w.Line("  M is at the pier's base for a cantilever pier, at its top and base (V·h/2) for a fixed pier.")
+		w.Wrapped("  ", "M is at the base of a cantilever pier, and at the top and the base (V·h/2) of a fixed pier.")
 	}
 }
 
@@ -244,7 +265,7 @@ func results(w *Text, res *pier.Result, wall *geometry.Wall, u Units) {
 		if !d.OK {
 			verdict = "EXCEEDS THE LIMIT"
 		}
-		w.KV("Drift limit", fmt.Sprintf("%.4g %s (%.3f h): %s", u.DeflectionOf(d.Allowable), u.Deflection, wall.Drift.Limit, verdict))
+		w.KV("Drift limit", fmt.Sprintf("%s %s (%s h): %s", Number(u.DeflectionOf(d.Allowable)), u.Deflection, Fraction(wall.Drift.Limit), verdict))
 	} else {
 		w.KV("Drift limit", "none set")
 	}
@@ -359,9 +380,9 @@ func materialLine(m geometry.Material, sys geometry.System) string {
 
 func driftLine(d geometry.Drift) string {
 	if d.Limit <= 0 {
-		return fmt.Sprintf("Cd = %.2g, Ie = %.2g, no limit set", orOne(d.Cd), orOne(d.Ie))
+		return fmt.Sprintf("Cd = %g, Ie = %g, no limit set", orOne(d.Cd), orOne(d.Ie))
 	}
-	s := fmt.Sprintf("Cd = %.2g, Ie = %.2g, limit %.3f h", orOne(d.Cd), orOne(d.Ie), d.Limit)
+	s := fmt.Sprintf("Cd = %g, Ie = %g, limit %s h", orOne(d.Cd), orOne(d.Ie), Fraction(d.Limit))
 	if d.Preset == "" {
 		return s
 	}
@@ -383,6 +404,24 @@ func orDash(s string) string { return orDefault(s, "-") }
 func orDefault(s, d string) string {
 	if s == "" {
 		return d
+	}
+	return s
+}
+
+// Fraction prints a drift limit or ratio as a decimal fraction to three
+// significant figures and at least three decimals: 0.010, 0.0075, 0.0001.
+func Fraction(x float64) string {
+	r, err := strconv.ParseFloat(fmt.Sprintf("%.3g", x), 64)
+	if err != nil {
+		return fmt.Sprintf("%.3f", x)
+	}
+	s := strconv.FormatFloat(r, 'f', -1, 64)
+	dot := strings.IndexByte(s, '.')
+	if dot < 0 {
+		s, dot = s+".", len(s)
+	}
+	for len(s)-dot-1 < 3 {
+		s += "0"
 	}
 	return s
 }

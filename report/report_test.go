@@ -125,3 +125,43 @@ func TestClassicVersusFE(t *testing.T) {
 		}
 	}
 }
+
+func TestFraction(t *testing.T) {
+	for _, tc := range []struct {
+		x    float64
+		want string
+	}{{0.01, "0.010"}, {0.025, "0.025"}, {0.0075, "0.0075"}, {0.0001, "0.0001"}, {0.0125, "0.0125"}, {0.007, "0.007"}} {
+		if got := Fraction(tc.x); got != tc.want {
+			t.Errorf("Fraction(%g) = %q, want %q", tc.x, got, tc.want)
+		}
+	}
+}
+
+// A pier that its own openings cut (a door beside a window that runs to the
+// wall's end) carries nothing: the report marks it and prints no rigidity,
+// split or forces for it.
+func TestWallReportCutPier(t *testing.T) {
+	ft := geometry.Foot
+	w := &geometry.Wall{
+		Title: "cut pier (invented)", Length: 20 * ft, Height: 10 * ft, Thickness: 8 * geometry.Inch,
+		Material: geometry.Material{Kind: geometry.ConcreteMasonry, Strength: 2000 * geometry.PSI},
+		Load:     geometry.Load{Shear: 10 * geometry.Kip},
+		Layouts: []geometry.Layout{{Name: "main", Openings: []geometry.Opening{
+			{Name: "D1", X: 4 * ft, Width: 4 * ft, Height: 8 * ft},
+			{Name: "W1", X: 8 * ft, Sill: 2 * ft, Width: 12 * ft, Height: 4 * ft},
+		}}},
+	}
+	got := wallReport(t, w, "")
+	var cutLines int
+	for _, l := range strings.Split(got, "\n") {
+		if strings.HasPrefix(strings.TrimSpace(l), "P2†") {
+			cutLines++
+			if !strings.Contains(l, " -") || strings.Contains(l, "0.0000") {
+				t.Errorf("cut pier row shows numbers: %q", l)
+			}
+		}
+	}
+	if cutLines != 2 || !strings.Contains(got, "† pier that its own openings cut") {
+		t.Errorf("cut pier P2 not marked in both tables (%d rows) or not explained:\n%s", cutLines, got)
+	}
+}

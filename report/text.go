@@ -54,7 +54,7 @@ func (w *Text) KV(k, v string) {
 	if k != "" {
 		k += ":"
 	}
-	w.Line(fmt.Sprintf("  %-12s %s", k, v))
+	w.Wrapped(fmt.Sprintf("  %-12s ", k), v)
 }
 
 // Lines writes each line of block after indent.

@@ -164,99 +164,109 @@ func displayName(arg string) string {
 
 func writeSolveTable(out io.Writer, s *solved) {
 	w, u := s.wall, report.UnitsFor(s.wall.Units)
+	t := report.NewText(out)
 	L := func(l geometry.Length) string { return geometry.FormatLength(l, w.Units) }
 	title := w.Title
 	if title == "" {
 		title = displayName(s.arg)
 	}
-	fmt.Fprintf(out, "%s  [%s, layout %q]\n", title, displayName(s.arg), w.Layouts[w.Active].Name)
+	t.Line(fmt.Sprintf("%s  [%s, layout %q]", title, displayName(s.arg), w.Layouts[w.Active].Name))
 	support := "cantilever"
 	if w.Support == geometry.Fixed {
 		support = "fixed-fixed"
 	}
-	fmt.Fprintf(out, "  wall %s long × %s high × %s thick, %s, %s\n", L(w.Length), L(w.Height), L(w.Thickness), support, plural(len(w.Openings()), "opening"))
+	t.Wrapped("  ", fmt.Sprintf("wall %s long × %s high × %s thick, %s, %s", L(w.Length), L(w.Height), L(w.Thickness), support, plural(len(w.Openings()), "opening")))
 	if s.res == nil {
-		fmt.Fprintf(out, "  classic method: no answer: %v\n", s.err)
-		writeFETable(out, s)
+		t.Wrapped("  ", fmt.Sprintf("classic method: no answer: %v", s.err))
+		writeFETable(t, s)
 		return
 	}
 	r := s.res
-	bend := 0.0
+	t.Line(fmt.Sprintf("  relative deflection %.4f /(E·t), relative rigidity %.4f E·t", r.Deflection, r.Rigidity))
 	if d := r.Split.Total(); d > 0 {
-		bend = r.Split.Bending / d
+		t.Line(fmt.Sprintf("  bending %.0f %%, shear %.0f %% of the wall's deflection", 100*r.Split.Bending/d, 100*r.Split.Shear/d))
 	}
-	fmt.Fprintf(out, "  relative deflection %.4f /(E·t), relative rigidity %.4f E·t (bending %.0f %%, shear %.0f %%)\n", r.Deflection, r.Rigidity, 100*bend, 100*(1-bend))
 	if r.Moduli.E > 0 {
-		fmt.Fprintf(out, "  E = %s, E_v = %s; rigidity %s %s\n", geometry.FormatStress(r.Moduli.E, w.Units), geometry.FormatStress(r.Moduli.Ev, w.Units), report.Number(u.RigidityOf(r.RigidityAbs)), u.Rigidity)
+		t.Line(fmt.Sprintf("  E = %s, E_v = %s; rigidity %s %s", geometry.FormatStress(r.Moduli.E, w.Units), geometry.FormatStress(r.Moduli.Ev, w.Units), report.Number(u.RigidityOf(r.RigidityAbs)), u.Rigidity))
 	}
 	if r.HasLoad {
 		d := r.Drift
-		check := "no limit set"
+		t.Line(fmt.Sprintf("  V = %s: δe = %s %s; δ = Cd·δe/Ie = %s %s = %s h", geometry.FormatForce(w.Load.Shear, w.Units),
+			report.Number(u.DeflectionOf(r.DeflectionAbs)), u.Deflection, report.Number(u.DeflectionOf(d.Design)), u.Deflection, report.Fraction(d.Ratio)))
+		check := "  drift limit: none set"
 		if d.Allowable > 0 {
-			check = fmt.Sprintf("limit %s %s: ", report.Number(u.DeflectionOf(d.Allowable)), u.Deflection)
-			if d.OK {
-				check += "OK"
-			} else {
-				check += "EXCEEDED"
+			verdict := "OK"
+			if !d.OK {
+				verdict = "EXCEEDED"
 			}
+			check = fmt.Sprintf("  drift limit %s h = %s %s: %s", report.Fraction(w.Drift.Limit), report.Number(u.DeflectionOf(d.Allowable)), u.Deflection, verdict)
 		}
-		fmt.Fprintf(out, "  V = %s: δe = %s %s, δ = Cd·δe/Ie = %s %s (%.5f h), %s\n", geometry.FormatForce(w.Load.Shear, w.Units), report.Number(u.DeflectionOf(r.DeflectionAbs)), u.Deflection, report.Number(u.DeflectionOf(d.Design)), u.Deflection, d.Ratio, check)
+		t.Line(check)
 	}
 	if len(r.Piers) == 0 {
-		fmt.Fprintln(out, "  no openings: the wall is one solid pier")
-	}
-	head := fmt.Sprintf("  %-8s %9s %9s %6s %-10s %9s %7s", "pier", "h", "L", "h/L", "support", "R rel", "share")
-	if r.HasLoad {
-		head += fmt.Sprintf(" %9s %11s", "V "+u.Force, "M "+u.Moment)
-	}
-	if len(r.Piers) > 0 {
-		fmt.Fprintln(out, head)
-	}
-	for _, p := range r.Piers {
-		name := p.Name
-		if !p.Leaf {
-			name += "*"
-		}
-		sup := "cantilever"
-		if p.Support == geometry.Fixed {
-			sup = "fixed"
-		}
-		line := fmt.Sprintf("  %-8s %9s %9s %6.2f %-10s %9.4f %6.1f%%", name, L(geometry.Length(p.H())), L(geometry.Length(p.L())), p.Ratio(), sup, p.Rigidity, 100*p.Share)
-		if r.HasLoad && p.Leaf {
-			line += fmt.Sprintf(" %9.2f %11.2f", u.ForceOf(p.Shear), u.MomentOf(p.Moment))
-		} else if r.HasLoad {
-			line += fmt.Sprintf(" %9s %11s", "-", "-")
-		}
-		fmt.Fprintln(out, line)
+		t.Line("  no openings: the wall is one solid pier")
+	} else {
+		t.Blank()
+		pierRows(t, r, w)
 	}
 	for _, warn := range r.Warnings {
-		fmt.Fprintln(out, wrap("  warning: ", warn, 100))
+		t.Wrapped("  warning: ", warn)
 	}
-	writeFETable(out, s)
+	writeFETable(t, s)
 }
 
-func writeFETable(out io.Writer, s *solved) {
+// pierRows writes the pier table of the solve command: * marks a pier with
+// openings of its own (its forces are in the piers inside it), † a pier
+// that its openings cut (no load path).
+func pierRows(t *report.Text, r *pier.Result, w *geometry.Wall) {
+	u := report.UnitsFor(w.Units)
+	L := func(x float64) string { return geometry.FormatLength(geometry.Length(x), w.Units) }
+	tab := report.Table{Head: []string{"pier", "h", "L", "h/L", "support", "R rel", "share"}, Right: []bool{false, true, true, true, false, true, true}}
+	if r.HasLoad {
+		tab.Head = append(tab.Head, "V "+u.Force, "M "+u.Moment)
+		tab.Right = append(tab.Right, true, true)
+	}
+	for _, p := range r.Piers {
+		name, rel := p.Name, fmt.Sprintf("%.4f", p.Rigidity)
+		switch {
+		case p.Cut:
+			name, rel = name+"†", "-"
+		case !p.Leaf:
+			name += "*"
+		}
+		row := []string{name, L(p.H()), L(p.L()), fmt.Sprintf("%.2f", p.Ratio()), supportWord(p.Support), rel, fmt.Sprintf("%.1f%%", 100*p.Share)}
+		if r.HasLoad && p.Leaf && !p.Cut {
+			row = append(row, fmt.Sprintf("%.2f", u.ForceOf(p.Shear)), fmt.Sprintf("%.2f", u.MomentOf(p.Moment)))
+		} else if r.HasLoad {
+			row = append(row, "-", "-")
+		}
+		tab.Add(row...)
+	}
+	tab.Write(t, "  ")
+}
+
+func writeFETable(t *report.Text, s *solved) {
 	if s.feErr != nil {
-		fmt.Fprintf(out, "  finite-element check failed: %v\n", s.feErr)
+		t.Wrapped("  ", fmt.Sprintf("finite-element check failed: %v", s.feErr))
 	}
 	if s.fe == nil {
 		return
 	}
 	f := s.fe
-	fmt.Fprintf(out, "  finite-element check (%s, mesh %s, %d elements): relative deflection %.4f, relative rigidity %.4f\n",
-		f.Element, geometry.FormatLength(f.Mesh, s.wall.Units), f.Elements, f.Deflection, f.Rigidity)
+	t.Line(fmt.Sprintf("  finite-element check (%s, mesh %s, %d elements):", f.Element, geometry.FormatLength(f.Mesh, s.wall.Units), f.Elements))
+	t.Line(fmt.Sprintf("    relative deflection %.4f /(E·t), relative rigidity %.4f E·t", f.Deflection, f.Rigidity))
 	if s.res != nil {
-		fmt.Fprintf(out, "  the classic rigidity is %s the finite-element rigidity\n", report.ClassicVersusFE(f.Difference))
+		t.Line(fmt.Sprintf("    the classic rigidity is %s the finite-element rigidity", report.ClassicVersusFE(f.Difference)))
 	}
 	if len(f.Piers) > 0 {
 		parts := make([]string, len(f.Piers))
 		for i, p := range f.Piers {
 			parts[i] = fmt.Sprintf("%s %.1f%%", p.Name, 100*p.Share)
 		}
-		fmt.Fprintf(out, "  finite-element shares: %s\n", strings.Join(parts, ", "))
+		t.Wrapped("    shares: ", strings.Join(parts, ", "))
 	}
 	for _, warn := range f.Warnings {
-		fmt.Fprintln(out, wrap("  warning: ", warn, 100))
+		t.Wrapped("  warning: ", warn)
 	}
 }
 
@@ -425,26 +435,6 @@ func writeSolveJSON(out io.Writer, all []*solved) error {
 		list[i] = toJSON(s)
 	}
 	return enc.Encode(list)
-}
-
-// wrap word-wraps s to width after a first-line prefix, indenting the
-// following lines to match.
-func wrap(prefix, s string, width int) string {
-	var b strings.Builder
-	pad := strings.Repeat(" ", len(prefix))
-	line := prefix
-	for _, word := range strings.Fields(s) {
-		if len(line)+1+len(word) > width && line != prefix && line != pad {
-			b.WriteString(line + "\n")
-			line = pad
-		}
-		if line != prefix && line != pad {
-			line += " "
-		}
-		line += word
-	}
-	b.WriteString(line)
-	return b.String()
 }
 
 // plural returns "1 opening", "2 openings".

@@ -90,22 +90,22 @@ func writeStoreyTables(out io.Writer, a *storey.Analysis) {
 			if a.Absolute {
 				cells = append(cells, grouped(u.RigidityOf(w.Rigidity)))
 			}
-			tw.add(append(cells, direct,
+			tw.Add(append(cells, direct,
 				fmt.Sprintf("%.2f", u.ForceOf(geometry.Force(sh.Torsional))), fmt.Sprintf("%.2f", u.ForceOf(geometry.Force(sh.Total()))))...)
 		}
-		tw.write(out)
+		tw.Write(report.NewText(out), "  ")
 	}
 	fmt.Fprintln(out, "\ndesign shears (worst case, never below the direct shear)")
 	tw := newTextTable("wall", "dir", "direct "+u.Force, "design "+u.Force, "governs")
 	for _, w := range a.Walls {
-		tw.add(w.Name, w.Ref.Direction.String(), fmt.Sprintf("%.2f", u.ForceOf(geometry.Force(w.Design.Direct))),
+		tw.Add(w.Name, w.Ref.Direction.String(), fmt.Sprintf("%.2f", u.ForceOf(geometry.Force(w.Design.Direct))),
 			fmt.Sprintf("%.2f", u.ForceOf(geometry.Force(w.Design.Shear))), storey.CaseName(d, w.Design.Case))
 	}
-	tw.write(out)
+	tw.Write(report.NewText(out), "  ")
 	for _, w := range a.Walls {
 		fmt.Fprintf(out, "\n%s under %s:\n", w.Name, geometry.FormatForce(geometry.Force(w.Design.Shear), s.Units))
 		if line := storey.DriftLine(w.Loaded, u); line != "" {
-			fmt.Fprintln(out, wrap("  ", line, 78))
+			report.NewText(out).Wrapped("  ", line)
 		}
 		leaves := w.Loaded.Leaves()
 		if len(leaves) == 0 {
@@ -118,13 +118,13 @@ func writeStoreyTables(out io.Writer, a *storey.Analysis) {
 			if p.Support == geometry.Fixed {
 				support = "fixed"
 			}
-			tw.add(p.Name, fmt.Sprintf("%.2f", p.Ratio()), support, fmt.Sprintf("%.1f%%", 100*p.Share),
+			tw.Add(p.Name, fmt.Sprintf("%.2f", p.Ratio()), support, fmt.Sprintf("%.1f%%", 100*p.Share),
 				fmt.Sprintf("%.2f", u.ForceOf(p.Shear)), fmt.Sprintf("%.1f", u.MomentOf(p.Moment)))
 		}
-		tw.write(out)
+		tw.Write(report.NewText(out), "  ")
 	}
 	for _, msg := range a.Warnings {
-		fmt.Fprintln(out, wrap("warning: ", msg, 78))
+		report.NewText(out).Wrapped("warning: ", msg)
 	}
 	fmt.Fprintln(out, "\nResults support, and do not replace, the judgement of a licensed engineer;\nlocal codes govern.")
 }
@@ -149,45 +149,12 @@ func grouped(v float64) string {
 	return b.String()
 }
 
-// textTable is a small left/right aligned table for the storey command:
-// the first column and text columns left, numbers right.
-type textTable struct {
-	head []string
-	rows [][]string
-}
-
-func newTextTable(head ...string) *textTable { return &textTable{head: head} }
-
-func (t *textTable) add(cells ...string) { t.rows = append(t.rows, cells) }
-
-func (t *textTable) write(out io.Writer) {
-	w := make([]int, len(t.head))
-	for i, h := range t.head {
-		w[i] = len([]rune(h))
+// newTextTable is a table of the storey command: the first two columns,
+// the support and the governing case read left, numbers right.
+func newTextTable(head ...string) *report.Table {
+	right := make([]bool, len(head))
+	for i, h := range head {
+		right[i] = !(i <= 1 || h == "support" || h == "governs")
 	}
-	for _, r := range t.rows {
-		for i, c := range r {
-			w[i] = max(w[i], len([]rune(c)))
-		}
-	}
-	line := func(cells []string) {
-		var b strings.Builder
-		b.WriteString("  ")
-		for i, c := range cells {
-			pad := strings.Repeat(" ", w[i]-len([]rune(c)))
-			if i > 0 {
-				b.WriteString("  ")
-			}
-			if i == 0 || i == 1 || i == 2 && t.head[2] == "support" || t.head[i] == "governs" {
-				b.WriteString(c + pad)
-			} else {
-				b.WriteString(pad + c)
-			}
-		}
-		fmt.Fprintln(out, strings.TrimRight(b.String(), " "))
-	}
-	line(t.head)
-	for _, r := range t.rows {
-		line(r)
-	}
+	return &report.Table{Head: head, Right: right}
 }
