@@ -19,6 +19,24 @@ type document struct {
 	next    int
 
 	undo, redo []snapshot
+
+	// own is the layout the file itself names active, when the wall was
+	// opened with another one active (a storey file's layout = "..."); save
+	// writes own back so that the file's active key does not change.
+	own *ownActive
+}
+
+// ownActive is the file's own active layout: by name, and by index for a
+// layout renamed since.
+type ownActive struct {
+	name  string
+	index int
+}
+
+// keepOwnActive makes save write the file's own active layout (by name)
+// instead of the one being edited.
+func (d *document) keepOwnActive(name string, index int) {
+	d.own = &ownActive{name: name, index: index}
 }
 
 type snapshot struct {
@@ -97,9 +115,26 @@ func (d *document) save(path string) error {
 	if path == "" {
 		return errors.New("no file name yet: use save as")
 	}
-	if err := geometry.Save(path, d.wall); err != nil {
+	if err := geometry.Save(path, d.onDisk()); err != nil {
 		return err
 	}
 	d.path, d.saved = path, d.version
 	return nil
+}
+
+// onDisk is the wall as it is written: the wall itself, or a copy with the
+// file's own active layout (by name; by index when that layout was
+// renamed; the edited one when it was deleted).
+func (d *document) onDisk() *geometry.Wall {
+	if d.own == nil {
+		return d.wall
+	}
+	w := d.wall.Clone()
+	switch k := w.LayoutIndex(d.own.name); {
+	case k >= 0:
+		w.Active = k
+	case d.own.index < len(w.Layouts):
+		w.Active = d.own.index
+	}
+	return w
 }

@@ -156,7 +156,7 @@ func (e *elevation) scheduleFE() tea.Cmd {
 	}
 	id := e.fe.id
 	e.fe.running = true
-	return tea.Tick(feDelay, func(time.Time) tea.Msg { return feStartMsg{id} })
+	return e.c.tick(feDelay, func(time.Time) tea.Msg { return feStartMsg{id} })
 }
 
 // runFE solves the FE model in the background on the wall and classic

@@ -137,5 +137,5 @@ func tooSmall(w, h int) string {
 
 // newCommon builds the shared part of the screens.
 func newCommon(doc *document, r *lipgloss.Renderer) *common {
-	return &common{styles: newStyles(r), keys: newCommonKeys(), doc: doc, now: time.Now}
+	return &common{styles: newStyles(r), keys: newCommonKeys(), doc: doc, now: time.Now, tick: tea.Tick}
 }

@@ -64,6 +64,11 @@ type common struct {
 	keys          commonKeys
 	doc           *document
 	now           func() time.Time // the clock; fixed in tests
+
+	// tick is tea.Tick; tests that run commands replace it so that a timer
+	// (the FE check's delay) is never mistaken for work, however slow the
+	// machine.
+	tick func(d time.Duration, fn func(time.Time) tea.Msg) tea.Cmd
 }
 
 // commonKeys are understood on every screen.

@@ -37,7 +37,28 @@ func newStoreyModel(path string) (*root, error) {
 		return nil, err
 	}
 	c := newCommon(nil, nil)
-	return newRoot(c, newStoreyScreen(c, st, walls)), nil
+	s := newStoreyScreen(c, st, walls)
+	if err := s.keepOwnLayouts(); err != nil {
+		return nil, err
+	}
+	return newRoot(c, s), nil
+}
+
+// keepOwnLayouts remembers, for each wall the storey file opens in a layout
+// of its choice (layout = "..."), the layout its own file names active, so
+// that saving the edited wall leaves the file's active key as it was.
+func (s *storeyScreen) keepOwnLayouts() error {
+	for i, ref := range s.st.Walls {
+		if ref.Layout == "" {
+			continue
+		}
+		w, err := geometry.LoadFile(ref.Path)
+		if err != nil {
+			return err
+		}
+		s.docs[i].keepOwnActive(w.Layouts[w.Active].Name, w.Active)
+	}
+	return nil
 }
 
 // storeyKeys are the keys of the storey screen; they implement help.KeyMap.

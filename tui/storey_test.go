@@ -49,13 +49,16 @@ func newStoreyDriver(t *testing.T, path string, w, h int) *storeyDriver {
 		t.Fatal(err)
 	}
 	m.c.now = func() time.Time { return time.Date(2026, 12, 1, 12, 0, 0, 0, time.UTC) }
+	m.c.tick = func(time.Duration, func(time.Time) tea.Msg) tea.Cmd { return nil }
 	m.Update(tea.WindowSizeMsg{Width: w, Height: h})
 	return &storeyDriver{t: t, m: m}
 }
 
-// press sends msgs and runs the screen-contract commands they return
-// (push, pop), as the bubbletea runtime would; other commands (the FE check,
-// quitting) are not run.
+// press sends msgs and runs the commands they return one after the other,
+// as the bubbletea runtime would, and delivers the screen-contract answers
+// (push, pop). Timers are switched off (newStoreyDriver), so every command
+// the screens return here answers at once and none is skipped, however
+// loaded the machine; the FE check never starts.
 func (d *storeyDriver) press(msgs ...tea.Msg) {
 	for _, msg := range msgs {
 		_, cmd := d.m.Update(msg)
@@ -67,14 +70,7 @@ func (d *storeyDriver) run(cmd tea.Cmd) {
 	if cmd == nil {
 		return
 	}
-	var msg tea.Msg
-	done := make(chan struct{})
-	go func() { msg = cmd(); close(done) }()
-	select {
-	case <-done:
-	case <-time.After(50 * time.Millisecond):
-		return // a timer (the FE check's delay): not needed here
-	}
+	msg := cmd()
 	switch msg := msg.(type) {
 	case tea.BatchMsg:
 		for _, c := range msg {
@@ -238,5 +234,71 @@ func TestStoreyCtrlCAsksWithUnsavedWalls(t *testing.T) {
 	}
 	if v := d.view(); !strings.Contains(v, "unsaved walls") {
 		t.Errorf("the storey screen does not ask:\n%s", v)
+	}
+}
+
+// A storey file may open a wall in a layout other than the file's own active
+// one (layout = "..."). Saving that wall after an edit from the storey
+// screen writes the edit into the layout the storey uses and leaves the
+// wall file's own active key as it was.
+func TestStoreySaveKeepsFileActive(t *testing.T) {
+	path := copyWorkshop(t)
+	dir := filepath.Dir(path)
+	appendFile(t, filepath.Join(dir, "partition.toml"), `
+[[variant]]
+name = "door moved"
+
+[[variant.opening]]
+name = "D1"
+x = "12ft"
+sill = "0"
+width = "3ft"
+height = "7ft"
+`)
+	appendFile(t, path, `layout = "door moved"`+"\n") // to the last [[wall]], the partition
+	d := newStoreyDriver(t, path, 100, 30)
+	s := d.screen()
+	if w := s.docs[4].wall; w.Layouts[w.Active].Name != "door moved" {
+		t.Fatalf("the partition opened in layout %q, want the storey's %q", w.Layouts[w.Active].Name, "door moved")
+	}
+	for i := 0; i < 4; i++ {
+		d.press(runes("j"))
+	}
+	d.press(keyEnter, runes("L"), keyEsc, runes("s"))
+	if s.docs[4].dirty() {
+		t.Fatalf("s did not save the partition: %s", d.view())
+	}
+	w, err := geometry.LoadFile(filepath.Join(dir, "partition.toml"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	if got := w.Layouts[w.Active].Name; got != geometry.DefaultLayout {
+		t.Errorf("the saved file's active layout is %q, want its own %q", got, geometry.DefaultLayout)
+	}
+	// The edit (D1 one foot wider) went into the storey's layout, not the
+	// file's active one.
+	moved := w.Layouts[w.LayoutIndex("door moved")].Openings[0]
+	own := w.Layouts[w.Active].Openings[0]
+	if !near(float64(moved.Width), float64(4*geometry.Foot)) || !near(float64(own.Width), float64(3*geometry.Foot)) {
+		t.Errorf("D1 width %v in %q and %v in the file's active layout; want 4 ft and 3 ft",
+			moved.Width, "door moved", own.Width)
+	}
+	// The storey still analyses the partition in its layout after the save.
+	if w := s.docs[4].wall; w.Layouts[w.Active].Name != "door moved" {
+		t.Errorf("after saving, the storey screen edits layout %q, want %q", w.Layouts[w.Active].Name, "door moved")
+	}
+}
+
+func appendFile(t *testing.T, path, text string) {
+	t.Helper()
+	f, err := os.OpenFile(path, os.O_APPEND|os.O_WRONLY, 0)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if _, err := f.WriteString(text); err != nil {
+		t.Fatal(err)
+	}
+	if err := f.Close(); err != nil {
+		t.Fatal(err)
 	}
 }
