@@ -9,7 +9,6 @@ import (
 	"fmt"
 	"io"
 	"math"
-	"os"
 	"strconv"
 	"strings"
 	"time"
@@ -19,6 +18,7 @@ import (
 	"pierwise/pier"
 	"pierwise/pier/fe"
 	"pierwise/sketch"
+	"pierwise/study"
 )
 
 // Caution is printed at the end of every report.
@@ -47,7 +47,7 @@ func Wall(out io.Writer, in Input) error {
 
 	w.Title("PIERWISE WALL REPORT")
 	w.KV("Title", orDash(wall.Title))
-	w.KV("File", orDefault(fileOf(in.Path), "(built-in demo wall)"))
+	w.KV("File", orDefault(filePart(in.Path), "(built-in demo wall)"))
 	w.KV("Layout", layoutLine(wall))
 	w.KV("Date", in.Now.Format("2006-01-02 15:04 MST"))
 	w.KV("Program", "pierwise "+in.Version)
@@ -310,16 +310,11 @@ func yText(y float64, wall *geometry.Wall) string {
 	return geometry.FormatLength(geometry.Length(y), wall.Units)
 }
 
-// fileOf returns the file of a FILE[:LAYOUT] argument; the layout has its
+// filePart is the file of a FILE[:LAYOUT] argument; the layout has its
 // own line.
-func fileOf(arg string) string {
-	if _, err := os.Stat(arg); err == nil {
-		return arg
-	}
-	if i := strings.LastIndex(arg, ":"); i > 0 {
-		return arg[:i]
-	}
-	return arg
+func filePart(arg string) string {
+	path, _ := study.SplitArg(arg)
+	return path
 }
 
 func layoutLine(w *geometry.Wall) string {

@@ -87,6 +87,10 @@ func run(e *env, args []string) int {
 	}
 	c, ok := commands[args[0]]
 	if !ok {
+		if fi, err := os.Stat(args[0]); err == nil && !fi.IsDir() {
+			fmt.Fprintf(e.stderr, "pierwise: %q is a file, not a command: did you mean \"pierwise edit %s\" or \"pierwise solve %s\"?\n", args[0], args[0], args[0])
+			return exitUsage
+		}
 		fmt.Fprintf(e.stderr, "pierwise: unknown command %q\n\n", args[0])
 		printUsage(e.stderr)
 		return exitUsage

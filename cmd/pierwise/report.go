@@ -10,6 +10,7 @@ import (
 	"pierwise/geometry"
 	"pierwise/report"
 	"pierwise/storey"
+	"pierwise/study"
 )
 
 func init() {
@@ -37,6 +38,13 @@ func runReport(e *env, args []string) error {
 	arg := ""
 	if len(files) == 1 {
 		arg = files[0]
+	}
+	if *outPath != "" {
+		for _, in := range reportInputs(arg) {
+			if sameFile(*outPath, in) {
+				return usagef("-o %s would overwrite %s, which the report reads; write the report to another file", *outPath, in)
+			}
+		}
 	}
 	var buf bytes.Buffer
 	var classicErr error // the report is written, but the wall has no answer
@@ -73,6 +81,24 @@ func runReport(e *env, args []string) error {
 		return fmt.Errorf("%s: %w", displayName(arg), classicErr)
 	}
 	return nil
+}
+
+// reportInputs lists the files a report of arg reads: the wall file, or a
+// storey file and each of its wall files.
+func reportInputs(arg string) []string {
+	if arg == "" {
+		return nil
+	}
+	path, _ := study.SplitArg(arg)
+	files := []string{path}
+	if data, err := os.ReadFile(path); err == nil && storey.IsStoreyFile(data) {
+		if s, err := storey.Parse(path, data); err == nil {
+			for _, w := range s.Walls {
+				files = append(files, w.Path)
+			}
+		}
+	}
+	return files
 }
 
 // isStorey reports whether arg names a storey file rather than a wall file.

@@ -6,6 +6,8 @@ import (
 	"flag"
 	"fmt"
 	"io"
+	"os"
+	"slices"
 	"strconv"
 	"strings"
 
@@ -61,6 +63,9 @@ func (f *feFlags) options(w *geometry.Wall) (fe.Options, error) {
 		opt.Mesh = m
 	}
 	if f.element != "" {
+		if !slices.Contains(geometry.Elements, f.element) {
+			return opt, usagef("--element: unknown finite-element type %q (use %s)", f.element, strings.Join(geometry.Elements, " or "))
+		}
 		opt.Element = f.element
 	}
 	return opt, nil
@@ -89,6 +94,7 @@ func solveArg(arg string, ff *feFlags) (*solved, error) {
 	}
 	s := &solved{arg: arg, wall: w}
 	s.res, s.err = pier.Solve(w)
+	s.err = locate(arg, w, s.err)
 	if ff != nil && ff.on {
 		opt, err := ff.options(w)
 		if err != nil {
@@ -98,6 +104,33 @@ func solveArg(arg string, ff *feFlags) (*solved, error) {
 	}
 	return s, nil
 }
+
+// locate puts the file, line and key of the opening that cuts a wall in
+// front of a CutError ("wall.toml:12: opening[2]: opening W2 cuts …"), so
+// the message says where to look; other errors pass unchanged.
+func locate(arg string, w *geometry.Wall, err error) error {
+	var ce *pier.CutError
+	if arg == "" || !errors.As(err, &ce) {
+		return err
+	}
+	path, _ := study.SplitArg(arg)
+	data, rerr := os.ReadFile(path)
+	key := geometry.OpeningKey(w, ce.Opening)
+	if rerr != nil || key == "" {
+		return err
+	}
+	return &locatedError{where: fmt.Sprintf("%s:%d: %s", path, geometry.KeyLine(data, key), key), err: err}
+}
+
+// locatedError is an error of the mechanics with the place in the file
+// that causes it.
+type locatedError struct {
+	where string
+	err   error
+}
+
+func (e *locatedError) Error() string { return e.where + ": " + e.err.Error() }
+func (e *locatedError) Unwrap() error { return e.err }
 
 func runSolve(e *env, args []string) error {
 	fs := newFlags(e, "solve")
@@ -126,7 +159,11 @@ func runSolve(e *env, args []string) error {
 			continue
 		}
 		if s.err != nil {
-			err := fmt.Errorf("%s: %w", displayName(f), s.err)
+			err := s.err
+			var le *locatedError
+			if !errors.As(err, &le) {
+				err = fmt.Errorf("%s: %w", displayName(f), s.err)
+			}
 			if len(files) > 1 {
 				fmt.Fprintln(e.stderr, "pierwise:", err)
 			}
@@ -319,6 +356,7 @@ type jsonPier struct {
 	RigidityRelative float64  `json:"rigidity_relative"`
 	Share            float64  `json:"share"`
 	Leaf             bool     `json:"leaf"`
+	Cut              bool     `json:"cut,omitempty"`
 	BendingFraction  float64  `json:"bending_fraction"`
 	Shear            *float64 `json:"shear,omitempty"`
 	Moment           *float64 `json:"moment,omitempty"`
@@ -384,7 +422,7 @@ func toJSON(s *solved) jsonWall {
 				Name: p.Name, Parent: p.Parent,
 				X0: tidy(u.CoordOf(p.Rect.X0)), X1: tidy(u.CoordOf(p.Rect.X1)), Y0: tidy(u.CoordOf(p.Rect.Y0)), Y1: tidy(u.CoordOf(p.Rect.Y1)),
 				H: tidy(u.CoordOf(p.H())), L: tidy(u.CoordOf(p.L())), Support: supportWord(p.Support),
-				RigidityRelative: p.Rigidity, Share: p.Share, Leaf: p.Leaf,
+				RigidityRelative: p.Rigidity, Share: p.Share, Leaf: p.Leaf, Cut: p.Cut,
 			}
 			if d := p.Parts.Total(); d > 0 {
 				jp.BendingFraction = p.Parts.Bending / d

@@ -145,6 +145,10 @@ func TestExitStatuses(t *testing.T) {
 		{[]string{"frobnicate"}, exitUsage, "unknown command"},
 		{[]string{"report", "a.toml", "b.toml"}, exitUsage, "one FILE"},
 		{[]string{"solve", "--mesh", "-3in", "testdata/cut.toml"}, exitUsage, "--mesh"},
+		{[]string{"solve", "--element", "foo", "../../testdata/walls/door.toml"}, exitUsage, "--element"},
+		// The opening that cuts the wall, where it is in the file.
+		{[]string{"solve", "testdata/cut.toml"}, exitInput, "cut.toml:22: opening[2]: opening SLOT cuts"},
+		{[]string{"testdata/cut.toml"}, exitUsage, "pierwise edit testdata/cut.toml"},
 	}
 	for _, tc := range tests {
 		code, _, errs := runCLI(tc.args...)
@@ -186,5 +190,37 @@ func TestReadmeWallFile(t *testing.T) {
 		if code, _, errs := runCLI("solve", arg); code != exitOK {
 			t.Errorf("solve %s: exit %d: %s", arg, code, errs)
 		}
+	}
+}
+
+// A report written over the file it reads would destroy the wall (or a
+// wall of a storey): -o refuses, and the file is left as it was.
+func TestReportRefusesToOverwriteItsInput(t *testing.T) {
+	dir := t.TempDir()
+	for _, name := range []string{"workshop.toml", "north.toml", "south.toml", "east.toml", "west.toml", "partition.toml"} {
+		data, err := os.ReadFile(filepath.Join("../../testdata/storey", name))
+		if err != nil {
+			t.Fatal(err)
+		}
+		if err := os.WriteFile(filepath.Join(dir, name), data, 0o644); err != nil {
+			t.Fatal(err)
+		}
+	}
+	storeyFile, wall := filepath.Join(dir, "workshop.toml"), filepath.Join(dir, "north.toml")
+	before, _ := os.ReadFile(wall)
+	for _, args := range [][]string{
+		{"report", wall, "-o", wall},
+		{"report", storeyFile, "-o", wall},
+		{"report", storeyFile, "-o", storeyFile},
+	} {
+		if code, _, errs := runCLI(args...); code != exitUsage || !strings.Contains(errs, "would overwrite") {
+			t.Errorf("%v: exit %d, %q; want a usage error", args, code, errs)
+		}
+	}
+	if after, _ := os.ReadFile(wall); string(after) != string(before) {
+		t.Error("the wall file changed")
+	}
+	if code, _, errs := runCLI("report", wall, "-o", filepath.Join(dir, "north.txt")); code != exitOK {
+		t.Errorf("report to another file: exit %d: %s", code, errs)
 	}
 }
