@@ -9,6 +9,7 @@ import (
 	"github.com/charmbracelet/bubbles/help"
 	"github.com/charmbracelet/bubbles/key"
 	tea "github.com/charmbracelet/bubbletea"
+	"github.com/charmbracelet/x/ansi"
 
 	"pierwise/geometry"
 	"pierwise/report"
@@ -268,8 +269,11 @@ func (s *sweepScreen) view() string {
 			"each pier's share of the wall shear (digits, see the legend). C marks",
 			"the current position, B the one where the highest pier shear stress",
 			"V/(L t) is lowest (* both at once), x a position the classic method",
-			"cannot solve. Pier names follow the position: P2 is the second pier",
-			"from the left wherever the opening is.",
+			"cannot solve, ! one where it warns of something it does not at the",
+			"current position (a thin strip between bands, a sliver pier...): its",
+			"numbers are less reliable there, and it is taken as best only when",
+			"every position is so marked. Pier names follow the position: P2 is",
+			"the second pier from the left wherever the opening is.",
 			"", "Any key closes this help.")
 		return fit(strings.Join(lines, "\n"), s.width, s.height)
 	}
@@ -308,6 +312,8 @@ func (s *sweepScreen) view() string {
 		lines = append(lines, st.errText.Render(truncate(s.msg, s.width)))
 	case s.msg != "":
 		lines = append(lines, st.note.Render(truncate(s.msg, s.width)))
+	case s.weakHere() != "":
+		lines = append(lines, st.errText.Render(ansi.Truncate(s.weakHere(), s.width, "…")))
 	default:
 		lines = append(lines, "")
 	}
@@ -329,7 +335,10 @@ func (s *sweepScreen) info() []string {
 	if p.Err != nil {
 		return []string{truncate(where+"no classic answer: "+p.Err.Error(), s.width), "", sweepLegend(s.pts, s.width)}
 	}
-	line1 := where + fmt.Sprintf("rel. rigidity %.4f", p.Rigidity)
+	if len(p.Weak) > 0 {
+		where += "! "
+	}
+	line1 := where + fmt.Sprintf("rigidity %.4f", p.Rigidity)
 	if c := study.CurrentIndex(s.pts); c >= 0 && s.pts[c].Err == nil {
 		if ch := report.ComparePct(s.pts[c].Rigidity, p.Rigidity); ch != "" {
 			line1 += " (" + ch + ")"
@@ -358,6 +367,15 @@ func (s *sweepScreen) info() []string {
 	return []string{truncate(line1, s.width), truncate(line2, s.width), sweepLegend(s.pts, s.width)}
 }
 
+// weakHere explains the ! of the position under the cursor in one line, or
+// is "" when the position has no such mark.
+func (s *sweepScreen) weakHere() string {
+	if s.running || s.cursor < 0 || s.cursor >= len(s.pts) || len(s.pts[s.cursor].Weak) == 0 {
+		return ""
+	}
+	return " ! warned here, not at the current position: " + strings.Join(s.pts[s.cursor].Weak, ", ")
+}
+
 // sweepMarker is the character that draws pier series i in the share plot.
 func sweepMarker(i int) rune {
 	const m = "123456789abcdefghijklmnopqrstuvwyz"
@@ -369,7 +387,20 @@ func sweepLegend(pts []study.Point, width int) string {
 	for i, n := range sweepNames(pts) {
 		parts = append(parts, fmt.Sprintf("%c %s", sweepMarker(i), n))
 	}
-	return truncate(" "+strings.Join(parts, "  ")+"   C current  B best  x no answer", width)
+	marks := "   C current  B best"
+	for _, p := range pts {
+		if p.Err != nil {
+			marks += "  x no answer"
+			break
+		}
+	}
+	for _, p := range pts {
+		if len(p.Weak) > 0 {
+			marks += "  ! less reliable"
+			break
+		}
+	}
+	return truncate(" "+strings.Join(parts, "  ")+marks, width)
 }
 
 // sweepNames lists every leaf pier name of the sweep in name order.
@@ -556,8 +587,11 @@ func sweepPlot(st *styles, pts []study.Point, axis study.Axis, sys geometry.Syst
 	out = append(out, strings.Repeat(" ", margin)+"+"+string(line))
 	marks := []rune(strings.Repeat(" ", pw))
 	for _, p := range pts {
-		if p.Err != nil {
+		switch {
+		case p.Err != nil:
 			marks[col(p.Pos(axis), pw)] = 'x'
+		case len(p.Weak) > 0:
+			marks[col(p.Pos(axis), pw)] = '!'
 		}
 	}
 	if i := study.CurrentIndex(pts); i >= 0 {

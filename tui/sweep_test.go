@@ -159,3 +159,90 @@ func TestSweepScreenRepeatedKeys(t *testing.T) {
 		t.Errorf("cursor %d after lll from %d", s.cursor, start)
 	}
 }
+
+// A position where the classic method warns of something it does not at the
+// current position (study.Point.Weak) carries a ! in the marks row of the
+// plot and in the cursor's readout, with a line that names the warning. The
+// wall is the classroom of study's weak test (invented): 40 ft × 12 ft,
+// three 4 ft × 4 ft windows at sill 3 ft; raising W2 to a sill of 7'-8"
+// leaves an 8 in strip between its band and the others' (head 7 ft).
+func TestSweepScreenMarksWeakPositions(t *testing.T) {
+	ft := geometry.Foot
+	w := &geometry.Wall{
+		Title: "classroom", Units: geometry.US, Length: 40 * ft, Height: 12 * ft, Thickness: 7.625 * geometry.Inch,
+		Support:   geometry.Cantilever,
+		Material:  geometry.Material{Kind: geometry.ConcreteMasonry, Strength: 2000 * geometry.PSI},
+		Load:      geometry.Load{Shear: 35 * geometry.Kip},
+		Stiffness: geometry.Stiffness{Flexure: 1, Shear: 1},
+		Drift:     geometry.Drift{Cd: 1, Ie: 1},
+		Layouts: []geometry.Layout{{Name: geometry.DefaultLayout, Openings: []geometry.Opening{
+			{Name: "W1", X: 6 * ft, Sill: 3 * ft, Width: 4 * ft, Height: 4 * ft},
+			{Name: "W2", X: 18 * ft, Sill: 3 * ft, Width: 4 * ft, Height: 4 * ft},
+			{Name: "W3", X: 30 * ft, Sill: 3 * ft, Width: 4 * ft, Height: 4 * ft},
+		}}},
+	}
+	for _, size := range [][2]int{{80, 24}, {120, 36}} {
+		sweepWeakCase(t, w, size[0], size[1])
+	}
+}
+
+func sweepWeakCase(t *testing.T, w *geometry.Wall, width, height int) {
+	c := newCommon(newDocument(w, "classroom.toml", true), nil)
+	s := newSweepScreen(c)
+	s.setSize(width, height)
+	s.opening, s.axis, s.step = 1, study.AlongY, 2 // W2 up and down by 8 in
+	s.update(s.start()())
+	want, err := study.Sweep(w, "W2", study.AlongY, 8*geometry.Inch)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if len(s.pts) != len(want) {
+		t.Fatalf("%d points, study.Sweep gives %d", len(s.pts), len(want))
+	}
+	lines := strings.Split(ansi.Strip(s.view()), "\n")
+	var marks string
+	for i, l := range lines {
+		if strings.HasPrefix(strings.TrimSpace(l), "+---") {
+			marks = lines[i+1]
+		}
+	}
+	nWeak, weak := 0, -1
+	for i, p := range want {
+		if len(p.Weak) > 0 && p.Err == nil && !p.Best {
+			nWeak++
+			weak = i
+		}
+	}
+	if nWeak == 0 {
+		t.Fatal("study.Sweep marks no position weak: the case this test is about is gone")
+	}
+	if got := strings.Count(marks, "!"); got != nWeak {
+		t.Errorf("%dx%d: %d ! in the marks row %q, want %d (the weak positions)", width, height, got, marks, nWeak)
+	}
+	// The cursor starts on the current position, which is never weak.
+	if v := ansi.Strip(s.view()); strings.Contains(v, "warned here") {
+		t.Errorf("%dx%d: the current position is explained as weak:\n%s", width, height, v)
+	}
+	for s.cursor < weak {
+		s.update(cmpKey("l"))
+	}
+	for s.cursor > weak {
+		s.update(cmpKey("h"))
+	}
+	v := ansi.Strip(s.view())
+	cmpCheckSize(t, v, width, height)
+	if !strings.Contains(v, "^ sill "+geometry.FormatLength(want[weak].Y, geometry.US)+"  ! ") {
+		t.Errorf("%dx%d: the readout of sill %s lacks the !:\n%s", width, height, geometry.FormatLength(want[weak].Y, geometry.US), v)
+	}
+	// The explanation names the warnings (all of them when there is room).
+	kinds := want[weak].Weak
+	if width < 120 {
+		kinds = kinds[:1]
+	}
+	if !strings.Contains(v, "! warned here, not at the current position: "+strings.Join(kinds, ", ")) {
+		t.Errorf("%dx%d: no line names %q:\n%s", width, height, kinds, v)
+	}
+	if !strings.Contains(v, "! less reliable") {
+		t.Errorf("%dx%d: the legend does not explain !:\n%s", width, height, v)
+	}
+}
