@@ -473,7 +473,7 @@ func checkWall(w *geometry.Wall) ([]opening, error) {
 
 // loads fills the absolute rigidity, the pier forces, the deflection under
 // the load and the drift check.
-func (s *solver) loads(w *geometry.Wall) error {
+func (s *solver) loads(w *geometry.Wall) (err error) {
 	r := s.res
 	E := float64(r.Moduli.E)
 	if E > 0 && s.thick > 0 {
@@ -503,7 +503,14 @@ func (s *solver) loads(w *geometry.Wall) error {
 		return nil
 	}
 	r.DeflectionAbs = geometry.Length(V / (E * s.thick) * r.Deflection)
+	r.Drift, err = CheckDrift(w, r.DeflectionAbs)
+	return err
+}
 
+// CheckDrift checks the top deflection δe of wall w under its shear against
+// the wall's drift settings: δ = Cd·δe/Ie against the limit times the
+// height. The classic result and the finite-element check share it.
+func CheckDrift(w *geometry.Wall, elastic geometry.Length) (DriftCheck, error) {
 	dr := w.Drift
 	cd, ie := dr.Cd, dr.Ie
 	if cd == 0 {
@@ -513,29 +520,28 @@ func (s *solver) loads(w *geometry.Wall) error {
 		ie = 1
 	}
 	if !(cd > 0) || math.IsInf(cd, 0) || !(ie > 0) || math.IsInf(ie, 0) {
-		return fmt.Errorf("pier: drift factors Cd and Ie must be positive numbers, got %g and %g", cd, ie)
+		return DriftCheck{}, fmt.Errorf("pier: drift factors Cd and Ie must be positive numbers, got %g and %g", cd, ie)
 	}
 	limit := dr.Limit
 	if limit == 0 && dr.Preset != "" {
 		pr, ok := geometry.FindDriftPreset(dr.Preset)
 		if !ok {
-			return fmt.Errorf("pier: unknown drift limit preset %q", dr.Preset)
+			return DriftCheck{}, fmt.Errorf("pier: unknown drift limit preset %q", dr.Preset)
 		}
 		limit = pr.Limit
 	}
 	if !(limit >= 0) || math.IsInf(limit, 0) {
-		return fmt.Errorf("pier: the drift limit must be a positive fraction of the height, got %g", limit)
+		return DriftCheck{}, fmt.Errorf("pier: the drift limit must be a positive fraction of the height, got %g", limit)
 	}
 	h := float64(w.Height)
-	design := cd * float64(r.DeflectionAbs) / ie
-	r.Drift = DriftCheck{
-		Elastic:   r.DeflectionAbs,
+	design := cd * float64(elastic) / ie
+	return DriftCheck{
+		Elastic:   elastic,
 		Design:    geometry.Length(design),
 		Allowable: geometry.Length(limit * h),
 		Ratio:     design / h,
 		OK:        limit == 0 || design <= limit*h,
-	}
-	return nil
+	}, nil
 }
 
 // checkFinite is the last guard of the promise that a Result holds no NaN

@@ -63,12 +63,18 @@ func Wall(out io.Writer, in Input) error {
 	if in.Result == nil {
 		w.Section("3. Classic method")
 		w.Wrapped("  ", fmt.Sprintf("The classic method cannot be applied to this layout: %v.", in.Err))
-		if in.FE != nil {
-			w.Section("4. Finite-element check")
+		var warns []string
+		switch {
+		case in.FE != nil:
+			w.Section("4. Finite-element check (the only answer for this layout)")
 			feSection(w, in.FE, nil, wall)
+			warns = in.FE.Warnings
+		case in.FEErr != nil:
+			w.Section("4. Finite-element check")
+			w.Wrapped("  ", fmt.Sprintf("The finite-element check failed: %v.", in.FEErr))
 		}
-		w.Blank()
-		w.Para(Caution)
+		w.Section("5. Warnings")
+		w.Close(warns)
 		return w.Err()
 	}
 	res := in.Result
@@ -248,18 +254,24 @@ func results(w *Text, res *pier.Result, wall *geometry.Wall, u Units) {
 	if d := res.Split.Total(); d > 0 {
 		w.KV("Split", fmt.Sprintf("bending %.0f %%, shear %.0f %% of the wall's deflection", 100*res.Split.Bending/d, 100*res.Split.Shear/d))
 	}
-	if res.Moduli.E <= 0 {
+	inUnits(w, wall, u, res.RigidityAbs, res.HasLoad, res.DeflectionAbs, res.Drift)
+}
+
+// inUnits writes a rigidity (N/m, 0 when the material gives no modulus)
+// and, under a load, the deflection and the drift check, in report units.
+// The classic results and the finite-element model's share it.
+func inUnits(w *Text, wall *geometry.Wall, u Units, rigidity float64, loaded bool, defl geometry.Length, d pier.DriftCheck) {
+	if rigidity <= 0 {
 		w.KV("Rigidity", "not known: the material gives no modulus")
 		return
 	}
-	w.KV("Rigidity", fmt.Sprintf("R = %s %s  (R relative × E·t)", Number(u.RigidityOf(res.RigidityAbs)), u.Rigidity))
-	if !res.HasLoad {
+	w.KV("Rigidity", fmt.Sprintf("R = %s %s  (R relative × E·t)", Number(u.RigidityOf(rigidity)), u.Rigidity))
+	if !loaded {
 		w.KV("Deflection", "no load given")
 		return
 	}
-	w.KV("Deflection", fmt.Sprintf("δe = %.4g %s under V = %s", u.DeflectionOf(res.DeflectionAbs), u.Deflection, geometry.FormatForce(wall.Load.Shear, wall.Units)))
-	d := res.Drift
-	w.KV("Drift", fmt.Sprintf("δ = Cd·δe/Ie = %.4g %s = %.5f h", u.DeflectionOf(d.Design), u.Deflection, d.Ratio))
+	w.KV("Deflection", fmt.Sprintf("δe = %s %s under V = %s", Number(u.DeflectionOf(defl)), u.Deflection, geometry.FormatForce(wall.Load.Shear, wall.Units)))
+	w.KV("Drift", fmt.Sprintf("δ = Cd·δe/Ie = %s %s = %s h", Number(u.DeflectionOf(d.Design)), u.Deflection, Fraction(d.Ratio)))
 	if d.Allowable > 0 {
 		verdict := "OK"
 		if !d.OK {
@@ -276,6 +288,7 @@ func feSection(w *Text, r *fe.Result, res *pier.Result, wall *geometry.Wall) {
 	w.KV("Supports", "base fixed; shear spread over the top edge; deflection = mean of the top nodes")
 	w.KV("Δ relative", fmt.Sprintf("%.4f /(E·t)", r.Deflection))
 	w.KV("R relative", fmt.Sprintf("%.4f E·t", r.Rigidity))
+	inUnits(w, wall, UnitsFor(wall.Units), r.RigidityAbs, r.HasLoad, r.DeflectionAbs, r.Drift)
 	if res == nil {
 		return
 	}

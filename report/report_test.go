@@ -165,3 +165,42 @@ func TestWallReportCutPier(t *testing.T) {
 		t.Errorf("cut pier P2 not marked in both tables (%d rows) or not explained:\n%s", cutLines, got)
 	}
 }
+
+// When the classic method has no answer (staggered openings), the FE model
+// is the only one: the report gives its rigidity, deflection and drift in
+// real units, from fe.Solve's own result.
+func TestWallReportFEOnly(t *testing.T) {
+	ft := geometry.Foot
+	w := &geometry.Wall{
+		Title: "staggered (invented)", Length: 10 * ft, Height: 10 * ft, Thickness: 8 * geometry.Inch,
+		Material: geometry.Material{Kind: geometry.ConcreteMasonry, Strength: 2000 * geometry.PSI},
+		Load:     geometry.Load{Shear: 10 * geometry.Kip},
+		Layouts: []geometry.Layout{{Name: "main", Openings: []geometry.Opening{
+			{Name: "W1", X: 0, Sill: 2 * ft, Width: 5 * ft, Height: 2 * ft},
+			{Name: "W2", X: 6 * ft, Sill: 3.5 * ft, Width: 4 * ft, Height: 2 * ft},
+			{Name: "W3", X: 5 * ft, Sill: 5 * ft, Width: 1 * ft, Height: 2 * ft},
+		}}},
+	}
+	res, classicErr := pier.Solve(w)
+	if res != nil || classicErr == nil {
+		t.Fatalf("want the classic method to fail on staggered openings, got %v", classicErr)
+	}
+	f, err := fe.Solve(w, nil, fe.Options{})
+	if err != nil {
+		t.Fatal(err)
+	}
+	if !f.HasLoad || !(f.RigidityAbs > 0) || !(f.DeflectionAbs > 0) {
+		t.Fatalf("FE result without real units: %+v", f)
+	}
+	var buf bytes.Buffer
+	if err := Wall(&buf, Input{Wall: w, Err: classicErr, FE: f, Now: reportTime, Version: "test"}); err != nil {
+		t.Fatal(err)
+	}
+	u := UnitsFor(geometry.US)
+	got := buf.String()
+	for _, want := range []string{"staggered", "the only answer", "R = " + Number(u.RigidityOf(f.RigidityAbs)), "δe = " + Number(u.DeflectionOf(f.DeflectionAbs)), "CAUTION"} {
+		if !strings.Contains(got, want) {
+			t.Errorf("report lacks %q:\n%s", want, got)
+		}
+	}
+}

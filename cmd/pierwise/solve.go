@@ -292,6 +292,13 @@ func writeFETable(t *report.Text, s *solved) {
 	f := s.fe
 	t.Line(fmt.Sprintf("  finite-element check (%s, mesh %s, %d elements):", f.Element, geometry.FormatLength(f.Mesh, s.wall.Units), f.Elements))
 	t.Line(fmt.Sprintf("    relative deflection %.4f /(E·t), relative rigidity %.4f E·t", f.Deflection, f.Rigidity))
+	if u := report.UnitsFor(s.wall.Units); f.RigidityAbs > 0 {
+		line := fmt.Sprintf("    rigidity %s %s", report.Number(u.RigidityOf(f.RigidityAbs)), u.Rigidity)
+		if f.HasLoad {
+			line += fmt.Sprintf("; δe = %s %s, δ = %s %s", report.Number(u.DeflectionOf(f.DeflectionAbs)), u.Deflection, report.Number(u.DeflectionOf(f.Drift.Design)), u.Deflection)
+		}
+		t.Line(line)
+	}
 	if s.res != nil {
 		t.Line(fmt.Sprintf("    the classic rigidity is %s the finite-element rigidity", report.ClassicVersusFE(f.Difference)))
 	}
@@ -366,6 +373,8 @@ type jsonFE struct {
 	DeflectionRelative float64       `json:"deflection_relative"`
 	RigidityRelative   float64       `json:"rigidity_relative"`
 	Difference         *float64      `json:"rigidity_difference,omitempty"`
+	Rigidity           *float64      `json:"rigidity,omitempty"`
+	Deflection         *float64      `json:"deflection,omitempty"`
 	Mesh               float64       `json:"mesh"`
 	Element            string        `json:"element"`
 	Elements           int           `json:"elements"`
@@ -443,6 +452,12 @@ func toJSON(s *solved) jsonWall {
 			f.Mesh, f.Element, f.Elements, f.DOFs = tidy(u.CoordOf(float64(s.fe.Mesh))), s.fe.Element, s.fe.Elements, s.fe.DOFs
 			if s.res != nil {
 				f.Difference = ptr(s.fe.Difference)
+			}
+			if s.fe.RigidityAbs > 0 {
+				f.Rigidity = ptr(u.RigidityOf(s.fe.RigidityAbs))
+			}
+			if s.fe.HasLoad {
+				f.Deflection = ptr(u.DeflectionOf(s.fe.DeflectionAbs))
 			}
 			for _, p := range s.fe.Piers {
 				f.Piers = append(f.Piers, jsonFEShare{Name: p.Name, Share: p.Share})

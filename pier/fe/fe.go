@@ -70,6 +70,14 @@ type Result struct {
 	Piers      []PierShare
 	Difference float64  // (classic rigidity − FE rigidity) / FE rigidity; 0 without a classic result
 	Warnings   []string // where the model's answer is not comparable with the classic one
+
+	// Known when the material gives E and the wall a thickness, as in
+	// pier.Result: the model's rigidity in N/m and, under the wall's
+	// shear, its top deflection and drift check.
+	RigidityAbs   float64
+	HasLoad       bool
+	DeflectionAbs geometry.Length
+	Drift         pier.DriftCheck
 }
 
 // PierShare is the fraction of the wall shear that crosses a leaf pier's
@@ -106,7 +114,30 @@ func Solve(w *geometry.Wall, classic *pier.Result, opt Options) (*Result, error)
 		r.Difference = (classic.Rigidity - r.Rigidity) / r.Rigidity
 	}
 	r.Warnings = topWarnings(w)
+	if err := r.absolute(w); err != nil {
+		return nil, err
+	}
 	return r, nil
+}
+
+// absolute fills the rigidity, deflection and drift in real units when the
+// material and thickness are known: the only real numbers an engineer has
+// for a layout the classic method cannot solve.
+func (r *Result) absolute(w *geometry.Wall) error {
+	mod, err := pier.MaterialModuliFor(w.Material, w.Units)
+	E, t := float64(mod.E), float64(w.Thickness)
+	if err != nil || !(E > 0) || !(t > 0) {
+		return nil // relative values only, as for the classic method
+	}
+	r.RigidityAbs = r.Rigidity * E * t
+	V := float64(w.Load.Shear)
+	if !(V > 0) {
+		return nil
+	}
+	r.HasLoad = true
+	r.DeflectionAbs = geometry.Length(V / (E * t) * r.Deflection)
+	r.Drift, err = pier.CheckDrift(w, r.DeflectionAbs)
+	return err
 }
 
 // topWarnings warns when openings reach the top of the wall. The model

@@ -473,3 +473,35 @@ func TestWarnsWhenOpeningsReachTheTop(t *testing.T) {
 		t.Errorf("under a spandrel: warnings %q, err %v; want none", res.Warnings, err)
 	}
 }
+
+// The model's rigidity in real units is its relative rigidity times E·t,
+// the same E and t as the classic result's, and its drift follows the
+// wall's settings as the classic one does.
+func TestAbsoluteValuesFollowTheClassicConvention(t *testing.T) {
+	ft := geometry.Foot
+	w := &geometry.Wall{
+		Length: 20 * ft, Height: 10 * ft, Thickness: 8 * geometry.Inch,
+		Material: geometry.Material{Kind: geometry.ConcreteMasonry, Strength: 2000 * geometry.PSI},
+		Load:     geometry.Load{Shear: 20 * geometry.Kip},
+		Drift:    geometry.Drift{Cd: 3.5, Ie: 1.25, Limit: 0.007},
+		Layouts:  []geometry.Layout{{Name: "main", Openings: []geometry.Opening{{Name: "D1", X: 8 * ft, Width: 4 * ft, Height: 7 * ft}}}},
+	}
+	classic, err := pier.Solve(w)
+	if err != nil {
+		t.Fatal(err)
+	}
+	r, err := Solve(w, classic, Options{Mesh: 1 * ft})
+	if err != nil {
+		t.Fatal(err)
+	}
+	if got, want := r.RigidityAbs/classic.RigidityAbs, r.Rigidity/classic.Rigidity; math.Abs(got-want) > 1e-12 {
+		t.Errorf("absolute rigidity ratio %.6f, relative %.6f", got, want)
+	}
+	if got, want := float64(r.DeflectionAbs)/float64(classic.DeflectionAbs), r.Deflection/classic.Deflection; math.Abs(got-want) > 1e-12 {
+		t.Errorf("deflection ratio %.6f, relative %.6f", got, want)
+	}
+	// δ = Cd·δe/Ie (ASCE 7-22 §12.8.6).
+	if d := r.Drift; math.Abs(float64(d.Design)-3.5*float64(r.DeflectionAbs)/1.25) > 1e-15 || math.Abs(float64(d.Allowable)-0.007*float64(w.Height)) > 1e-15 {
+		t.Errorf("drift %+v", d)
+	}
+}
