@@ -105,8 +105,11 @@ func Elevation(w *geometry.Wall, res *pier.Result, cols, rows int) *Grid {
 		g.rect(c0, c1, r0, r1, OpeningEdge, i)
 	}
 
+	var beside []int // openings whose names do not fit in their boxes
 	for i, o := range ops {
-		g.labelOpening(i, o)
+		if o.Name != "" && !g.labelOpening(i, o) {
+			beside = append(beside, i)
+		}
 	}
 	if res != nil {
 		for i, p := range res.Piers {
@@ -114,6 +117,10 @@ func Elevation(w *geometry.Wall, res *pier.Result, cols, rows int) *Grid {
 				g.labelPier(i, p)
 			}
 		}
+	}
+	// Names beside their boxes take what the pier labels left.
+	for _, i := range beside {
+		g.labelBeside(i, ops[i])
 	}
 	return g
 }
@@ -211,29 +218,54 @@ func (g *Grid) line(c, r int, ch rune, kind CellKind, opening int) {
 }
 
 // labelOpening writes the opening's name inside it, else over its head
-// line, else just above it.
-func (g *Grid) labelOpening(i int, o geometry.Opening) {
+// line; it reports whether the name fitted. A name that does not fit goes
+// beside the box (labelBeside) or nowhere: a name anywhere else (above the
+// box, say) reads as a label of the solid wall around it.
+func (g *Grid) labelOpening(i int, o geometry.Opening) bool {
 	name := o.Name
-	if name == "" {
-		return
-	}
 	c0, c1, r0, r1 := g.box(o.Rect())
 	n := utf8.RuneCountInString(name)
 	free := func(k CellKind) func(Cell) bool {
 		return func(c Cell) bool { return c.Kind == k && c.Opening == i }
 	}
-	solid := func(c Cell) bool { return c.Kind == Solid || c.Kind == PierFill }
 	if c1-c0-1 >= n && r0-r1-1 >= 1 {
 		if g.place((r0+r1)/2, c0+1, c1-1, name, OpeningLabel, i, free(OpeningSpace)) {
-			return
+			return true
 		}
 	}
-	if c1-c0-1 >= n && g.place(r1, c0+1, c1-1, name, OpeningLabel, i, free(OpeningEdge)) {
-		return
+	return c1-c0-1 >= n && g.place(r1, c0+1, c1-1, name, OpeningLabel, i, free(OpeningEdge))
+}
+
+// labelBeside writes the opening's name beside its box, right, then left,
+// on the box's rows from the middle out; one cell from the outline when
+// there is room, else touching it; never touching another outline. It
+// reports whether the name found room.
+func (g *Grid) labelBeside(i int, o geometry.Opening) bool {
+	name := o.Name
+	c0, c1, r0, r1 := g.box(o.Rect())
+	n := utf8.RuneCountInString(name)
+	solid := func(c Cell) bool { return c.Kind == Solid || c.Kind == PierFill }
+	mid := (r0 + r1) / 2
+	for _, gap := range []int{1, 0} {
+		for d := 0; d <= r0-r1; d++ {
+			for _, r := range []int{mid - d, mid + d} {
+				if r < r1 || r > r0 || (d > 0 && r == mid) {
+					continue
+				}
+				// The gap and the cell past the name must be solid too: a
+				// name that touches another outline reads as that one's.
+				if g.fits(r, c1+1, c1+gap+n+1, strings.Repeat(" ", gap+n+1), solid) &&
+					g.place(r, c1+1+gap, c1+gap+n, name, OpeningLabel, i, solid) {
+					return true
+				}
+				if g.fits(r, c0-gap-n-1, c0-1, strings.Repeat(" ", gap+n+1), solid) &&
+					g.place(r, c0-gap-n, c0-gap-1, name, OpeningLabel, i, solid) {
+					return true
+				}
+			}
+		}
 	}
-	if r1 > 0 {
-		g.place(r1-1, c0, min(g.Cols-1, c0+n+1), name, OpeningLabel, i, solid)
-	}
+	return false
 }
 
 // labelPier writes the pier's name and share inside it where they fit:

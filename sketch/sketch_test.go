@@ -69,6 +69,76 @@ func long() *geometry.Wall {
 	}
 }
 
+// tower is an invented tall narrow wall, 4 ft × 60 ft, with a 1 ft × 4 ft
+// window W1 at a sill of 30 ft: the window's box has no room for its name
+// and neither has the wall beside it.
+func tower() *geometry.Wall {
+	return &geometry.Wall{
+		Units: geometry.US, Length: 4 * ft, Height: 60 * ft,
+		Layouts: []geometry.Layout{{Name: "main", Openings: []geometry.Opening{
+			{Name: "W1", X: 1.5 * ft, Sill: 30 * ft, Width: 1 * ft, Height: 4 * ft},
+		}}},
+	}
+}
+
+// slot is an invented 20 ft × 10 ft wall with a slot window W1 (1 ft × 4 ft,
+// sill 3 ft) too narrow for its name, and solid wall beside it.
+func slot() *geometry.Wall {
+	return &geometry.Wall{
+		Units: geometry.US, Length: 20 * ft, Height: 10 * ft,
+		Layouts: []geometry.Layout{{Name: "main", Openings: []geometry.Opening{
+			{Name: "W1", X: 8 * ft, Sill: 3 * ft, Width: 1 * ft, Height: 4 * ft},
+		}}},
+	}
+}
+
+// An opening's name is drawn in its box, on its head line or beside it on
+// one of its rows, or not at all: never above or below it, where it reads
+// as a label of the solid wall.
+func TestOpeningLabelStaysWithItsBox(t *testing.T) {
+	for _, tc := range []struct {
+		name       string
+		wall       *geometry.Wall
+		cols, rows int
+		drawn      bool // whether there is room for the name
+	}{
+		{"tower", tower(), 34, 20, false},
+		{"tower", tower(), 40, 40, false},
+		{"slot", slot(), 30, 10, true},
+		{"slot", slot(), 12, 6, true},
+		{"long", long(), 20, 6, true},
+		{"chronicles", chronicles(), 40, 12, true},
+	} {
+		g := Elevation(tc.wall, nil, tc.cols, tc.rows)
+		for i, o := range tc.wall.Openings() {
+			c0, c1, r0, r1 := g.box(o.Rect())
+			n := 0
+			for r := 0; r < g.Rows; r++ {
+				for c := 0; c < g.Cols; c++ {
+					cell := g.At(c, r)
+					if cell.Kind != OpeningLabel || cell.Opening != i {
+						continue
+					}
+					n++
+					if r < r1 || r > r0 {
+						t.Errorf("%s %dx%d: a letter of %s on row %d, outside its box's rows %d–%d:\n%s",
+							tc.name, tc.cols, tc.rows, o.Name, r, r1, r0, g)
+					}
+					if near := c >= c0-1-len(o.Name) && c <= c1+1+len(o.Name); !near {
+						t.Errorf("%s %dx%d: a letter of %s in column %d, away from its box %d–%d", tc.name, tc.cols, tc.rows, o.Name, c, c0, c1)
+					}
+				}
+			}
+			if n != 0 && n != len(o.Name) {
+				t.Errorf("%s %dx%d: %d letters of %s drawn", tc.name, tc.cols, tc.rows, n, o.Name)
+			}
+			if i == 0 && (n > 0) != tc.drawn {
+				t.Errorf("%s %dx%d: %s drawn %v, want %v:\n%s", tc.name, tc.cols, tc.rows, o.Name, n > 0, tc.drawn, g)
+			}
+		}
+	}
+}
+
 func golden(t *testing.T, name, got string) {
 	t.Helper()
 	path := filepath.Join("testdata", name)
@@ -99,6 +169,8 @@ func TestElevationGolden(t *testing.T) {
 		{"chronicles_nores_30x10.txt", chronicles(), nil, 30, 10},
 		{"long_78x14.txt", long(), nil, 78, 14},
 		{"long_20x6.txt", long(), nil, 20, 6},
+		{"tower_34x20.txt", tower(), nil, 34, 20},
+		{"slot_30x10.txt", slot(), nil, 30, 10},
 	} {
 		t.Run(tc.name, func(t *testing.T) {
 			g := Elevation(tc.wall, tc.res, tc.cols, tc.rows)
