@@ -721,3 +721,95 @@ func TestCrackedStiffness(t *testing.T) {
 		t.Error("cracked rigidity not shown")
 	}
 }
+
+// The height label goes above its scale when that leaves the larger drawing
+// (a long wall in a small window) and beside it otherwise (a tall wall):
+// the sketch is never smaller than with the label beside, the outline is
+// where the layout (and so the mouse) puts it, and the label is drawn.
+func TestElevationLayoutHeightLabel(t *testing.T) {
+	tall := annex()
+	tall.Length, tall.Height = 8*geometry.Foot, 30*geometry.Foot
+	tall.Layouts = tall.Layouts[:1]
+	tall.Layouts[0].Openings = []geometry.Opening{{Name: "W1", X: 2 * geometry.Foot, Sill: 10 * geometry.Foot, Width: 3 * geometry.Foot, Height: 4 * geometry.Foot}}
+	for _, tc := range []struct {
+		name  string
+		wall  *geometry.Wall
+		sizes [][2]int
+		top   bool // label above at 80×24
+	}{
+		{"annex", annex(), [][2]int{{80, 24}, {100, 30}, {160, 48}}, true},
+		{"tall", tall, [][2]int{{80, 24}, {160, 48}}, false},
+	} {
+		for _, size := range tc.sizes {
+			ed := newEditor(t, tc.wall, "", size[0], size[1])
+			e := ed.elev()
+			l := e.layout()
+			g := e.grid(l)
+			w := e.wall()
+			hLabel := geometry.FormatLength(w.Height, w.Units)
+			side := sketch.Elevation(w, e.res, max(3, l.areaW-l.elevX-(4+len(hLabel))), max(3, l.topH-2))
+			if g.Cols < side.Cols || g.Rows < side.Rows {
+				t.Errorf("%s %v: sketch %d×%d, with the label beside %d×%d", tc.name, size, g.Cols, g.Rows, side.Cols, side.Rows)
+			}
+			if size[0] == 80 {
+				if l.hTop != tc.top {
+					t.Errorf("%s 80×24: label above %v, want %v", tc.name, l.hTop, tc.top)
+				}
+				if tc.top && g.Cols <= side.Cols {
+					t.Errorf("%s 80×24: the label above gains no columns (%d, beside %d)", tc.name, g.Cols, side.Cols)
+				}
+			}
+			v := ed.view()
+			checkSize(t, v, size[0], size[1])
+			lines := strings.Split(v, "\n")
+			at := func(r, c int) rune {
+				if rs := []rune(lines[r]); c < len(rs) {
+					return rs[c]
+				}
+				return ' '
+			}
+			for _, r := range []int{l.elevY, l.elevY + g.Rows - 1} {
+				if at(r, l.elevX) != '+' || at(r, l.elevX+g.Cols-1) != '+' {
+					t.Errorf("%s %v: no wall corner at row %d, columns %d and %d:\n%s", tc.name, size, r, l.elevX, l.elevX+g.Cols-1, v)
+				}
+			}
+			labelRow := l.elevY + g.Rows/2
+			if l.hTop {
+				labelRow = l.elevY - 1
+			}
+			area := []rune(lines[labelRow])[:l.areaW]
+			i := strings.Index(string(area), hLabel) // the row left of the panel is ASCII
+			switch {
+			case i < 0:
+				t.Errorf("%s %v: height %s not on row %d:\n%s", tc.name, size, hLabel, labelRow, v)
+			case at(labelRow, i+len(hLabel)) != ' ' || at(labelRow, i+len(hLabel)+1) != ' ':
+				t.Errorf("%s %v: height label runs into the panel: %q", tc.name, size, lines[labelRow])
+			}
+		}
+	}
+}
+
+// A results line whose value is too long for the value column moves the
+// value left, or under its label, instead of losing its end.
+func TestResultsLineNeverCut(t *testing.T) {
+	l := elevLayout{sumW: 34, keyW: 12}
+	for _, v := range []string{
+		"0.0243 <= 1.68 in PASS",           // fits the column
+		"0.00243 <= 0.168 in PASS",         // two cells too long: moves left
+		"0.000243 <= 0.0168 in FAIL twice", // too long beside any label: next line
+	} {
+		lines := l.kv("drift", v)
+		joined := strings.Join(strings.Fields(strings.Join(lines, " ")), " ")
+		if joined != "drift "+v {
+			t.Errorf("%q: lines %q lose text", v, lines)
+		}
+		for _, line := range lines {
+			if w := ansi.StringWidth(line); w > l.sumW {
+				t.Errorf("%q: line %q is %d wide, panel %d", v, line, w, l.sumW)
+			}
+		}
+		if len(lines) == 1 && !strings.HasSuffix(lines[0], v) {
+			t.Errorf("%q: %q", v, lines[0])
+		}
+	}
+}

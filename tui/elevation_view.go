@@ -19,12 +19,14 @@ import (
 // elevLayout places the parts of the elevation screen; the view and the
 // mouse both use it.
 type elevLayout struct {
-	bodyY, bodyH int // below the title bar, above the status and hint lines
-	topH         int // elevation and results panel
-	areaW        int // the elevation's share of the width
-	sumX, sumW   int // the results panel
-	elevX, elevY int // top-left cell of the sketch
-	elevW, elevH int // the box the sketch is fitted in
+	bodyY, bodyH int  // below the title bar, above the status and hint lines
+	topH         int  // elevation and results panel
+	areaW        int  // the elevation's share of the width
+	sumX, sumW   int  // the results panel
+	keyW         int  // the panel's label column
+	hTop         bool // the height label above its scale, not beside it
+	elevX, elevY int  // top-left cell of the sketch
+	elevW, elevH int  // the box the sketch is fitted in
 	tableY       int
 	tableH       int
 }
@@ -32,7 +34,7 @@ type elevLayout struct {
 func (e *elevation) layout() elevLayout {
 	var l elevLayout
 	l.bodyY, l.bodyH = 1, max(0, e.height-3)
-	l.sumW = 34
+	l.sumW, l.keyW = 34, 12
 	if e.width >= 120 {
 		l.sumW = 42
 	}
@@ -49,9 +51,26 @@ func (e *elevation) layout() elevLayout {
 	l.tableH = max(0, l.bodyH-l.topH-1)
 	hLabel := geometry.FormatLength(e.wall().Height, e.wall().Units)
 	l.elevX, l.elevY = 1, l.bodyY
+	// The height label goes beside its scale (costing columns) or above it
+	// (costing a row), whichever leaves the larger drawing: a long wall is
+	// short of columns, a tall one of rows.
 	l.elevW = max(3, l.areaW-l.elevX-(4+len(hLabel)))
 	l.elevH = max(3, l.topH-2)
+	// Above, two blanks part the label from the panel's heading beside it.
+	topW, topH := max(3, l.areaW-l.elevX-5), max(3, l.topH-3)
+	if L, H := float64(e.wall().Length), float64(e.wall().Height); L > 0 && H > 0 &&
+		sketchScale(L, H, topW, topH) > sketchScale(L, H, l.elevW, l.elevH)*(1+1e-9) {
+		l.hTop = true
+		l.elevY++
+		l.elevW, l.elevH = topW, topH
+	}
 	return l
+}
+
+// sketchScale is the columns per metre sketch.Elevation draws a wall of
+// L × H metres at in a box of cols × rows cells (a cell is two columns tall).
+func sketchScale(L, H float64, cols, rows int) float64 {
+	return math.Min(float64(cols-1)/L, 2*float64(rows-1)/H)
 }
 
 func (e *elevation) grid(l elevLayout) *sketch.Grid {
@@ -142,6 +161,10 @@ func (e *elevation) elevationView(l elevLayout) string {
 	var b strings.Builder
 	margin := strings.Repeat(" ", l.elevX)
 	hLabel := geometry.FormatLength(e.wall().Height, e.wall().Units)
+	if l.hTop {
+		// Above the scale, ending over its line.
+		b.WriteString(strings.Repeat(" ", max(0, l.elevX+g.Cols+3-len(hLabel))) + hLabel + "\n")
+	}
 	for r := 0; r < g.Rows; r++ {
 		b.WriteString(margin)
 		cur := paint{}
@@ -198,7 +221,7 @@ func (e *elevation) elevationView(l elevLayout) string {
 		switch {
 		case r == 0 || r == g.Rows-1:
 			b.WriteString(" -+")
-		case r == g.Rows/2:
+		case r == g.Rows/2 && !l.hTop:
 			b.WriteString("  | " + hLabel)
 		default:
 			b.WriteString("  |")
@@ -244,9 +267,13 @@ func (e *elevation) summaryView(l elevLayout) string {
 	w := e.wall()
 	u := report.UnitsFor(w.Units)
 	var lines []string
-	var extra []int // lines that go first when the panel is short
-	kv := func(k, v string) { lines = append(lines, padRight(k, 12)+v) }
-	kvExtra := func(k, v string) { extra = append(extra, len(lines)); kv(k, v) }
+	var extra [][2]int // lines that go first when the panel is short: first, count
+	kv := func(k, v string) { lines = append(lines, l.kv(k, v)...) }
+	kvExtra := func(k, v string) {
+		n := len(lines)
+		kv(k, v)
+		extra = append(extra, [2]int{n, len(lines) - n})
+	}
 	lines = append(lines, st.heading.Render("Results")+st.dim.Render(" (classic method)"))
 	if e.solveErr != nil {
 		lines = append(lines, st.errText.Render("No answer:"))
@@ -293,8 +320,8 @@ func (e *elevation) summaryView(l elevLayout) string {
 	fe := e.feLines(l)
 	// On a short panel the inputs echoed above give way to the FE answer.
 	for k := len(extra) - 1; k >= 0 && len(lines)+1+len(fe) > l.topH; k-- {
-		i := extra[k]
-		lines = append(lines[:i], lines[i+1:]...)
+		i, n := extra[k][0], extra[k][1]
+		lines = append(lines[:i], lines[i+n:]...)
 	}
 	lines = append(lines, "")
 	lines = append(lines, fe...)
@@ -307,6 +334,24 @@ func (e *elevation) summaryView(l elevLayout) string {
 		}
 	}
 	return strings.Join(lines, "\n")
+}
+
+// kv is a line of the results panel: the label in its column, then the
+// value. A value too long for its column starts closer to the label, or on
+// the next line, so that no number is cut off.
+func (l elevLayout) kv(k, v string) []string {
+	vw := lipgloss.Width(v)
+	switch {
+	case l.keyW+vw <= l.sumW:
+		return []string{padRight(k, l.keyW) + v}
+	case lipgloss.Width(k)+1+vw <= l.sumW:
+		return []string{padRight(k, l.sumW-vw) + v}
+	}
+	out := []string{k}
+	for _, line := range wrap(v, l.sumW-2) {
+		out = append(out, "  "+line)
+	}
+	return out
 }
 
 // feLines is the FE check's part of the results panel.
@@ -324,7 +369,7 @@ func (e *elevation) feLines(l elevLayout) []string {
 	}
 	r := f.res
 	lines := []string{head}
-	kv := func(k, v string) { lines = append(lines, padRight(k, 12)+v) }
+	kv := func(k, v string) { lines = append(lines, l.kv(k, v)...) }
 	kv("relative", num(r.Rigidity)+" x E t")
 	if e.res != nil && r.Rigidity > 0 {
 		d := r.Difference
