@@ -566,7 +566,7 @@ func (e *elevation) helpView(l elevLayout) string {
 	}
 	lines = append(lines, "")
 	lines = append(lines, wrap("Elevation: piers are shaded by their share of the wall shear "+tintLegend(st)+
-		". The selected opening is drawn with doubled lines (= and #) in reverse video. Mouse: a click selects an opening, a drag moves it by the step. Pier table: b/s is the bending/shear split of a pier's own deflection in %, FE the share in the finite-element model. Lengths in "+unitName(e.wall().Units)+".", e.width)...)
+		". The selected opening is drawn with doubled lines (= and #), highlighted. Mouse: a click selects an opening, a drag moves it by the step. Pier table: b/s is the bending/shear split of a pier's own deflection in %, FE the share in the finite-element model. Lengths in "+unitName(e.wall().Units)+".", e.width)...)
 	return strings.Join(lines, "\n")
 }
 
