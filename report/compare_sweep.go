@@ -4,7 +4,6 @@ import (
 	"errors"
 	"fmt"
 	"io"
-	"sort"
 	"strconv"
 	"strings"
 	"unicode/utf8"
@@ -27,7 +26,7 @@ func SweepTable(out io.Writer, w *geometry.Wall, name string, axis study.Axis, s
 		_, err := fmt.Fprintln(out, "The opening fits nowhere else along this axis.")
 		return err
 	}
-	names := sweepPierNames(pts)
+	names := study.PierNames(pts)
 	cur := study.CurrentIndex(pts)
 	// Positions as an engineer writes them: feet-inches for US walls (a
 	// step of 8 in reads 0'-8", not 0.67), metres to the millimetre for SI.
@@ -141,40 +140,6 @@ func wrapText(s string, width int) string {
 		n += l
 	}
 	return b.String()
-}
-
-// sweepPierNames returns every leaf pier name of the sweep in name order
-// (P2 before P10).
-func sweepPierNames(pts []study.Point) []string {
-	seen := map[string]bool{}
-	var names []string
-	for _, p := range pts {
-		for _, ps := range p.Piers {
-			if !seen[ps.Name] {
-				seen[ps.Name] = true
-				names = append(names, ps.Name)
-			}
-		}
-	}
-	sort.Slice(names, func(i, j int) bool { return sweepNameLess(names[i], names[j]) })
-	return names
-}
-
-// sweepNameLess orders pier names by their numbers: P2 < P10, P2 < P2.1.
-func sweepNameLess(a, b string) bool {
-	pa := strings.Split(strings.TrimPrefix(a, "P"), ".")
-	pb := strings.Split(strings.TrimPrefix(b, "P"), ".")
-	for i := 0; i < len(pa) && i < len(pb); i++ {
-		na, ea := strconv.Atoi(pa[i])
-		nb, eb := strconv.Atoi(pb[i])
-		if ea == nil && eb == nil && na != nb {
-			return na < nb
-		}
-		if pa[i] != pb[i] {
-			return pa[i] < pb[i]
-		}
-	}
-	return len(pa) < len(pb)
 }
 
 // sweepAlign prints rows as columns: numbers right-aligned, the last column

@@ -434,6 +434,26 @@ func Fraction(x float64) string {
 	return s
 }
 
+// Grouped prints a large quantity as a whole number with its thousands
+// grouped: 752,179,465.
+func Grouped(v float64) string {
+	s := fmt.Sprintf("%.0f", math.Abs(v))
+	if s == "0" {
+		return s
+	}
+	var b strings.Builder
+	if v < 0 {
+		b.WriteByte('-')
+	}
+	for i, c := range s {
+		if i > 0 && (len(s)-i)%3 == 0 {
+			b.WriteByte(',')
+		}
+		b.WriteRune(c)
+	}
+	return b.String()
+}
+
 // Number prints a result with about four significant figures and never in
 // exponent notation for the magnitudes of this trade (11604, not 1.16e+04).
 func Number(x float64) string {

@@ -204,3 +204,11 @@ func TestWallReportFEOnly(t *testing.T) {
 		}
 	}
 }
+
+func TestGrouped(t *testing.T) {
+	for v, want := range map[float64]string{0: "0", 999: "999", 1000: "1,000", 752179464.986: "752,179,465", -12989.5: "-12,990", 0.4: "0"} {
+		if got := Grouped(v); got != want {
+			t.Errorf("Grouped(%g) = %q, want %q", v, got, want)
+		}
+	}
+}

@@ -252,28 +252,9 @@ func rigidity(a *Analysis, u report.Units, r float64) string {
 	return num(u.CoordOf(r), 4)
 }
 
-// torsional shows J: Σ R·d² is N/m·m² = N·m per radian of diaphragm rotation.
-// grouped puts thousands separators into a whole number as num prints it:
-// "752179465" → "752,179,465".
-func grouped(s string) string {
-	neg := strings.HasPrefix(s, "-")
-	s = strings.TrimPrefix(s, "-")
-	var b strings.Builder
-	if neg {
-		b.WriteByte('-')
-	}
-	for i, c := range s {
-		if i > 0 && (len(s)-i)%3 == 0 {
-			b.WriteByte(',')
-		}
-		b.WriteRune(c)
-	}
-	return b.String()
-}
-
 func torsional(a *Analysis, u report.Units, j float64) string {
 	if a.Absolute {
-		return grouped(num(u.MomentOf(j), 0)) + " " + u.Moment + " per radian"
+		return report.Grouped(u.MomentOf(j)) + " " + u.Moment + " per radian"
 	}
 	return fmt.Sprintf("%.4g (relative × t) %s³", u.CoordOf(u.CoordOf(u.CoordOf(j))), u.Coord)
 }

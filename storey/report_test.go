@@ -71,11 +71,3 @@ func TestWriteReportError(t *testing.T) {
 		t.Errorf("wrote %d bytes for a bad storey", buf.Len())
 	}
 }
-
-func TestGroupedThousands(t *testing.T) {
-	for in, want := range map[string]string{"0": "0", "999": "999", "1000": "1,000", "752179465": "752,179,465", "-12990": "-12,990"} {
-		if got := grouped(in); got != want {
-			t.Errorf("grouped(%q) = %q, want %q", in, got, want)
-		}
-	}
-}

@@ -1,6 +1,7 @@
 package study
 
 import (
+	"cmp"
 	"errors"
 	"fmt"
 	"math"
@@ -272,4 +273,39 @@ func CurrentIndex(pts []Point) int {
 		}
 	}
 	return -1
+}
+
+// PierNames lists every leaf pier name that occurs in a sweep, in the
+// order of their numbers (P2 before P10, P2 before P2.1), for the columns
+// of a table or the series of a plot.
+func PierNames(pts []Point) []string {
+	seen := map[string]bool{}
+	var names []string
+	for _, p := range pts {
+		for _, ps := range p.Piers {
+			if !seen[ps.Name] {
+				seen[ps.Name] = true
+				names = append(names, ps.Name)
+			}
+		}
+	}
+	slices.SortFunc(names, comparePierNames)
+	return names
+}
+
+// comparePierNames orders pier names by their numbers, level by level.
+func comparePierNames(a, b string) int {
+	pa := strings.Split(strings.TrimPrefix(a, "P"), ".")
+	pb := strings.Split(strings.TrimPrefix(b, "P"), ".")
+	for i := 0; i < len(pa) && i < len(pb); i++ {
+		na, ea := strconv.Atoi(pa[i])
+		nb, eb := strconv.Atoi(pb[i])
+		if ea == nil && eb == nil && na != nb {
+			return cmp.Compare(na, nb)
+		}
+		if c := strings.Compare(pa[i], pb[i]); c != 0 {
+			return c
+		}
+	}
+	return cmp.Compare(len(pa), len(pb))
 }

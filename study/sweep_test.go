@@ -223,3 +223,15 @@ func TestSweepArguments(t *testing.T) {
 		t.Error("axis z: no error")
 	}
 }
+
+// Pier names come in the order of their numbers, level by level, each once.
+func TestPierNames(t *testing.T) {
+	pts := []Point{
+		{Piers: []PierShare{{Name: "P10"}, {Name: "P2.1"}}},
+		{Piers: []PierShare{{Name: "P2"}, {Name: "P10.1"}, {Name: "P2.1"}, {Name: "P1"}}},
+	}
+	got := strings.Join(PierNames(pts), " ")
+	if want := "P1 P2 P2.1 P10 P10.1"; got != want {
+		t.Errorf("PierNames = %q, want %q", got, want)
+	}
+}

@@ -384,7 +384,7 @@ func sweepMarker(i int) rune {
 
 func sweepLegend(pts []study.Point, width int) string {
 	var parts []string
-	for i, n := range sweepNames(pts) {
+	for i, n := range study.PierNames(pts) {
 		parts = append(parts, fmt.Sprintf("%c %s", sweepMarker(i), n))
 	}
 	marks := "   C current  B best"
@@ -401,52 +401,6 @@ func sweepLegend(pts []study.Point, width int) string {
 		}
 	}
 	return truncate(" "+strings.Join(parts, "  ")+marks, width)
-}
-
-// sweepNames lists every leaf pier name of the sweep in name order.
-func sweepNames(pts []study.Point) []string {
-	seen := map[string]bool{}
-	var names []string
-	for _, p := range pts {
-		for _, ps := range p.Piers {
-			if !seen[ps.Name] {
-				seen[ps.Name] = true
-				names = append(names, ps.Name)
-			}
-		}
-	}
-	sortPierNames(names)
-	return names
-}
-
-// sortPierNames orders pier names by their numbers: P2 < P10 < P10.1.
-func sortPierNames(names []string) {
-	key := func(n string) []int {
-		var k []int
-		for _, part := range strings.Split(strings.TrimPrefix(n, "P"), ".") {
-			v := 0
-			fmt.Sscan(part, &v)
-			k = append(k, v)
-		}
-		return k
-	}
-	less := func(a, b string) bool {
-		ka, kb := key(a), key(b)
-		for i := 0; i < len(ka) && i < len(kb); i++ {
-			if ka[i] != kb[i] {
-				return ka[i] < kb[i]
-			}
-		}
-		if len(ka) != len(kb) {
-			return len(ka) < len(kb)
-		}
-		return a < b
-	}
-	for i := 1; i < len(names); i++ {
-		for j := i; j > 0 && less(names[j], names[j-1]); j-- {
-			names[j], names[j-1] = names[j-1], names[j]
-		}
-	}
 }
 
 // sweepPlot draws the two plots, the position axis and the marks row:
@@ -554,7 +508,7 @@ func sweepPlot(st *styles, pts []study.Point, axis study.Axis, sys geometry.Syst
 		}
 	}
 	top = math.Max(0.1, math.Ceil(top*10-1e-9)/10)
-	names := sweepNames(pts)
+	names := study.PierNames(pts)
 	index := map[string]int{}
 	for i, n := range names {
 		index[n] = i

@@ -4,8 +4,6 @@ import (
 	"encoding/json"
 	"fmt"
 	"io"
-	"math"
-	"strings"
 
 	"pierwise/geometry"
 	"pierwise/report"
@@ -67,7 +65,7 @@ func writeStoreyTables(out io.Writer, a *storey.Analysis) {
 		geometry.FormatForce(s.Shear, s.Units), u.CoordOf(float64(s.MassCenter[0])), u.CoordOf(float64(s.MassCenter[1])), u.Coord,
 		u.CoordOf(d.CenterOfRigidity[0]), u.CoordOf(d.CenterOfRigidity[1]), u.Coord)
 	if a.Absolute {
-		fmt.Fprintf(out, "torsional rigidity J = %s %s per radian\n", grouped(u.MomentOf(d.J)), u.Moment)
+		fmt.Fprintf(out, "torsional rigidity J = %s %s per radian\n", report.Grouped(u.MomentOf(d.J)), u.Moment)
 	} else {
 		fmt.Fprintln(out, "rigidities: relative × thickness (not every wall has a modulus)")
 	}
@@ -88,7 +86,7 @@ func writeStoreyTables(out io.Writer, a *storey.Analysis) {
 			}
 			cells := []string{w.Name, w.Ref.Direction.String(), fmt.Sprintf("%.4f", w.Unit.Rigidity)}
 			if a.Absolute {
-				cells = append(cells, grouped(u.RigidityOf(w.Rigidity)))
+				cells = append(cells, report.Grouped(u.RigidityOf(w.Rigidity)))
 			}
 			tw.Add(append(cells, direct,
 				fmt.Sprintf("%.2f", u.ForceOf(geometry.Force(sh.Torsional))), fmt.Sprintf("%.2f", u.ForceOf(geometry.Force(sh.Total()))))...)
@@ -127,26 +125,6 @@ func writeStoreyTables(out io.Writer, a *storey.Analysis) {
 		report.NewText(out).Wrapped("warning: ", msg)
 	}
 	fmt.Fprintln(out, "\nResults support, and do not replace, the judgement of a licensed engineer;\nlocal codes govern.")
-}
-
-// grouped formats a large quantity rounded to a whole number with its
-// thousands grouped: 752,179,465.
-func grouped(v float64) string {
-	s := fmt.Sprintf("%.0f", math.Abs(v))
-	if s == "0" {
-		return s
-	}
-	var b strings.Builder
-	if v < 0 {
-		b.WriteByte('-')
-	}
-	for i, c := range s {
-		if i > 0 && (len(s)-i)%3 == 0 {
-			b.WriteByte(',')
-		}
-		b.WriteRune(c)
-	}
-	return b.String()
 }
 
 // newTextTable is a table of the storey command: the first two columns,

@@ -7,6 +7,8 @@ import (
 	"path/filepath"
 	"strings"
 	"testing"
+
+	"pierwise/report"
 )
 
 const workshop = "../../testdata/storey/workshop.toml"
@@ -164,18 +166,10 @@ func TestStoreyTableAbsoluteRigidity(t *testing.T) {
 	if code != exitOK {
 		t.Fatalf("exit %d: %s", code, errs)
 	}
-	if !strings.Contains(out, "R kip/in") || !strings.Contains(out, grouped(north.Rigidity)) {
-		t.Errorf("table lacks the R kip/in column with %s:\n%s", grouped(north.Rigidity), out)
+	if !strings.Contains(out, "R kip/in") || !strings.Contains(out, report.Grouped(north.Rigidity)) {
+		t.Errorf("table lacks the R kip/in column with %s:\n%s", report.Grouped(north.Rigidity), out)
 	}
 	if !strings.Contains(out, "kip·ft per radian") {
 		t.Errorf("no J line:\n%s", out)
-	}
-}
-
-func TestGrouped(t *testing.T) {
-	for v, want := range map[float64]string{0: "0", 999: "999", 1000: "1,000", 752179464.986: "752,179,465", -12989.5: "-12,990", 0.4: "0"} {
-		if got := grouped(v); got != want {
-			t.Errorf("grouped(%g) = %q, want %q", v, got, want)
-		}
 	}
 }
