@@ -96,6 +96,7 @@ const (
 	wfShear
 	wfDrift
 	wfCd
+	wfIe
 	wfKf
 	wfKv
 	wfMesh
@@ -126,9 +127,12 @@ func (e *elevation) openWallForm() {
 	if w.Load.Shear > 0 {
 		shear = geometry.FormatForce(w.Load.Shear, sys)
 	}
-	cd := ""
+	cd, ie := "", ""
 	if w.Drift.Cd > 0 {
 		cd = strconv.FormatFloat(w.Drift.Cd, 'g', -1, 64)
+	}
+	if w.Drift.Ie > 0 {
+		ie = strconv.FormatFloat(w.Drift.Ie, 'g', -1, 64)
 	}
 	mesh := ""
 	if w.Check.Mesh > 0 {
@@ -151,6 +155,7 @@ func (e *elevation) openWallForm() {
 		wfShear:     {"shear V at top", shear, "blank: no load"},
 		wfDrift:     {"drift limit", drift, "a fraction (0.01) or " + strings.Join(presets[:2], ", ") + ", ..."},
 		wfCd:        {"Cd", cd, "deflection amplification"},
+		wfIe:        {"Ie", ie, "importance factor"},
 		wfKf:        {"stiffness flexure", modifier(w.Stiffness.Flexure), "x I_g; e.g. 0.35 cracked (ACI 318-14 6.6.3.1.1)"},
 		wfKv:        {"stiffness shear", modifier(w.Stiffness.Shear), "x shear area; 1 = gross"},
 		wfMesh:      {"FE mesh size", mesh, "blank: the default size"},
@@ -228,13 +233,16 @@ func (e *elevation) openWallForm() {
 				}
 			}
 		}
-		if changed[wfCd] {
-			if vals[wfCd] == "" {
-				n.Drift.Cd = 0
-			} else if f, err := strconv.ParseFloat(vals[wfCd], 64); err != nil || !(f > 0) {
-				r.fields[wfCd] = "a positive number"
+		for j, dst := range map[int]*float64{wfCd: &n.Drift.Cd, wfIe: &n.Drift.Ie} {
+			if !changed[j] {
+				continue
+			}
+			if vals[j] == "" {
+				*dst = 0 // the default, 1
+			} else if f, err := strconv.ParseFloat(vals[j], 64); err != nil || !(f > 0) {
+				r.fields[j] = "a positive number"
 			} else {
-				n.Drift.Cd = f
+				*dst = f
 			}
 		}
 		for j, dst := range map[int]*float64{wfKf: &n.Stiffness.Flexure, wfKv: &n.Stiffness.Shear} {

@@ -813,3 +813,22 @@ func TestResultsLineNeverCut(t *testing.T) {
 		}
 	}
 }
+
+// Ie typed in the wall form reaches the drift check: δ = Cd·δe/Ie
+// (ASCE 7-22 §12.8.6) with the annex's Cd = 3.5.
+func TestWallFormImportanceFactor(t *testing.T) {
+	ed := newEditor(t, annex(), "", 120, 40)
+	ed.press(runes("E"))
+	for range wfIe {
+		ed.press(keyTab)
+	}
+	ed.typeText("1.25")
+	ed.press(keyEnter)
+	if got := ed.wall().Drift.Ie; got != 1.25 {
+		t.Fatalf("Ie = %v, want 1.25", got)
+	}
+	d := ed.elev().res.Drift
+	if want := 3.5 * float64(d.Elastic) / 1.25; !near(float64(d.Design), want) {
+		t.Errorf("design drift %v, want Cd·δe/Ie = %v", d.Design, want)
+	}
+}
