@@ -192,21 +192,8 @@ func valueAndComment(s string) (value, comment string, ok bool) {
 	if v == "" || strings.HasPrefix(v, `"""`) || strings.HasPrefix(v, "'''") || v[0] == '[' || v[0] == '{' {
 		return "", "", false
 	}
-	var q byte
-	for i := 0; i < len(v); i++ {
-		c := v[i]
-		switch {
-		case q != 0:
-			if c == '\\' && q == '"' {
-				i++
-			} else if c == q {
-				q = 0
-			}
-		case c == '"' || c == '\'':
-			q = c
-		case c == '#':
-			return strings.TrimSpace(v[:i]), v[i:], true
-		}
+	if i := indexUnquoted(v, "#"); i >= 0 {
+		return strings.TrimSpace(v[:i]), v[i:], true
 	}
 	return v, "", true
 }

@@ -131,6 +131,16 @@ func joinKey(a, b string) string {
 // keyEnd returns the index of the '=' that ends the key of a key/value line,
 // or -1.
 func keyEnd(t string) int {
+	if i := indexUnquoted(t, "=#"); i >= 0 && t[i] == '=' {
+		return i
+	}
+	return -1
+}
+
+// indexUnquoted returns the index of the first byte of t that is one of
+// chars and stands outside a TOML string ("…" with backslash escapes, or
+// '…'), or -1.
+func indexUnquoted(t, chars string) int {
 	var q byte
 	for i := 0; i < len(t); i++ {
 		c := t[i]
@@ -143,10 +153,8 @@ func keyEnd(t string) int {
 			}
 		case c == '"' || c == '\'':
 			q = c
-		case c == '=':
+		case strings.IndexByte(chars, c) >= 0:
 			return i
-		case c == '#':
-			return -1
 		}
 	}
 	return -1

@@ -84,24 +84,19 @@ func (d *document) amend(f func(w *geometry.Wall) error) error {
 
 // undoChange and redoChange step through the history; they report whether
 // there was anything to step to.
-func (d *document) undoChange() bool {
-	if len(d.undo) == 0 {
-		return false
-	}
-	s := d.undo[len(d.undo)-1]
-	d.undo = d.undo[:len(d.undo)-1]
-	d.redo = append(d.redo, snapshot{d.wall, d.version})
-	d.wall, d.version = s.wall, s.version
-	return true
-}
+func (d *document) undoChange() bool { return d.travel(&d.undo, &d.redo) }
 
-func (d *document) redoChange() bool {
-	if len(d.redo) == 0 {
+func (d *document) redoChange() bool { return d.travel(&d.redo, &d.undo) }
+
+// travel makes the last state of from current and keeps the current one
+// on to.
+func (d *document) travel(from, to *[]snapshot) bool {
+	if len(*from) == 0 {
 		return false
 	}
-	s := d.redo[len(d.redo)-1]
-	d.redo = d.redo[:len(d.redo)-1]
-	d.undo = append(d.undo, snapshot{d.wall, d.version})
+	s := (*from)[len(*from)-1]
+	*from = (*from)[:len(*from)-1]
+	*to = append(*to, snapshot{d.wall, d.version})
 	d.wall, d.version = s.wall, s.version
 	return true
 }
