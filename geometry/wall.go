@@ -62,6 +62,43 @@ type Drift struct {
 	Limit  float64 // allowable drift as a fraction of the height; 0 = no check
 }
 
+// LineLoad is a force per length along the top of a wall, in N/m.
+type LineLoad float64
+
+// Gravity holds the gravity loads on a wall: line loads along its top and its
+// own weight. Zero values mean "not given"; SelfWeight zero takes the default
+// of the material and thickness (docs/method.md, "Gravity").
+type Gravity struct {
+	Dead       LineLoad // D along the top of the wall, N/m
+	Live       LineLoad // L along the top of the wall, N/m
+	SelfWeight Stress   // wall weight per face area, N/m² (a pressure); 0 = default
+	NoSelf     bool     // true when the user set self_weight = 0 on purpose
+}
+
+// Basis names the model every downstream number comes from.
+type Basis int
+
+const (
+	BasisClassic Basis = iota // the classic strip method (default)
+	BasisFE                   // the plane-stress finite-element model
+)
+
+// String returns the basis as the file and the command line spell it.
+func (b Basis) String() string {
+	if b == BasisFE {
+		return "fe"
+	}
+	return "classic"
+}
+
+// Analysis holds the analysis settings: the basis, and whether the
+// finite-element model ties the top nodes' horizontal displacement (a bond
+// beam or diaphragm collector; on unless NoTopTie).
+type Analysis struct {
+	Basis    Basis
+	NoTopTie bool
+}
+
 // Check holds the finite-element check settings.
 type Check struct {
 	Mesh    Length // maximum element size; 0 = the default
@@ -107,6 +144,8 @@ type Wall struct {
 	Stiffness Stiffness
 	Drift     Drift
 	Check     Check
+	Analysis  Analysis
+	Gravity   Gravity
 	Layouts   []Layout // at least one; Layouts[0] holds the file's top-level openings
 	Active    int      // index into Layouts
 }
