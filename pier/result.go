@@ -47,6 +47,31 @@ type Step struct {
 	AllCuts bool
 }
 
+// Forces are the internal forces at one horizontal section of a pier, those
+// that the part above the section exerts on the part below: Shear along the
+// wall's lateral load (which acts toward +x at the top of the wall), Axial
+// (compression positive) and Moment about the section's centroid, in N·m,
+// positive when it compresses the section's right end (x1). Under a lateral
+// load toward +x a cantilever's base moment is positive (docs/method.md §1).
+type Forces struct {
+	Shear  geometry.Force
+	Axial  geometry.Force
+	Moment float64
+}
+
+// Sections holds a pier's forces at its bottom, middle and top sections.
+type Sections struct {
+	Bottom, Middle, Top Forces
+}
+
+// PierLoads holds a pier's section forces under each unfactored load case:
+// the wall's lateral shear V toward +x (zero without a load), the dead load
+// (line load and self weight) and the live load. Load combinations are formed
+// from these by superposition (docs/method.md §8).
+type PierLoads struct {
+	Lateral, Dead, Live Sections
+}
+
 // Pier is one pier of the decomposition. Shares and forces are fractions of,
 // and parts of, the wall's shear.
 type Pier struct {

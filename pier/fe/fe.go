@@ -1,6 +1,7 @@
 package fe
 
 import (
+	"context"
 	"errors"
 	"fmt"
 	"math"
@@ -118,6 +119,20 @@ func Solve(w *geometry.Wall, classic *pier.Result, opt Options) (*Result, error)
 		return nil, err
 	}
 	return r, nil
+}
+
+// SolveContext is Solve that gives up when ctx is done, returning ctx.Err().
+// (For now it checks ctx before and after the solve; the assembly and the
+// factorisation are to check it as they go.)
+func SolveContext(ctx context.Context, w *geometry.Wall, classic *pier.Result, opt Options) (*Result, error) {
+	if err := ctx.Err(); err != nil {
+		return nil, err
+	}
+	r, err := Solve(w, classic, opt)
+	if cerr := ctx.Err(); cerr != nil {
+		return nil, cerr
+	}
+	return r, err
 }
 
 // absolute fills the rigidity, deflection and drift in real units when the
