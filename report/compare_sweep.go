@@ -26,7 +26,7 @@ func SweepTable(out io.Writer, w *geometry.Wall, name string, axis study.Axis, s
 		_, err := fmt.Fprintln(out, "The opening fits nowhere else along this axis.")
 		return err
 	}
-	names := study.PierNames(pts)
+	names := study.PierSeries(pts)
 	cur := study.CurrentIndex(pts)
 	// Positions as an engineer writes them: feet-inches for US walls (a
 	// step of 8 in reads 0'-8", not 0.67), metres to the millimetre for SI.
@@ -68,7 +68,7 @@ func SweepTable(out io.Writer, w *geometry.Wall, name string, axis study.Axis, s
 		r = append(r, strconv.FormatFloat(p.Rigidity, 'f', 4, 64), ch)
 		shares := map[string]float64{}
 		for _, ps := range p.Piers {
-			shares[ps.Name] = ps.Share
+			shares[ps.Key] = ps.Share
 		}
 		for _, n := range names {
 			if s, ok := shares[n]; ok {
@@ -105,7 +105,7 @@ func SweepTable(out io.Writer, w *geometry.Wall, name string, axis study.Axis, s
 	if weak {
 		best += " ! marks a position where the classic method warns of something it does not at the current position (solve that layout to read the warning); such a position is not taken as best."
 	}
-	_, err := fmt.Fprintln(out, "\n"+wrapText("R rel is the wall's relative rigidity (E = 1, t = 1) and change its change from the current position. Shares are fractions of the wall shear. "+best, 78)+"\n"+
+	_, err := fmt.Fprintln(out, "\n"+wrapText("R rel is the wall's relative rigidity (E = 1, t = 1) and change its change from the current position. Shares are fractions of the wall shear; each column follows one pier, named by the openings on either side of it (end: the wall's end), whatever its number at that position. "+best, 78)+"\n"+
 		wrapText("Results support, and do not replace, the judgement of a licensed engineer; local codes govern.", 78))
 	return err
 }

@@ -54,7 +54,7 @@ func (s *Side) OK() bool { return s.Err == nil && s.Result != nil }
 // After the alternative.
 type Comparison struct {
 	Before, After Side
-	Piers         []PierChange // leaf piers matched by position (see the package doc)
+	Piers         []PierChange // leaf piers matched by bounds, then by position (MatchPiers)
 }
 
 // Status says what happened to a pier between the two layouts.
@@ -151,7 +151,7 @@ func CompareWith(a, b *geometry.Wall, opt Options) (*Comparison, error) {
 		}
 	}
 	if c.Before.OK() && c.After.OK() {
-		c.Piers = MatchPiers(c.Before.Result.Leaves(), c.After.Result.Leaves())
+		c.Piers = MatchPiers(c.Before.Wall, c.Before.Result.Leaves(), c.After.Wall, c.After.Result.Leaves())
 	}
 	return c, nil
 }
@@ -183,25 +183,38 @@ func (c *Comparison) RigidityChange() (float64, bool) {
 	return Change(c.Before.Result.Rigidity, c.After.Result.Rigidity)
 }
 
-// MatchPiers pairs the piers of two layouts by position. Pairs are taken in
-// order of decreasing overlap (intersection over union of the rectangles),
-// each pier used once; piers left over appear or vanish. The result lists
-// the pairs and vanishing piers in the order of before, then the appearing
-// piers in the order of after.
-func MatchPiers(before, after []pier.Pier) []PierChange {
+// MatchPiers pairs the leaf piers of two layouts (before of wall bw, after
+// of wall aw) as the same physical piers. A pier is first the pier with the
+// same bounds (PierKeys: the openings, or wall ends, on either side of it),
+// then, among the piers left, the one its rectangle overlaps most
+// (intersection over union); each pier is used once, and a pier that shares
+// neither its bounds nor any area with a pier of the other layout appears or
+// vanishes. Bounds come first because overlap alone pairs a wide pier beside
+// a window with a narrow one beside a door when the door moves into its
+// place. The result lists the pairs and vanishing piers in the order of
+// before, then the appearing piers in the order of after.
+func MatchPiers(bw *geometry.Wall, before []pier.Pier, aw *geometry.Wall, after []pier.Pier) []PierChange {
+	kb, ka := PierKeys(bw, before), PierKeys(aw, after)
 	type cand struct {
 		i, j int
+		same bool
 		iou  float64
 	}
 	var cands []cand
 	for i := range before {
 		for j := range after {
-			if iou := overlap(before[i].Rect, after[j].Rect); iou > 0 {
-				cands = append(cands, cand{i, j, iou})
+			iou := overlap(before[i].Rect, after[j].Rect)
+			if same := kb[i] == ka[j]; same || iou > 0 {
+				cands = append(cands, cand{i, j, same, iou})
 			}
 		}
 	}
-	sort.SliceStable(cands, func(x, y int) bool { return cands[x].iou > cands[y].iou })
+	sort.SliceStable(cands, func(x, y int) bool {
+		if cands[x].same != cands[y].same {
+			return cands[x].same
+		}
+		return cands[x].iou > cands[y].iou
+	})
 	pairOf := make([]int, len(before))
 	iouOf := make([]float64, len(before))
 	for i := range pairOf {

@@ -29,7 +29,8 @@ func randomLayout(r *rand.Rand, w *geometry.Wall, n int) []geometry.Opening {
 }
 
 // Invariants of the pier matching over random pairs of layouts: every leaf
-// pier of each side is listed once, pairs are one-to-one and overlap, and
+// pier of each side is listed once, pairs are one-to-one and share their
+// bounds or overlap, and
 // no pier left over on one side overlaps a pier left over on the other
 // (the greedy matching would have paired them).
 func TestMatchPiersRandom(t *testing.T) {
@@ -47,7 +48,15 @@ func TestMatchPiersRandom(t *testing.T) {
 		}
 		tried++
 		la, lb := ra.Leaves(), rb.Leaves()
-		pcs := MatchPiers(la, lb)
+		pcs := MatchPiers(&a, la, &b, lb)
+		ka, kb := PierKeys(&a, la), PierKeys(&b, lb)
+		keyA, keyB := map[*pier.Pier]string{}, map[*pier.Pier]string{}
+		for i := range la {
+			keyA[&la[i]] = ka[i]
+		}
+		for i := range lb {
+			keyB[&lb[i]] = kb[i]
+		}
 		seenA, seenB := map[string]int{}, map[string]int{}
 		var leftA, leftB []*pier.Pier
 		for _, pc := range pcs {
@@ -59,7 +68,7 @@ func TestMatchPiersRandom(t *testing.T) {
 			}
 			switch pc.Status() {
 			case Kept:
-				if !(pc.Overlap > 0) || pc.Overlap > 1+1e-12 || !near(pc.Overlap, overlap(pc.Before.Rect, pc.After.Rect), 1e-12) {
+				if !(pc.Overlap > 0 || keyA[pc.Before] == keyB[pc.After]) || pc.Overlap > 1+1e-12 || !near(pc.Overlap, overlap(pc.Before.Rect, pc.After.Rect), 1e-12) {
 					t.Errorf("iter %d: pair %s/%s overlap %g", iter, pc.Before.Name, pc.After.Name, pc.Overlap)
 				}
 			case Vanishes:
@@ -91,5 +100,73 @@ func TestMatchPiersRandom(t *testing.T) {
 	}
 	if tried < 100 {
 		t.Errorf("only %d random pairs solved", tried)
+	}
+}
+
+// Two doors; the first moves 6 ft right. By overlap alone the 6 ft pier
+// between the doors (5–11 ft) overlaps the new end pier (0–8 ft) more
+// (IoU 3/11) than the old end pier (0–2 ft) does (IoU 2/8), and was matched
+// to it as "renamed". Matched by bounds, each pier keeps its neighbours.
+func TestMatchPiersByBounds(t *testing.T) {
+	door := func(name string, x geometry.Length) geometry.Opening {
+		return geometry.Opening{Name: name, X: x, Width: 3 * ft, Height: 7 * ft}
+	}
+	w := &geometry.Wall{
+		Units: geometry.US, Length: 20 * ft, Height: 10 * ft, Thickness: 8 * geometry.Inch,
+		Material:  geometry.Material{Kind: geometry.ConcreteMasonry, Strength: 2000 * geometry.PSI},
+		Stiffness: geometry.Stiffness{Flexure: 1, Shear: 1},
+		Drift:     geometry.Drift{Cd: 1, Ie: 1},
+		Layouts: []geometry.Layout{
+			{Name: "before", Openings: []geometry.Opening{door("D1", 2*ft), door("D2", 11*ft)}},
+			{Name: "after", Openings: []geometry.Opening{door("D1", 8*ft), door("D2", 14*ft)}},
+		},
+	}
+	c, err := Compare(WithLayout(w, 0), WithLayout(w, 1))
+	if err != nil {
+		t.Fatal(err)
+	}
+	want := map[string]string{"end–D1": "end–D1", "D1–D2": "D1–D2", "D2–end": "D2–end"}
+	if len(c.Piers) != 3 {
+		t.Fatalf("%d pier changes, want 3", len(c.Piers))
+	}
+	for _, pc := range c.Piers {
+		if pc.Status() != Kept {
+			t.Fatalf("pier %v: %v, want kept", pc, pc.Status())
+		}
+		kb := PierBounds(c.Before.Wall, *pc.Before).String()
+		ka := PierBounds(c.After.Wall, *pc.After).String()
+		if want[kb] != ka {
+			t.Errorf("before %s (%s) matched after %s (%s)", pc.Before.Name, kb, pc.After.Name, ka)
+		}
+	}
+}
+
+func TestPierKeys(t *testing.T) {
+	// The nested wall of testdata: a door D1 and, in the pier right of it,
+	// a window W1 (nested piers P2.1, P2.2).
+	w := &geometry.Wall{
+		Units: geometry.US, Length: 18 * ft, Height: 16 * ft, Thickness: 8 * geometry.Inch,
+		Material:  geometry.Material{Kind: geometry.ConcreteMasonry, Strength: 2000 * geometry.PSI},
+		Stiffness: geometry.Stiffness{Flexure: 1, Shear: 1},
+		Drift:     geometry.Drift{Cd: 1, Ie: 1},
+		Layouts: []geometry.Layout{{Name: "n", Openings: []geometry.Opening{
+			{Name: "D1", X: 4 * ft, Width: 4 * ft, Height: 8 * ft},
+			{Name: "W1", X: 12 * ft, Sill: 2 * ft, Width: 4 * ft, Height: 4 * ft},
+		}}},
+	}
+	r, err := pier.Solve(w)
+	if err != nil {
+		t.Fatal(err)
+	}
+	got := map[string]string{}
+	leaves := r.Leaves()
+	for i, k := range PierKeys(w, leaves) {
+		got[leaves[i].Name] = k
+	}
+	want := map[string]string{"P1": "end–D1", "P2.1": "D1–W1", "P2.2": "W1–end"}
+	for n, k := range want {
+		if got[n] != k {
+			t.Errorf("%s: key %q, want %q (all %v)", n, got[n], k, got)
+		}
 	}
 }

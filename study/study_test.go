@@ -167,7 +167,7 @@ func TestComparePublishedWall(t *testing.T) {
 func TestMatchPiersSameLayout(t *testing.T) {
 	w := annex()
 	r := mustSolve(t, w)
-	pcs := MatchPiers(r.Leaves(), r.Leaves())
+	pcs := MatchPiers(w, r.Leaves(), w, r.Leaves())
 	if len(pcs) != len(r.Leaves()) {
 		t.Fatalf("%d pairs for %d piers", len(pcs), len(r.Leaves()))
 	}

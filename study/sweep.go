@@ -44,9 +44,15 @@ func ParseAxis(s string) (Axis, error) {
 const MaxPoints = 5000
 
 // PierShare is one leaf pier's share of the wall shear at a sweep position.
+// Name is the pier's name at this position (names follow the position:
+// P2 here may be another pier than P2 elsewhere); Key identifies the
+// physical pier by the openings on either side of it (PierKeys), the same
+// at every position where that pier exists.
 type PierShare struct {
 	Name  string
+	Key   string
 	Share float64 // fraction of the wall shear, 0–1
+	x     float64 // the pier's middle, for ordering the series
 }
 
 // Point is the wall solved with the swept opening at one position.
@@ -213,8 +219,10 @@ func solvePoint(w *geometry.Wall, o geometry.Opening, current bool) Point {
 	}
 	p.Result, p.Rigidity = res, res.Rigidity
 	p.StressIndex = -1
-	for _, lp := range res.Leaves() {
-		p.Piers = append(p.Piers, PierShare{Name: lp.Name, Share: lp.Share})
+	leaves := res.Leaves()
+	keys := PierKeys(w, leaves)
+	for i, lp := range leaves {
+		p.Piers = append(p.Piers, PierShare{Name: lp.Name, Key: keys[i], Share: lp.Share, x: (lp.Rect.X0 + lp.Rect.X1) / 2})
 		if lp.L() <= 0 {
 			continue
 		}
@@ -275,37 +283,23 @@ func CurrentIndex(pts []Point) int {
 	return -1
 }
 
-// PierNames lists every leaf pier name that occurs in a sweep, in the
-// order of their numbers (P2 before P10, P2 before P2.1), for the columns
-// of a table or the series of a plot.
-func PierNames(pts []Point) []string {
-	seen := map[string]bool{}
-	var names []string
+// PierSeries lists every physical pier of a sweep by its Key, for the
+// columns of a table or the series of a plot: ordered left to right by
+// where the pier stands on average over the positions where it exists.
+func PierSeries(pts []Point) []string {
+	sum, n := map[string]float64{}, map[string]int{}
+	var keys []string
 	for _, p := range pts {
 		for _, ps := range p.Piers {
-			if !seen[ps.Name] {
-				seen[ps.Name] = true
-				names = append(names, ps.Name)
+			if n[ps.Key] == 0 {
+				keys = append(keys, ps.Key)
 			}
+			sum[ps.Key] += ps.x
+			n[ps.Key]++
 		}
 	}
-	slices.SortFunc(names, comparePierNames)
-	return names
-}
-
-// comparePierNames orders pier names by their numbers, level by level.
-func comparePierNames(a, b string) int {
-	pa := strings.Split(strings.TrimPrefix(a, "P"), ".")
-	pb := strings.Split(strings.TrimPrefix(b, "P"), ".")
-	for i := 0; i < len(pa) && i < len(pb); i++ {
-		na, ea := strconv.Atoi(pa[i])
-		nb, eb := strconv.Atoi(pb[i])
-		if ea == nil && eb == nil && na != nb {
-			return cmp.Compare(na, nb)
-		}
-		if c := strings.Compare(pa[i], pb[i]); c != 0 {
-			return c
-		}
-	}
-	return cmp.Compare(len(pa), len(pb))
+	slices.SortStableFunc(keys, func(a, b string) int {
+		return cmp.Compare(sum[a]/float64(n[a]), sum[b]/float64(n[b]))
+	})
+	return keys
 }

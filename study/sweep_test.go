@@ -224,14 +224,59 @@ func TestSweepArguments(t *testing.T) {
 	}
 }
 
-// Pier names come in the order of their numbers, level by level, each once.
-func TestPierNames(t *testing.T) {
+// Series follow the physical pier (its Key), ordered left to right by where
+// it stands on average, each once.
+func TestPierSeries(t *testing.T) {
 	pts := []Point{
-		{Piers: []PierShare{{Name: "P10"}, {Name: "P2.1"}}},
-		{Piers: []PierShare{{Name: "P2"}, {Name: "P10.1"}, {Name: "P2.1"}, {Name: "P1"}}},
+		{Piers: []PierShare{{Name: "P1", Key: "W1–end", x: 9}, {Name: "P2", Key: "end–W1", x: 1}}},
+		{Piers: []PierShare{{Name: "P1", Key: "end–W1", x: 3}, {Name: "P2", Key: "W1–W2", x: 6}, {Name: "P3", Key: "W1–end", x: 9}}},
 	}
-	got := strings.Join(PierNames(pts), " ")
-	if want := "P1 P2 P2.1 P10 P10.1"; got != want {
-		t.Errorf("PierNames = %q, want %q", got, want)
+	got := strings.Join(PierSeries(pts), " ")
+	if want := "end–W1 W1–W2 W1–end"; got != want {
+		t.Errorf("PierSeries = %q, want %q", got, want)
+	}
+}
+
+// A window swept past its neighbour: the series of the pier left of the
+// wall end keeps its key at every position, although its name changes.
+func TestSweepFollowsPhysicalPier(t *testing.T) {
+	w := &geometry.Wall{
+		Units: geometry.US, Length: 24 * ft, Height: 10 * ft, Thickness: 8 * geometry.Inch,
+		Material:  geometry.Material{Kind: geometry.ConcreteMasonry, Strength: 2000 * geometry.PSI},
+		Stiffness: geometry.Stiffness{Flexure: 1, Shear: 1},
+		Drift:     geometry.Drift{Cd: 1, Ie: 1},
+		Layouts: []geometry.Layout{{Name: "a", Openings: []geometry.Opening{
+			{Name: "W1", X: 4 * ft, Sill: 3 * ft, Width: 4 * ft, Height: 4 * ft},
+			{Name: "W2", X: 14 * ft, Sill: 3 * ft, Width: 4 * ft, Height: 4 * ft},
+		}}},
+	}
+	pts, err := Sweep(w, "W2", AlongX, 2*ft)
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, p := range pts {
+		if p.Err != nil {
+			continue
+		}
+		// The pier right of W1 and left of W2 exists only while W2 is
+		// right of W1; wherever it does, its key names both.
+		for _, ps := range p.Piers {
+			if ps.Key == "W1–W2" && p.X <= 4*ft {
+				t.Errorf("x %v: W1–W2 with W2 left of W1", p.X)
+			}
+		}
+		var keys []string
+		for _, ps := range p.Piers {
+			keys = append(keys, ps.Key)
+		}
+		want := map[int]string{
+			0:  "W1–end",              // W2 at the left end, touching W1
+			10: "end–W1 W1–W2 W2–end", // W2 between W1 and the right end
+			20: "end–W1 W1–W2",        // W2 at the right end
+		}
+		ftPos := int(math.Round(float64(p.X / ft)))
+		if k, ok := want[ftPos]; ok && strings.Join(keys, " ") != k {
+			t.Errorf("x %d ft: keys %v, want %s", ftPos, keys, k)
+		}
 	}
 }

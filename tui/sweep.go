@@ -272,8 +272,9 @@ func (s *sweepScreen) view() string {
 			"cannot solve, ! one where it warns of something it does not at the",
 			"current position (a thin strip between bands, a sliver pier...): its",
 			"numbers are less reliable there, and it is taken as best only when",
-			"every position is so marked. Pier names follow the position: P2 is",
-			"the second pier from the left wherever the opening is.",
+			"every position is so marked. A series follows one physical pier,",
+			"named by the openings on either side of it (end-W1: between the",
+			"wall's left end and W1), whatever its number (P1, P2...) there.",
 			"", "Any key closes this help.")
 		return fit(strings.Join(lines, "\n"), s.width, s.height)
 	}
@@ -344,14 +345,20 @@ func (s *sweepScreen) info() []string {
 			line1 += " (" + ch + ")"
 		}
 	}
+	stressPier := p.StressPier
+	for _, ps := range p.Piers {
+		if ps.Name == p.StressPier {
+			stressPier += " (" + ps.Key + ")"
+		}
+	}
 	if p.MaxStress > 0 {
-		line1 += fmt.Sprintf("  max stress %s %s", geometry.FormatStress(p.MaxStress, w.Units), p.StressPier)
+		line1 += fmt.Sprintf("  max stress %s %s", geometry.FormatStress(p.MaxStress, w.Units), stressPier)
 	} else if p.StressPier != "" {
-		line1 += "  max share/L " + p.StressPier
+		line1 += "  max share/L " + stressPier
 	}
 	var sh []string
 	for _, ps := range p.Piers {
-		sh = append(sh, fmt.Sprintf("%s %.1f%%", ps.Name, 100*ps.Share))
+		sh = append(sh, fmt.Sprintf("%s %.1f%%", ps.Key, 100*ps.Share))
 	}
 	line2 := "   shares: " + strings.Join(sh, "  ")
 	var marks []string
@@ -384,10 +391,10 @@ func sweepMarker(i int) rune {
 
 func sweepLegend(pts []study.Point, width int) string {
 	var parts []string
-	for i, n := range study.PierNames(pts) {
+	for i, n := range study.PierSeries(pts) {
 		parts = append(parts, fmt.Sprintf("%c %s", sweepMarker(i), n))
 	}
-	marks := "   C current  B best"
+	marks := " C current  B best"
 	for _, p := range pts {
 		if p.Err != nil {
 			marks += "  x no answer"
@@ -400,7 +407,9 @@ func sweepLegend(pts []study.Point, width int) string {
 			break
 		}
 	}
-	return truncate(" "+strings.Join(parts, "  ")+marks, width)
+	// The marks first: they are few and always matter; the series list
+	// may be cut on a narrow screen (the readout names the piers too).
+	return truncate(marks+"   "+strings.Join(parts, "  "), width)
 }
 
 // sweepPlot draws the two plots, the position axis and the marks row:
@@ -508,7 +517,7 @@ func sweepPlot(st *styles, pts []study.Point, axis study.Axis, sys geometry.Syst
 		}
 	}
 	top = math.Max(0.1, math.Ceil(top*10-1e-9)/10)
-	names := study.PierNames(pts)
+	names := study.PierSeries(pts)
 	index := map[string]int{}
 	for i, n := range names {
 		index[n] = i
@@ -523,7 +532,7 @@ func sweepPlot(st *styles, pts []study.Point, axis study.Axis, sys geometry.Syst
 		for _, ps := range p.Piers {
 			r := int(math.Round((top - ps.Share) / top * float64(shareRows-1)))
 			r = min(max(r, 0), shareRows-1)
-			grid[r][c] = sweepMarker(index[ps.Name])
+			grid[r][c] = sweepMarker(index[ps.Key])
 		}
 	}
 	for r := 0; r < shareRows; r++ {

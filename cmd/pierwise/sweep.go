@@ -72,8 +72,9 @@ func runSweep(e *env, args []string) error {
 }
 
 type sweepPierJSON struct {
-	Name  string  `json:"name"`
-	Share float64 `json:"share"`
+	Name  string  `json:"name"`  // the pier's name at this position
+	Pier  string  `json:"pier"`  // the physical pier: the openings (or "end") on either side
+	Share float64 `json:"share"` // fraction of the wall shear
 }
 
 type sweepPointJSON struct {
@@ -109,7 +110,7 @@ func writeSweepJSON(out io.Writer, w *geometry.Wall, pts []study.Point) error {
 				j.MaxStress = &s
 			}
 			for _, ps := range p.Piers {
-				j.Piers = append(j.Piers, sweepPierJSON{Name: ps.Name, Share: ps.Share})
+				j.Piers = append(j.Piers, sweepPierJSON{Name: ps.Name, Pier: ps.Key, Share: ps.Share})
 			}
 		}
 		list[i] = j
