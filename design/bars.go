@@ -74,15 +74,15 @@ func edge(w Wall, r *Reinforcement) float64 {
 	return float64(EdgeDefault(w, r))
 }
 
-// near is the tolerance for "the same line" in metres (a fraction of a
+// sameLine is the tolerance for "the same line" in metres (a fraction of a
 // millimetre; lengths come from typed values).
-const near = 1e-6
+const sameLine = 1e-6
 
 // overlaps reports whether the opening's height overlaps the pier's by more
 // than the tolerance.
 func overlaps(o geometry.Opening, p geometry.Rect) bool {
 	r := o.Rect()
-	return r.Y0 < p.Y1-near && r.Y1 > p.Y0+near
+	return r.Y0 < p.Y1-sameLine && r.Y1 > p.Y0+sameLine
 }
 
 // PierBars lays the bars of one pier (docs/method.md §8):
@@ -102,16 +102,16 @@ func PierBars(w Wall, p geometry.Rect, r *Reinforcement) []Bar {
 	}
 	e := edge(w, r)
 	wallL := float64(w.Length)
-	left, right := p.X0 <= near, p.X1 >= wallL-near
+	left, right := p.X0 <= sameLine, p.X1 >= wallL-sameLine
 	for _, o := range w.Openings {
 		if !overlaps(o, p) {
 			continue
 		}
 		or := o.Rect()
-		if abs(or.X1-p.X0) <= near {
+		if abs(or.X1-p.X0) <= sameLine {
 			left = true
 		}
-		if abs(or.X0-p.X1) <= near {
+		if abs(or.X0-p.X1) <= sameLine {
 			right = true
 		}
 	}
@@ -141,14 +141,14 @@ func PierBars(w Wall, p geometry.Rect, r *Reinforcement) []Bar {
 			hi = p.X1 - e
 		}
 	positions:
-		for k := max(1, int(lo/s)); float64(k)*s < hi+near; k++ {
+		for k := max(1, int(lo/s)); float64(k)*s < hi+sameLine; k++ {
 			x := float64(k) * s
-			if x < lo+near && left || x < lo-near || x > hi-near && right || x > hi+near {
+			if x < lo+sameLine && left || x < lo-sameLine || x > hi-sameLine && right || x > hi+sameLine {
 				continue
 			}
 			for _, o := range w.Openings {
 				or := o.Rect()
-				if overlaps(o, p) && x >= or.X0-near && x <= or.X1+near {
+				if overlaps(o, p) && x >= or.X0-sameLine && x <= or.X1+sameLine {
 					continue positions
 				}
 			}
