@@ -65,6 +65,7 @@ func (s *Section) at(c float64, right bool, fy float64, compBars bool) state {
 		m += f * (half - (d0+d1)/2)
 	}
 	dMax := 0.0
+	k := Es * s.EpsU / c // stress per unit of (c − d)
 	for _, b := range s.Bars {
 		d := b.X
 		if right {
@@ -73,8 +74,7 @@ func (s *Section) at(c float64, right bool, fy float64, compBars bool) state {
 		if d > dMax {
 			dMax = d
 		}
-		eps := s.EpsU * (c - d) / c
-		fs := Es * eps
+		fs := k * (c - d)
 		if fs > fy {
 			fs = fy
 		} else if fs < -fy {
