@@ -98,6 +98,9 @@ type PierResult struct {
 	Governing int     // index into Checks of the largest ratio
 	Ratio     float64 // the governing ratio, including Requirements' ratios
 	Require   []Requirement
+	// Requirement is the index into Require of the requirement that sets
+	// Ratio, or -1 when a check does.
+	Requirement int
 	OK        bool   // every check and requirement passes
 	Method    string // "reinforced", "unreinforced"
 }
@@ -204,10 +207,11 @@ func checkPier(in *Input, p PierInput, combos []Combination) PierResult {
 			pr.Governing, pr.Ratio = i, c.Ratio()
 		}
 	}
-	for _, r := range pr.Require {
+	pr.Requirement = -1
+	for i, r := range pr.Require {
 		pr.OK = pr.OK && r.OK
 		if r.Ratio > pr.Ratio {
-			pr.Ratio = r.Ratio
+			pr.Ratio, pr.Requirement = r.Ratio, i
 		}
 	}
 	pr.OK = pr.OK && pr.Ratio <= 1

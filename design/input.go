@@ -283,3 +283,8 @@ func (in *Input) Validate() geometry.ErrorList {
 	}
 	return errs
 }
+
+// Rect returns the wall's outline in wall coordinates (metres).
+func (w Wall) Rect() geometry.Rect {
+	return geometry.Rect{X1: float64(w.Length), Y1: float64(w.Height)}
+}
