@@ -101,8 +101,8 @@ type PierResult struct {
 	// Requirement is the index into Require of the requirement that sets
 	// Ratio, or -1 when a check does.
 	Requirement int
-	OK        bool   // every check and requirement passes
-	Method    string // "reinforced", "unreinforced"
+	OK          bool   // every check and requirement passes
+	Method      string // "reinforced", "unreinforced"
 }
 
 // GoverningCheck returns the pier's governing check.
