@@ -576,3 +576,35 @@ func TestFinite(t *testing.T) {
 		}
 	}
 }
+
+// Partial grouting, hand arithmetic: an 8 ft pier of 8 in units (7.625 in,
+// face shells 1.25 in) with 1#5 jambs and #5@48in has bars at 4, 48 and
+// 92 in, so three grouted cells [0, 8], [44, 52], [88, 96] in:
+//
+//	A_n = 2 × 1.25 × 96 + 3 × 8 × (7.625 − 2.5) = 240 + 123 = 363 in²
+//
+// and its shear strength carries γ_g = 0.75.
+func TestPartialGroutNetArea(t *testing.T) {
+	w := solidWall(geometry.ConcreteMasonry, 8, 8, 7.625, 2000)
+	r := &Reinforcement{Grout: PartialGrout, Fy: geometry.Stress(60 * ksi), Jamb: count(t, "1#5"), Vertical: spacing(t, "#5@48in")}
+	loads := pier.PierLoads{Lateral: pier.Sections{Bottom: pier.Forces{Shear: geometry.Force(10 * kip), Moment: 10 * kip * 8 * foot}}}
+	p := onePier(t, w, r, Settings{Code: TMS402}, loads)
+	near(t, "A_n (in²)", p.Section.Area/(inch*inch), 363, 1e-9)
+	// M/(V d_v) = 80/(10 × 8) = 1: V_nm = 2.25 A_n √f'm; no P_u, no V_ns.
+	near(t, "φV_n (lb)", float64(p.Checks[0].PhiShear)/lb, 0.8*0.75*2.25*363*math.Sqrt(2000), 1e-9)
+}
+
+// A special masonry pier whose axial load is beyond its range has no M_n:
+// its design shear is the 2.5 V_u limit, not zero.
+func TestSpecialMasonryAxialBeyondRange(t *testing.T) {
+	w := solidWall(geometry.ConcreteMasonry, 4, 8, 7.625, 1500)
+	r := &Reinforcement{Fy: geometry.Stress(60 * ksi), Jamb: count(t, "1#5"), Horizontal: spacing(t, "#4@16in")}
+	loads := pier.PierLoads{Dead: pier.Sections{Bottom: pier.Forces{Axial: geometry.Force(2000 * kip)}},
+		Lateral: pier.Sections{Bottom: pier.Forces{Shear: geometry.Force(10 * kip), Moment: 10 * kip * 8 * foot}}}
+	p := onePier(t, w, r, Settings{Code: TMS402, Class: Special, SDS: 0.5}, loads)
+	c := p.Checks[0]
+	if c.Governs != AxialMode && c.FlexureRatio <= 1 {
+		t.Errorf("check %+v does not fail on the axial load", c)
+	}
+	near(t, "design shear (kip)", float64(c.DesignShear)/kip, 2.5*0.8*10, 1e-9)
+}

@@ -1,6 +1,7 @@
 package design
 
 import (
+	"math"
 	"strconv"
 
 	"pierwise/geometry"
@@ -247,6 +248,15 @@ func (in *Input) Validate() geometry.ErrorList {
 	}
 	if s.Rho != 0 && !(s.Rho >= 1.0 && s.Rho <= 1.3) {
 		add("design.rho", "ρ must be 1.0 or 1.3 (ASCE 7-22 §12.3.4), or a value between")
+	}
+	if !(in.Wall.Thickness > 0) || !(in.Wall.Length > 0) || !(in.Wall.Height > 0) {
+		add("thickness", "the checks need the wall's length, height and thickness")
+	}
+	for _, p := range in.Piers {
+		r := p.Rect
+		if !(r.W() > 0 && r.H() > 0) || math.IsInf(r.W(), 0) || math.IsInf(r.H(), 0) {
+			add("pier "+p.Name, "a pier needs a positive width and height")
+		}
 	}
 	if !(in.Wall.Material.Strength > 0) {
 		add("material.strength", "the checks need f'm or f'c")

@@ -139,7 +139,9 @@ func (m *masonry) check(c *Check, combo Combination) {
 func SpecialMasonryShear(vu, mu, mn float64) float64 {
 	vu = math.Abs(vu)
 	limit := 2.5 * PhiMasonryShear * vu
-	if mu == 0 {
+	if mu == 0 || mn <= 0 {
+		// No moment, or an axial load beyond the section's range (no M_n):
+		// the 2.5 V_u limit governs.
 		return limit
 	}
 	return math.Min(1.25*mn/math.Abs(mu)*vu, limit)
