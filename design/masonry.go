@@ -172,7 +172,8 @@ func (m *masonry) requirements(checks []Check) []Requirement {
 	var req []Requirement
 	// Maximum flexural tensile reinforcement, for each section and direction
 	// with the axial load of D + 0.75L + 0.525Q_E.
-	worst := Requirement{Clause: "TMS 402-22 §9.3.3.2 (clause number from memory)", OK: true}
+	var worst Requirement
+	var worstAlpha float64
 	found := false
 	for _, sec := range []SectionAt{Bottom, Top} {
 		d, l, q := m.loads.Dead.Bottom, m.loads.Live.Bottom, m.loads.Lateral.Bottom
@@ -187,14 +188,16 @@ func (m *masonry) requirements(checks []Check) []Requirement {
 			p := float64(d.Axial) + 0.75*float64(l.Axial) + 0.525*dir*float64(q.Axial)
 			for _, right := range []bool{true, false} {
 				rr := m.maxSteel(alpha, p, right)
-				found = true
-				if rr.Ratio > worst.Ratio || !rr.OK && worst.OK {
-					worst = rr
+				if !found || rr.Ratio > worst.Ratio {
+					worst, worstAlpha = rr, alpha
 				}
+				found = true
 			}
 		}
 	}
 	if found {
+		worst.Name = "tension bars within the maximum (α = " + fmtG(worstAlpha) + ")"
+		worst.Clause = "TMS 402-22 §9.3.3.2 (clause number from memory)"
 		req = append(req, worst)
 	}
 	if m.in.Settings.Class == Special {
@@ -216,26 +219,25 @@ func (m *masonry) maxSteel(alpha, p float64, right bool) Requirement {
 		}
 		dMax = math.Max(dMax, d)
 	}
-	r := Requirement{Name: "tension bars within the maximum (α = " + fmtG(alpha) + ")",
-		Clause: "TMS 402-22 §9.3.3.2 (clause number from memory)", OK: true}
+	r := Requirement{OK: true}
 	if dMax == 0 {
 		return r
 	}
 	c := s.EpsU / (s.EpsU + alpha*s.Fy/Es) * dMax
 	// Split the forces at this strain state into compression and tension.
-	var comp, tens float64
 	st := s.at(c, right, s.Fy, true)
+	var tens float64
+	k := Es * s.EpsU / c
 	for _, b := range s.Bars {
 		d := b.X
 		if right {
 			d = s.Length - b.X
 		}
-		fs := math.Max(-s.Fy, math.Min(s.Fy, Es*s.EpsU*(c-d)/c))
-		if fs < 0 {
-			tens -= fs * b.Area
+		if fs := k * (c - d); fs < 0 {
+			tens += math.Min(-fs, s.Fy) * b.Area
 		}
 	}
-	comp = st.p + tens
+	comp := st.p + tens
 	r.Required = comp - p // the largest tension force equilibrium allows, N
 	r.Provided = tens
 	switch {

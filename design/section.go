@@ -164,19 +164,28 @@ func (s *Section) momentAt(pu float64, right bool, fy float64, mode int) Strengt
 		return ph*st.p - pu, st, ph
 	}
 	lo := 1e-9 * s.Length
+	// At c → 0 every bar yields in tension and the block vanishes.
+	var ast float64
+	for _, b := range s.Bars {
+		ast += b.Area
+	}
+	phiT := s.phiTension()
+	if mode == 0 {
+		phiT = 1
+	}
+	glo := -phiT*fy*ast - pu
 	hi := s.Length / s.BlockDepth
-	glo, _, _ := g(lo)
-	ghi, _, _ := g(hi)
+	ghi, st, ph := g(hi)
 	for i := 0; ghi < 0 && i < 60; i++ {
 		lo, glo = hi, ghi
 		hi *= 2
-		ghi, _, _ = g(hi)
+		ghi, st, ph = g(hi)
 	}
 	if glo > 0 || ghi < 0 {
 		return Strength{Exceeded: true}
 	}
 	// Illinois regula falsi: a bracket [lo, hi] with g(lo) ≤ 0 ≤ g(hi).
-	tol := 1e-10 * (comp + tens)
+	tol := 1e-9 * (comp + tens)
 	side := 0
 	c := hi
 	for i := 0; i < 100; i++ {
@@ -184,7 +193,8 @@ func (s *Section) momentAt(pu float64, right bool, fy float64, mode int) Strengt
 		if !(c > lo && c < hi) {
 			c = (lo + hi) / 2
 		}
-		gc, _, _ := g(c)
+		var gc float64
+		gc, st, ph = g(c)
 		if math.Abs(gc) <= tol || hi-lo <= 1e-12*s.Length {
 			break
 		}
@@ -202,7 +212,6 @@ func (s *Section) momentAt(pu float64, right bool, fy float64, mode int) Strengt
 			side = 1
 		}
 	}
-	_, st, ph := g(c)
 	mn := st.m
 	if mn < 0 {
 		mn = 0
