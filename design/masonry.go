@@ -148,8 +148,10 @@ func SpecialMasonryShear(vu, mu, mn float64) float64 {
 }
 
 // alphaMax is the tension-strain factor α of the maximum-reinforcement rule
-// (TMS 402-22 §9.3.3.2, clause number from memory; §9.3.3.5 in the 2016
-// edition): with M_u/(V_u d_v) ≥ 1, 1.5 for ordinary, 3.0 for intermediate and
+// of TMS 402-16 §9.3.3.2, kept as a ductility check until the printed TMS
+// 402-22 is read: a secondary source reports that the 2022 edition removed
+// this rule for a strength-reduction factor that varies with the tensile
+// strain (docs/method.md §8). With M_u/(V_u d_v) ≥ 1, 1.5 for ordinary, 3.0 for intermediate and
 // 4.0 for special walls; below 1, 1.5 under seismic loads (R > 1.5 assumed)
 // and no limit under wind. Zero means no limit.
 func alphaMax(class WallClass, kind LoadKind, mvd float64) float64 {
@@ -197,7 +199,7 @@ func (m *masonry) requirements(checks []Check) []Requirement {
 	}
 	if found {
 		worst.Name = "tension bars within the maximum (α = " + fmtG(worstAlpha) + ")"
-		worst.Clause = "TMS 402-22 §9.3.3.2 (clause number from memory)"
+		worst.Clause = "TMS 402-16 §9.3.3.2 (kept pending TMS 402-22; see docs/method.md §8)"
 		req = append(req, worst)
 	}
 	if m.in.Settings.Class == Special {
