@@ -131,7 +131,7 @@ type Result struct {
 	Notes        []string // assumptions that applied to this wall
 }
 
-// Check designs every pier of the input (docs/method.md §8). It returns the
+// CheckWall checks every pier of the input (docs/method.md §8). It returns the
 // validation errors of the input, keyed by file key, and nothing else can
 // fail: the result holds no NaN or Inf.
 func CheckWall(in Input) (Result, error) {
