@@ -88,6 +88,13 @@ type Pier struct {
 
 	BandShare float64 // fraction of its band's shear (Share = BandShare × parent's Share)
 	Cut       bool    // openings inside leave no load path: no rigidity, no share
+
+	// Loads are the pier's section forces under each load case
+	// (docs/method.md §6): Lateral from the wall's shear (V, the moment of
+	// the pier's support and the axial force of the band's overturning
+	// couple), Dead and Live the axial forces of the tributary gravity
+	// loads. Zero for a cut pier.
+	Loads PierLoads
 }
 
 // H, L and Ratio give the pier's height, length and h/L.
@@ -120,15 +127,58 @@ type Result struct {
 	DeflectionAbs geometry.Length // top deflection under the load
 	Drift         DriftCheck      // filled when HasLoad
 
-	Warnings []string // where the method's assumptions are weak
+	// Overturning is the wall's base overturning moment under its shear,
+	// N·m: V·h for a cantilever, V·h/2 for a wall whose top is held
+	// against rotation (docs/method.md §6). Zero without a load.
+	Overturning float64
 
-	// WarningKinds gives the kind of each warning (one of the Warn…
-	// constants), parallel to Warnings, so that tools can tell them apart
-	// without reading the text.
-	WarningKinds []string
+	Warnings []Warning // where the method's assumptions are weak, in the order found
 }
 
-// Kinds of warnings (Result.WarningKinds).
+// Severity says how much a warning bears on the numbers.
+type Severity int
+
+const (
+	// SeverityInfo: a note on an assumption every wall of its kind
+	// shares (fixed piers, a fixed top).
+	SeverityInfo Severity = iota
+	// SeverityCaution: an assumption is weak here; the numbers near it
+	// deserve a second look (a shallow spandrel, a sliver pier).
+	SeverityCaution
+	// SeveritySerious: part of the wall is outside the method; its
+	// numbers there are missing (a pier without a load path).
+	SeveritySerious
+)
+
+// String returns the severity as a word: "info", "caution", "serious".
+func (s Severity) String() string {
+	switch s {
+	case SeverityCaution:
+		return "caution"
+	case SeveritySerious:
+		return "serious"
+	}
+	return "info"
+}
+
+// Warning is one place where the method's assumptions are weak.
+type Warning struct {
+	Kind     string   // one of the Warn… constants
+	Severity Severity // how much it bears on the numbers
+	Subject  string   // what it is about: "wall", a pier ("P2") or openings ("W1, W2")
+	Text     string   // the sentence shown to the user
+}
+
+// Texts returns the texts of warnings, in order.
+func Texts(warnings []Warning) []string {
+	out := make([]string, len(warnings))
+	for i, w := range warnings {
+		out[i] = w.Text
+	}
+	return out
+}
+
+// Kinds of warnings (Warning.Kind).
 const (
 	WarnCutPier      = "pier without load path"
 	WarnStaggered    = "staggered band"

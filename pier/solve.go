@@ -30,17 +30,217 @@ type solver struct {
 	p      Params
 	eps    float64 // absolute tolerance, metres
 	thick  float64 // wall thickness, metres (0 when unknown)
+	height float64 // wall height, metres
 	units  geometry.System
+	ops    []opening // every opening of the active layout
 	res    *Result
-	parent []int // per pier: index of the parent pier, -1 at the top level
 }
 
-// Solve runs the classic method of DESIGN §3 on the active layout of w. It
-// returns a *CutError when the openings cut the wall (no load path from base
-// to top), a *StaggeredError when a band has no pier, and a plain error for
-// a wall it cannot solve (non-positive or non-finite sizes, openings outside
-// the wall or overlapping, bad material or modifiers). A Result never holds
-// NaN or Inf.
+// node is a region of the decomposition (docs/method.md §2): the wall, or
+// a pier with the openings inside it. Solve builds the whole tree first
+// (build), then computes deflections bottom-up (compute), then writes the
+// result in name order (flatten) and the forces top-down (forces.go).
+type node struct {
+	name  string // "wall" or the pier's name
+	wall  bool   // the root: the whole wall
+	pier  int    // index in Result.Piers (flatten); -1 for the wall
+	rect  geometry.Rect
+	sup   geometry.Support
+	ops   []opening // the openings inside rect, clipped to it
+	above float64   // solid over rect outside it, up to the next band of the enclosing regions
+	bands []band
+	rows  []row // one per band: its piers
+
+	// cutBy names the opening that leaves the region no load path
+	// (found while building); noPath is set when the region has a load
+	// path around each opening but every pier of one of its bands has
+	// none. Either way the region has no rigidity and no share.
+	cutBy  string
+	noPath bool
+
+	d Parts // the region's relative deflection (compute)
+}
+
+// row holds the piers of one band of a region.
+type row struct {
+	rect    geometry.Rect // the band across the region
+	sup     geometry.Support
+	piers   []*node
+	allCuts bool // no opening spans the band: each is a cut
+
+	strip, piersD float64 // the strip removed and the piers restored (compute)
+	sumK          float64 // Σ of the piers' rigidities (compute)
+}
+
+// dead reports whether a region carries nothing.
+func (n *node) dead() bool { return n.cutBy != "" || n.noPath }
+
+// build makes the region's subtree: its bands and their piers, named, each
+// pier built in turn (§3 steps 2–3 without the arithmetic). A band with no
+// pier is a *StaggeredError.
+func (s *solver) build(n *node) error {
+	if len(n.ops) == 0 {
+		return nil // step 1
+	}
+	if !n.wall { // step 2 (the wall was checked by Solve)
+		if op, cut := s.cutAcross(n.rect, n.ops); cut {
+			n.cutBy = op
+			return nil
+		}
+	}
+	prefix := "P"
+	if !n.wall {
+		prefix = n.name + "."
+	}
+	count := 0
+	n.bands = s.bands(n.ops)
+	n.rows = make([]row, len(n.bands))
+	for bi, b := range n.bands {
+		bandSup := geometry.Fixed
+		if n.sup == geometry.Cantilever && b.y1 >= n.rect.Y1-s.eps {
+			bandSup = geometry.Cantilever
+		}
+		rw := &n.rows[bi]
+		rw.rect = geometry.Rect{X0: n.rect.X0, Y0: b.y0, X1: n.rect.X1, Y1: b.y1}
+		rw.sup = bandSup
+		spans, allCuts := s.piersOf(n.rect, b, n.ops)
+		if len(spans) == 0 {
+			return &StaggeredError{Region: n.name, Y0: b.y0, Y1: b.y1, Openings: bandNames(b, n.ops), Units: s.units}
+		}
+		rw.allCuts = allCuts
+		// The solid over this band's piers: up to the next band, or to the
+		// region's top and on through what lies over the region.
+		pierAbove := n.rect.Y1 + n.above - b.y1
+		if bi+1 < len(n.bands) {
+			pierAbove = n.bands[bi+1].y0 - b.y1
+		}
+		rw.piers = make([]*node, len(spans))
+		for i, sp := range spans {
+			count++
+			c := &node{name: prefix + strconv.Itoa(count), pier: -1, rect: sp.rect, sup: bandSup, ops: sp.ops, above: pierAbove}
+			if err := s.build(c); err != nil {
+				return err
+			}
+			rw.piers[i] = c
+		}
+	}
+	return nil
+}
+
+// compute returns the region's relative deflection (§3 steps 1, 3, 4),
+// its piers' first. A region whose band has no pier with a load path is
+// marked noPath.
+func (s *solver) compute(n *node) (Parts, error) {
+	solid := Element(n.rect.H(), n.rect.W(), n.sup, s.p)
+	if len(n.ops) == 0 {
+		n.d = solid
+		return solid, nil
+	}
+	d := solid
+	for bi := range n.rows {
+		rw := &n.rows[bi]
+		strip := Element(rw.rect.H(), n.rect.W(), rw.sup, s.p)
+		d.Bending -= strip.Bending
+		d.Shear -= strip.Shear
+		rw.strip = strip.Total()
+		var sumK float64
+		for _, c := range rw.piers {
+			if c.cutBy != "" {
+				continue
+			}
+			pd, err := s.compute(c)
+			if err != nil {
+				return Parts{}, err
+			}
+			if c.noPath {
+				continue
+			}
+			if !(pd.Total() > 0) || math.IsInf(pd.Total(), 0) {
+				return Parts{}, errRange
+			}
+			sumK += 1 / pd.Total()
+		}
+		if !(sumK > 0) {
+			n.noPath = true
+			return Parts{}, nil
+		}
+		// The band's deflection 1/Σk is split into bending and shear by
+		// strain energy: the band stores V²·d_band/2 = Σ V_i²·d_i/2 with
+		// V_i = share_i·V and share_i = d_band/d_i, of which Σ V_i²·b_i/2 is
+		// bending, so the bending fraction is Σ share_i²·b_i/d_band =
+		// Σ share_i·(b_i/d_i).
+		dBand := 1 / sumK
+		var bendFrac float64
+		for _, c := range rw.piers {
+			if !c.dead() {
+				bendFrac += (1 / c.d.Total() / sumK) * c.d.Bending / c.d.Total()
+			}
+		}
+		d.Bending += dBand * bendFrac
+		d.Shear += dBand * (1 - bendFrac)
+		rw.piersD, rw.sumK = dBand, sumK
+	}
+	n.d = d
+	return d, nil
+}
+
+// flatten writes the region's steps, piers and warnings in the order of
+// the method's working: the solid, then for each band the strip, the
+// band's piers (each followed by its own working) and the band restored.
+// share is the region's fraction of the wall shear.
+func (s *solver) flatten(n *node, share float64) {
+	if n.cutBy != "" {
+		s.warn(WarnCutPier, SeveritySerious, n.name, fmt.Sprintf("pier %s: opening %s leaves no load path through it; it is given no rigidity and no share", n.name, n.cutBy))
+		return
+	}
+	if n.noPath {
+		s.warn(WarnCutPier, SeveritySerious, n.name, fmt.Sprintf("pier %s: every pier of one of its bands is cut by its openings, which leaves no load path through it; it is given no rigidity and no share", n.name))
+		return
+	}
+	if len(n.ops) == 0 {
+		return
+	}
+	s.step(StepSolid, n.name, n.rect, n.sup, Element(n.rect.H(), n.rect.W(), n.sup, s.p).Total(), nil)
+	parent := ""
+	if !n.wall {
+		parent = n.name
+	}
+	for bi := range n.rows {
+		rw := &n.rows[bi]
+		s.step(StepStrip, n.name, rw.rect, rw.sup, rw.strip, nil)
+		s.spandrels(n.rect, n.bands, bi, n.name, n.ops, n.above)
+		names := make([]string, len(rw.piers))
+		for i, c := range rw.piers {
+			p := Pier{Name: c.name, Parent: parent, Rect: c.rect, Support: rw.sup, Leaf: len(c.ops) == 0, Cut: c.dead()}
+			if !p.Cut {
+				p.Parts = c.d
+				p.Rigidity = 1 / c.d.Total()
+				p.BandShare = p.Rigidity / rw.sumK
+				p.Share = p.BandShare * share
+			}
+			c.pier = len(s.res.Piers)
+			s.res.Piers = append(s.res.Piers, p)
+			names[i] = c.name
+			s.flatten(c, p.Share)
+		}
+		s.step(StepPiers, n.name, rw.rect, rw.sup, rw.piersD, names)
+		if rw.allCuts {
+			s.res.Steps[len(s.res.Steps)-1].AllCuts = true
+			s.warn(WarnStaggered, SeverityCaution, s.bandNames(n.bands[bi], n.ops), fmt.Sprintf("in %s no opening of %s spans the full height of their band: each is taken as a cut and the piers between them as the band's full height, a rough reading of staggered openings", where(n.name), strings.Join(bandNames(n.bands[bi], n.ops), ", ")))
+		}
+	}
+}
+
+func (s *solver) step(kind StepKind, region string, r geometry.Rect, sup geometry.Support, d float64, piers []string) {
+	s.res.Steps = append(s.res.Steps, Step{Kind: kind, Region: region, Rect: r, Support: sup, Deflection: d, Piers: piers})
+}
+
+// Solve runs the classic method (docs/method.md §2) on the active layout of
+// w. It returns a *CutError when the openings cut the wall (no load path
+// from base to top), a *StaggeredError when a band has no pier, and a plain
+// error for a wall it cannot solve (non-positive or non-finite sizes,
+// openings outside the wall or overlapping, bad material, modifiers or
+// loads). A Result never holds NaN or Inf.
 func Solve(w *geometry.Wall) (*Result, error) {
 	if w == nil {
 		return nil, errors.New("pier: no wall")
@@ -62,10 +262,12 @@ func Solve(w *geometry.Wall) (*Result, error) {
 
 	wall := w.Rect()
 	s := &solver{
-		p:     p,
-		eps:   tolerance * math.Max(wall.W(), wall.H()),
-		thick: float64(w.Thickness),
-		units: w.Units,
+		p:      p,
+		eps:    tolerance * math.Max(wall.W(), wall.H()),
+		thick:  float64(w.Thickness),
+		height: wall.H(),
+		units:  w.Units,
+		ops:    ops,
 		res: &Result{
 			Moduli: mod,
 			// Typical layouts have about one pier per opening and a few
@@ -73,18 +275,21 @@ func Solve(w *geometry.Wall) (*Result, error) {
 			Piers: make([]Pier, 0, len(ops)+len(ops)/2+2),
 			Steps: make([]Step, 0, len(ops)/2+4),
 		},
-		parent: make([]int, 0, len(ops)+len(ops)/2+2),
 	}
 	if name, cut := s.cutAcross(wall, ops); cut {
 		return nil, &CutError{Region: "wall", Opening: name}
 	}
-	d, cut, err := s.region(wall, w.Support, ops, "wall", -1, 0)
+	root := &node{name: "wall", wall: true, pier: -1, rect: wall, sup: w.Support, ops: ops}
+	if err := s.build(root); err != nil {
+		return nil, err
+	}
+	d, err := s.compute(root)
 	if err != nil {
 		return nil, err
 	}
-	if cut && len(ops) > 0 {
-		// cutWall should have caught every wall without a load path; this
-		// is the last guard against an infinite deflection.
+	if root.noPath {
+		// cutAcross should have caught every wall without a load path;
+		// this is the last guard against an infinite deflection.
 		return nil, &CutError{Region: "wall", Opening: ops[0].name}
 	}
 	if !(d.Total() > 0) || math.IsInf(d.Total(), 0) {
@@ -94,14 +299,13 @@ func Solve(w *geometry.Wall) (*Result, error) {
 	r.Deflection = d.Total()
 	r.Rigidity = 1 / r.Deflection
 	r.Split = d
-	for i := range r.Piers {
-		share := 1.0
-		if s.parent[i] >= 0 {
-			share = r.Piers[s.parent[i]].Share
-		}
-		r.Piers[i].Share = r.Piers[i].BandShare * share
+	s.flatten(root, 1)
+	if len(ops) == 0 {
+		// A solid wall is one pier, P1, that carries the whole shear.
+		r.Piers = append(r.Piers, Pier{Name: "P1", Rect: wall, Support: w.Support, Leaf: true,
+			Parts: d, Rigidity: r.Rigidity, Share: 1, BandShare: 1})
 	}
-	if err := s.loads(w); err != nil {
+	if err := s.loads(w, root); err != nil {
 		return nil, err
 	}
 	s.assumptions(w, ops)
@@ -122,128 +326,6 @@ func (r *Result) Leaves() []Pier {
 		}
 	}
 	return out
-}
-
-// region returns the relative deflection of rect with the openings ops
-// (clipped to it) under the given support: §3 steps 1–4. name is "wall" or
-// the pier's name, self the pier's index (-1 for the wall). above is the
-// depth of solid wall directly over rect outside it (up to the next band of
-// the enclosing regions; 0 for the wall), so that the spandrel warnings of
-// a pier's own bands measure the whole spandrel, not only its part inside
-// the pier. cut reports a region with no load path (no rigidity); its steps
-// and sub-piers are dropped.
-func (s *solver) region(rect geometry.Rect, sup geometry.Support, ops []opening, name string, self int, above float64) (d Parts, cut bool, err error) {
-	solid := Element(rect.H(), rect.W(), sup, s.p)
-	if len(ops) == 0 {
-		return solid, false, nil // step 1
-	}
-	if self >= 0 { // step 2 (the wall was checked by Solve)
-		if op, cut := s.cutAcross(rect, ops); cut {
-			s.warn(WarnCutPier, fmt.Sprintf("pier %s: opening %s leaves no load path through it; it is given no rigidity and no share", name, op))
-			return Parts{}, true, nil
-		}
-	}
-	stepMark, pierMark := len(s.res.Steps), len(s.res.Piers)
-	undo := func() {
-		s.res.Steps = s.res.Steps[:stepMark]
-		s.res.Piers = s.res.Piers[:pierMark]
-		s.parent = s.parent[:pierMark]
-	}
-	s.step(StepSolid, name, rect, sup, solid.Total(), nil)
-	d = solid
-	prefix := "P"
-	if self >= 0 {
-		prefix = name + "."
-	}
-	count := 0
-	bands := s.bands(ops)
-	for bi, b := range bands {
-		bandSup := geometry.Fixed
-		if sup == geometry.Cantilever && b.y1 >= rect.Y1-s.eps {
-			bandSup = geometry.Cantilever
-		}
-		bandRect := geometry.Rect{X0: rect.X0, Y0: b.y0, X1: rect.X1, Y1: b.y1}
-		strip := Element(b.y1-b.y0, rect.W(), bandSup, s.p)
-		d.Bending -= strip.Bending
-		d.Shear -= strip.Shear
-		s.step(StepStrip, name, bandRect, bandSup, strip.Total(), nil)
-
-		spans, allCuts := s.piersOf(rect, b, ops)
-		if len(spans) == 0 {
-			return Parts{}, false, &StaggeredError{Region: name, Y0: b.y0, Y1: b.y1, Openings: bandNames(b, ops), Units: s.units}
-		}
-		s.spandrels(rect, bands, bi, name, ops, above)
-		// The solid over this band's piers: up to the next band, or to the
-		// region's top and on through what lies over the region.
-		pierAbove := rect.Y1 + above - b.y1
-		if bi+1 < len(bands) {
-			pierAbove = bands[bi+1].y0 - b.y1
-		}
-
-		idx := make([]int, 0, len(spans))
-		names := make([]string, 0, len(spans))
-		var sumK float64
-		for _, sp := range spans {
-			count++
-			pname := prefix + strconv.Itoa(count)
-			parentName := ""
-			if self >= 0 {
-				parentName = name
-			}
-			k := len(s.res.Piers)
-			s.res.Piers = append(s.res.Piers, Pier{
-				Name: pname, Parent: parentName, Rect: sp.rect, Support: bandSup, Leaf: len(sp.ops) == 0,
-			})
-			s.parent = append(s.parent, self)
-			pd, pcut, err := s.region(sp.rect, bandSup, sp.ops, pname, k, pierAbove)
-			if err != nil {
-				return Parts{}, false, err
-			}
-			if !pcut && (!(pd.Total() > 0) || math.IsInf(pd.Total(), 0)) {
-				return Parts{}, false, errRange
-			}
-			pr := &s.res.Piers[k] // re-taken: the recursion may have grown the slice
-			if pcut {
-				pr.Cut = true
-			} else {
-				pr.Parts = pd
-				pr.Rigidity = 1 / pd.Total()
-				sumK += pr.Rigidity
-			}
-			idx = append(idx, k)
-			names = append(names, pname)
-		}
-		if !(sumK > 0) {
-			undo()
-			return Parts{}, true, nil
-		}
-		// The band's deflection 1/Σk is split into bending and shear by
-		// strain energy: the band stores V²·d_band/2 = Σ V_i²·d_i/2 with
-		// V_i = share_i·V and share_i = d_band/d_i, of which Σ V_i²·b_i/2 is
-		// bending, so the bending fraction is Σ share_i²·b_i/d_band =
-		// Σ share_i·(b_i/d_i).
-		dBand := 1 / sumK
-		var bendFrac float64
-		for _, k := range idx {
-			pr := &s.res.Piers[k]
-			pr.BandShare = pr.Rigidity / sumK
-			if !pr.Cut {
-				bendFrac += pr.BandShare * pr.Parts.Bending / pr.Parts.Total()
-			}
-		}
-		d.Bending += dBand * bendFrac
-		d.Shear += dBand * (1 - bendFrac)
-		s.step(StepPiers, name, bandRect, bandSup, dBand, names)
-		if allCuts {
-			s.res.Steps[len(s.res.Steps)-1].AllCuts = true
-			s.warn(WarnStaggered, fmt.Sprintf("in %s no opening of %s spans the full height of their band: each is taken as a cut and the piers between them as the band's full height, a rough reading of staggered openings", where(name), strings.Join(bandNames(b, ops), ", ")))
-		}
-	}
-	return d, false, nil
-}
-
-func (s *solver) step(kind StepKind, region string, r geometry.Rect, sup geometry.Support, d float64, piers []string) {
-	s.res.Steps = append(s.res.Steps, Step{Kind: kind, Region: region, Rect: r, Support: sup, Deflection: d, Piers: piers})
 }
 
 // band is a merged vertical projection of openings: [y0, y1] and the
@@ -471,42 +553,6 @@ func checkWall(w *geometry.Wall) ([]opening, error) {
 	return ops, nil
 }
 
-// loads fills the absolute rigidity, the pier forces, the deflection under
-// the load and the drift check.
-func (s *solver) loads(w *geometry.Wall) (err error) {
-	r := s.res
-	E := float64(r.Moduli.E)
-	if E > 0 && s.thick > 0 {
-		r.RigidityAbs = r.Rigidity * E * s.thick
-	}
-	V := float64(w.Load.Shear)
-	if math.IsNaN(V) || math.IsInf(V, 0) || V < 0 {
-		return fmt.Errorf("pier: the wall shear must be a positive force, got %g N", V)
-	}
-	if V == 0 {
-		return nil
-	}
-	r.HasLoad = true
-	// Every pier gets the forces of its share; for a pier with openings
-	// inside they are those of the pier as a whole, and its leaves carry
-	// them on.
-	for i := range r.Piers {
-		p := &r.Piers[i]
-		p.Shear = geometry.Force(p.Share * V)
-		arm := p.H()
-		if p.Support == geometry.Fixed {
-			arm /= 2 // inflection point at mid-height
-		}
-		p.Moment = p.Share * V * arm
-	}
-	if !(E > 0 && s.thick > 0) {
-		return nil
-	}
-	r.DeflectionAbs = geometry.Length(V / (E * s.thick) * r.Deflection)
-	r.Drift, err = CheckDrift(w, r.DeflectionAbs)
-	return err
-}
-
 // CheckDrift checks the top deflection δe of wall w under its shear against
 // the wall's drift settings: δ = Cd·δe/Ie against the limit times the
 // height. The classic result and the finite-element check share it.
@@ -555,10 +601,15 @@ func (r *Result) checkFinite() error {
 			}
 		}
 	}
-	chk(r.Deflection, r.Rigidity, r.Split.Bending, r.Split.Shear, r.RigidityAbs,
+	chk(r.Deflection, r.Rigidity, r.Split.Bending, r.Split.Shear, r.RigidityAbs, r.Overturning,
 		float64(r.DeflectionAbs), float64(r.Drift.Design), r.Drift.Ratio)
 	for _, p := range r.Piers {
 		chk(p.Parts.Bending, p.Parts.Shear, p.Rigidity, p.Share, p.BandShare, float64(p.Shear), p.Moment)
+		for _, sec := range []Sections{p.Loads.Lateral, p.Loads.Dead, p.Loads.Live} {
+			for _, f := range []Forces{sec.Bottom, sec.Middle, sec.Top} {
+				chk(float64(f.Shear), float64(f.Axial), f.Moment)
+			}
+		}
 	}
 	for _, st := range r.Steps {
 		chk(st.Deflection)

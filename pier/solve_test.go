@@ -143,8 +143,13 @@ func TestSolidWallIsTheFormula(t *testing.T) {
 		if !near(r.Deflection, want.Total(), 1e-12) || !near(r.Split.Bending, want.Bending, 1e-12) {
 			t.Errorf("%v: %g %+v, want %+v", sup, r.Deflection, r.Split, want)
 		}
-		if len(r.Piers) != 0 || len(r.Steps) != 0 {
-			t.Errorf("a solid wall has no piers and no steps, got %v", names(r.Piers))
+		// A solid wall is one pier, P1, the whole wall with the whole shear.
+		if len(r.Steps) != 0 || len(r.Piers) != 1 {
+			t.Fatalf("a solid wall has one pier and no steps, got %v and %d steps", names(r.Piers), len(r.Steps))
+		}
+		if p := r.Piers[0]; p.Name != "P1" || !p.Leaf || p.Support != sup || !near(p.Share, 1, 1e-12) ||
+			!near(p.Rigidity, 1/want.Total(), 1e-12) || !near(p.L(), 20*float64(ft), 1e-12) || !near(p.H(), 12*float64(ft), 1e-12) {
+			t.Errorf("solid wall pier %+v, want P1, the whole wall, share 1", p)
 		}
 	}
 }
@@ -301,7 +306,7 @@ func TestCutPierGetsNoShare(t *testing.T) {
 	if p1 == nil || p2 == nil || !p2.Cut || p2.Share != 0 || !near(p1.Share, 1, 1e-12) {
 		t.Fatalf("piers %+v", r.Piers)
 	}
-	if len(r.Warnings) == 0 || !strings.Contains(strings.Join(r.Warnings, "\n"), "no load path") {
+	if len(r.Warnings) == 0 || !strings.Contains(strings.Join(Texts(r.Warnings), "\n"), "no load path") {
 		t.Errorf("warnings %q, want one about P2's load path", r.Warnings)
 	}
 	// The wall then is the solid minus the band plus P1 alone.
@@ -374,7 +379,7 @@ func TestWarnings(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	all := strings.Join(r.Warnings, "\n")
+	all := strings.Join(Texts(r.Warnings), "\n")
 	for _, want := range []string{"pier P1 is a sliver", "top is assumed held against rotation", "rigid spandrels"} {
 		if !strings.Contains(all, want) {
 			t.Errorf("warnings %q, want one with %q", all, want)
@@ -384,17 +389,17 @@ func TestWarnings(t *testing.T) {
 	w = wallFt(20, 10, geometry.Cantilever, [4]float64{0.5, 0, 18.5, 4})
 	w.Thickness = 0
 	r, _ = Solve(w)
-	if all := strings.Join(r.Warnings, "\n"); !strings.Contains(all, "pier P1 is slender") {
+	if all := strings.Join(Texts(r.Warnings), "\n"); !strings.Contains(all, "pier P1 is slender") {
 		t.Errorf("warnings %q, want P1 slender", all)
 	}
 	// A shallow spandrel: windows 8 ft tall under a 1 ft spandrel.
 	r, _ = Solve(wallFt(20, 12, geometry.Cantilever, [4]float64{6, 3, 4, 8}))
-	if all := strings.Join(r.Warnings, "\n"); !strings.Contains(all, "spandrel") {
+	if all := strings.Join(Texts(r.Warnings), "\n"); !strings.Contains(all, "spandrel") {
 		t.Errorf("warnings %q, want a shallow spandrel", all)
 	}
 	// A window 4 in below the top of the wall.
 	r, _ = Solve(wallFt(20, 12, geometry.Cantilever, [4]float64{6, 3, 4, 8.0 + 8.0/12}))
-	if all := strings.Join(r.Warnings, "\n"); !strings.Contains(all, "O1 stops 4\" below the top") {
+	if all := strings.Join(Texts(r.Warnings), "\n"); !strings.Contains(all, "O1 stops 4\" below the top") {
 		t.Errorf("warnings %q, want O1 near the top", all)
 	}
 	// A squat solid cantilever wall needs no warning.
@@ -434,7 +439,7 @@ func TestKnownCaseNewOpeningMakesWallStiffer(t *testing.T) {
 	if !(r1.Deflection < r0.Deflection) {
 		t.Errorf("deflection %g → %g: the documented case no longer makes the wall stiffer; update the doc and this test", r0.Deflection, r1.Deflection)
 	}
-	if !strings.Contains(strings.Join(r0.Warnings, "\n"), "spans the full height") {
+	if !strings.Contains(strings.Join(Texts(r0.Warnings), "\n"), "spans the full height") {
 		t.Errorf("the rule should be named in the warnings: %q", r0.Warnings)
 	}
 }

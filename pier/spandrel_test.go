@@ -20,7 +20,7 @@ func TestNestedSpandrelMeasuredToTheNextOpening(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	for _, m := range r.Warnings {
+	for _, m := range Texts(r.Warnings) {
 		if strings.Contains(m, "spandrel above the opening W1") {
 			t.Errorf("unexpected warning %q: 10 ft of wall lie over W1", m)
 		}
@@ -36,7 +36,7 @@ func TestNestedSpandrelMeasuredToTheNextOpening(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	all := strings.Join(r.Warnings, "\n")
+	all := strings.Join(Texts(r.Warnings), "\n")
 	if !strings.Contains(all, "in pier P1 the spandrel above the opening O2 is 0.75 times") {
 		t.Errorf("warnings %q, want the spandrel over O2 in P1 at 0.75", all)
 	}
@@ -46,7 +46,7 @@ func TestNestedSpandrelMeasuredToTheNextOpening(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	if all := strings.Join(r.Warnings, "\n"); !strings.Contains(all, "the spandrel above the opening O1 is 0.1") {
+	if all := strings.Join(Texts(r.Warnings), "\n"); !strings.Contains(all, "the spandrel above the opening O1 is 0.1") {
 		t.Errorf("warnings %q, want the singular for O1", all)
 	}
 }
@@ -76,7 +76,7 @@ func TestSlenderSolidWall(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	if all := strings.Join(r.Warnings, "\n"); !strings.Contains(all, "the wall is slender (h/L = 5.0") {
+	if all := strings.Join(Texts(r.Warnings), "\n"); !strings.Contains(all, "the wall is slender (h/L = 5.0") {
 		t.Errorf("warnings %q, want the wall slender", all)
 	}
 	r, err = Solve(solidWall(20, 10, geometry.Cantilever))
@@ -115,20 +115,27 @@ func TestPoissonGivesShearModulus(t *testing.T) {
 	}
 }
 
-// Every warning has a kind, parallel to the text; the sliver pier of a
-// window 6 in from the end is a layout warning, the note on fixed piers is
-// not (every layout of the wall has it).
+// Every warning has a kind, a severity and a subject beside its text; the
+// sliver pier of a window 6 in from the end is a layout warning, the note
+// on fixed piers is not (every layout of the wall has it).
 func TestWarningKinds(t *testing.T) {
 	r, err := Solve(wallFt(20, 10, geometry.Cantilever, [4]float64{0.5, 3, 4, 4}))
 	if err != nil {
 		t.Fatal(err)
 	}
-	if len(r.WarningKinds) != len(r.Warnings) {
-		t.Fatalf("%d kinds for %d warnings", len(r.WarningKinds), len(r.Warnings))
-	}
 	kinds := map[string]string{}
-	for i, k := range r.WarningKinds {
-		kinds[k] = r.Warnings[i]
+	for _, w := range r.Warnings {
+		kinds[w.Kind] = w.Text
+		switch w.Kind {
+		case WarnSliver:
+			if w.Subject != "P1" || w.Severity != SeverityCaution {
+				t.Errorf("sliver warning %+v, want subject P1, caution", w)
+			}
+		case WarnFixedPiers:
+			if w.Subject != "wall" || w.Severity != SeverityInfo {
+				t.Errorf("fixed-piers warning %+v, want subject wall, info", w)
+			}
+		}
 	}
 	if m := kinds[WarnSliver]; !strings.Contains(m, "sliver") {
 		t.Errorf("sliver kind on %q", m)

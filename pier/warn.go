@@ -20,13 +20,12 @@ const (
 	sliverRatio = 10.0
 )
 
-// warn records a warning of a kind (Warn…) once.
-func (s *solver) warn(kind, msg string) {
-	if slices.Contains(s.res.Warnings, msg) {
+// warn records a warning once (the first of equal texts).
+func (s *solver) warn(kind string, sev Severity, subject, msg string) {
+	if slices.ContainsFunc(s.res.Warnings, func(w Warning) bool { return w.Text == msg }) {
 		return
 	}
-	s.res.Warnings = append(s.res.Warnings, msg)
-	s.res.WarningKinds = append(s.res.WarningKinds, kind)
+	s.res.Warnings = append(s.res.Warnings, Warning{Kind: kind, Severity: sev, Subject: subject, Text: msg})
 }
 
 // spandrels warns when the solid above or below band bi of a region is
@@ -41,12 +40,12 @@ func (s *solver) spandrels(rect geometry.Rect, bands []band, bi int, region stri
 		top = bands[bi+1].y0
 	}
 	if depth := top - b.y1; depth > s.eps && depth < h-s.eps {
-		s.warn(WarnSpandrel, fmt.Sprintf("in %s the spandrel above %s is %.2f times as deep as the piers beside %s are tall: it is assumed to keep them from rotating, which a shallow spandrel does not do, so their rigidity is overestimated",
+		s.warn(WarnSpandrel, SeverityCaution, s.bandNames(b, ops), fmt.Sprintf("in %s the spandrel above %s is %.2f times as deep as the piers beside %s are tall: it is assumed to keep them from rotating, which a shallow spandrel does not do, so their rigidity is overestimated",
 			where(region), s.openingsPhrase(b, ops), depth/h, themOrIt(b)))
 	}
 	if bi > 0 {
 		if depth := b.y0 - bands[bi-1].y1; depth < h-s.eps {
-			s.warn(WarnSolidBetween, fmt.Sprintf("in %s the solid between %s and %s below is %.2f times as deep as the piers above it are tall: it is assumed rigid, which it is not",
+			s.warn(WarnSolidBetween, SeverityCaution, s.bandNames(b, ops), fmt.Sprintf("in %s the solid between %s and %s below is %.2f times as deep as the piers above it are tall: it is assumed rigid, which it is not",
 				where(region), s.openingsPhrase(b, ops), s.bandNames(bands[bi-1], ops), depth/h))
 		}
 	}
@@ -86,8 +85,8 @@ func (s *solver) bandNames(b band, ops []opening) string {
 func (s *solver) assumptions(w *geometry.Wall, ops []opening) {
 	anyFixed := false
 	for _, p := range s.res.Piers {
-		if p.Cut {
-			continue
+		if p.Cut || len(ops) == 0 {
+			continue // a solid wall's one pier is the wall, which has its own warning
 		}
 		if p.Support == geometry.Fixed {
 			anyFixed = true
@@ -95,22 +94,22 @@ func (s *solver) assumptions(w *geometry.Wall, ops []opening) {
 		ratio := p.Ratio()
 		switch {
 		case s.thick > 0 && p.L() < SliverLength*s.thick:
-			s.warn(WarnSliver, fmt.Sprintf("pier %s is a sliver, only %.1f times as long as the wall is thick: it acts as a column, not as a wall pier; consider moving the opening beside it to the edge or away from it", p.Name, p.L()/s.thick))
+			s.warn(WarnSliver, SeverityCaution, p.Name, fmt.Sprintf("pier %s is a sliver, only %.1f times as long as the wall is thick: it acts as a column, not as a wall pier; consider moving the opening beside it to the edge or away from it", p.Name, p.L()/s.thick))
 		case s.thick == 0 && ratio > sliverRatio:
-			s.warn(WarnSliver, fmt.Sprintf("pier %s is a sliver (h/L = %.1f): it acts as a column, not as a wall pier", p.Name, ratio))
+			s.warn(WarnSliver, SeverityCaution, p.Name, fmt.Sprintf("pier %s is a sliver (h/L = %.1f): it acts as a column, not as a wall pier", p.Name, ratio))
 		case ratio > SlenderRatio:
-			s.warn(WarnSlender, fmt.Sprintf("pier %s is slender (h/L = %.1f > %g): the formulas are meant for wall piers; its small share depends on end fixity the method only assumes", p.Name, ratio, SlenderRatio))
+			s.warn(WarnSlender, SeverityCaution, p.Name, fmt.Sprintf("pier %s is slender (h/L = %.1f > %g): the formulas are meant for wall piers; its small share depends on end fixity the method only assumes", p.Name, ratio, SlenderRatio))
 		}
 	}
 	if ratio := float64(w.Height) / float64(w.Length); ratio > SlenderRatio {
-		s.warn(WarnSlenderWall, fmt.Sprintf("the wall is slender (h/L = %.1f > %g): it acts as a column rather than a shear wall, and the formulas are meant for wall proportions", ratio, SlenderRatio))
+		s.warn(WarnSlenderWall, SeverityCaution, "wall", fmt.Sprintf("the wall is slender (h/L = %.1f > %g): it acts as a column rather than a shear wall, and the formulas are meant for wall proportions", ratio, SlenderRatio))
 	}
 	s.edges(w, ops)
 	if anyFixed && len(ops) > 0 {
-		s.warn(WarnFixedPiers, "piers marked fixed are assumed held against rotation at top and bottom by rigid spandrels; hand methods of this kind tend to overestimate the rigidity of walls with large openings: compare with the finite-element check")
+		s.warn(WarnFixedPiers, SeverityInfo, "wall", "piers marked fixed are assumed held against rotation at top and bottom by rigid spandrels; hand methods of this kind tend to overestimate the rigidity of walls with large openings: compare with the finite-element check")
 	}
 	if w.Support == geometry.Fixed {
-		s.warn(WarnFixedTop, "the wall's top is assumed held against rotation (fixed-fixed): the structure above must provide that restraint")
+		s.warn(WarnFixedTop, SeverityInfo, "wall", "the wall's top is assumed held against rotation (fixed-fixed): the structure above must provide that restraint")
 	}
 }
 
@@ -125,10 +124,10 @@ func (s *solver) edges(w *geometry.Wall, ops []opening) {
 	top := float64(w.Height)
 	for _, o := range ops {
 		if gap := o.r.Y0; gap > s.eps && gap < limit {
-			s.warn(WarnNearEdge, fmt.Sprintf("opening %s stops %s above the base: the thin strip below it is taken as solid wall, which it barely is; consider taking the opening down to the base", o.name, geometry.FormatLength(geometry.Length(gap), w.Units)))
+			s.warn(WarnNearEdge, SeverityCaution, o.name, fmt.Sprintf("opening %s stops %s above the base: the thin strip below it is taken as solid wall, which it barely is; consider taking the opening down to the base", o.name, geometry.FormatLength(geometry.Length(gap), w.Units)))
 		}
 		if gap := top - o.r.Y1; gap > s.eps && gap < limit {
-			s.warn(WarnNearEdge, fmt.Sprintf("opening %s stops %s below the top: the thin strip above it is taken as solid wall, which it barely is; consider taking the opening up to the top", o.name, geometry.FormatLength(geometry.Length(gap), w.Units)))
+			s.warn(WarnNearEdge, SeverityCaution, o.name, fmt.Sprintf("opening %s stops %s below the top: the thin strip above it is taken as solid wall, which it barely is; consider taking the opening up to the top", o.name, geometry.FormatLength(geometry.Length(gap), w.Units)))
 		}
 	}
 }

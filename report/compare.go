@@ -363,10 +363,10 @@ func CompareWarnings(c *study.Comparison) []string {
 	// A warning both layouts share is said once.
 	var wb, wa []string
 	if c.Before.Result != nil {
-		wb = c.Before.Result.Warnings
+		wb = pier.Texts(c.Before.Result.Warnings)
 	}
 	if c.After.Result != nil {
-		wa = c.After.Result.Warnings
+		wa = pier.Texts(c.After.Result.Warnings)
 	}
 	inB := map[string]bool{}
 	for _, m := range wb {

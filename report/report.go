@@ -100,7 +100,7 @@ func Wall(out io.Writer, in Input) error {
 	}
 
 	w.Section(fmt.Sprintf("%d. Warnings", n))
-	warns := append([]string(nil), res.Warnings...)
+	warns := pier.Texts(res.Warnings)
 	if in.FE != nil {
 		warns = append(warns, in.FE.Warnings...)
 	}

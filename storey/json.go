@@ -4,6 +4,7 @@ import (
 	"strconv"
 
 	"pierwise/geometry"
+	"pierwise/pier"
 	"pierwise/report"
 )
 
@@ -119,7 +120,7 @@ func (a *Analysis) JSON() JSON {
 			Name: w.Name, File: w.Ref.File, Layout: w.Wall.Layouts[w.Wall.Active].Name, Direction: w.Ref.Direction.String(), Position: c(float64(w.Ref.Position)),
 			RigidityRelative: w.Unit.Rigidity, Distance: c(d.Distance[i]),
 			DirectShear: f(w.Design.Direct), DesignShear: f(w.Design.Shear), GoverningCase: CaseName(d, w.Design.Case),
-			Piers: []JSONPierForce{}, Warnings: append([]string{}, w.Loaded.Warnings...),
+			Piers: []JSONPierForce{}, Warnings: append([]string{}, pier.Texts(w.Loaded.Warnings)...),
 		}
 		if a.Absolute {
 			r := tidy(u.RigidityOf(w.Rigidity))

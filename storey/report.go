@@ -161,7 +161,7 @@ func Report(out io.Writer, a *Analysis, now time.Time) error {
 			w.Wrapped("   ", line)
 		}
 		for _, msg := range res.Warnings {
-			w.Wrapped("   ! ", msg)
+			w.Wrapped("   ! ", msg.Text)
 		}
 	}
 

@@ -167,8 +167,8 @@ func Sweep(w *geometry.Wall, name string, axis Axis, step geometry.Length) ([]Po
 func markWeak(pts []Point) {
 	base := map[string]bool{}
 	if i := CurrentIndex(pts); i >= 0 && pts[i].Result != nil {
-		for _, k := range pts[i].Result.WarningKinds {
-			base[k] = true
+		for _, w := range pts[i].Result.Warnings {
+			base[w.Kind] = true
 		}
 	}
 	for i := range pts {
@@ -176,8 +176,8 @@ func markWeak(pts []Point) {
 		if r == nil {
 			continue
 		}
-		for _, k := range r.WarningKinds {
-			if pier.LayoutWarning(k) && !base[k] && !slices.Contains(pts[i].Weak, k) {
+		for _, w := range r.Warnings {
+			if k := w.Kind; pier.LayoutWarning(k) && !base[k] && !slices.Contains(pts[i].Weak, k) {
 				pts[i].Weak = append(pts[i].Weak, k)
 			}
 		}

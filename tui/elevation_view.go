@@ -330,7 +330,7 @@ func (e *elevation) summaryView(l elevLayout) string {
 	if e.res != nil {
 		for _, warn := range e.res.Warnings {
 			lines = append(lines, "")
-			lines = append(lines, wrap("! "+warn, l.sumW)...)
+			lines = append(lines, wrap("! "+warn.Text, l.sumW)...)
 		}
 	}
 	return strings.Join(lines, "\n")

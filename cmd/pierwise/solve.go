@@ -247,7 +247,7 @@ func writeSolveTable(out io.Writer, s *solved) {
 		pierRows(t, r, w)
 	}
 	for _, warn := range r.Warnings {
-		t.Wrapped("  warning: ", warn)
+		t.Wrapped("  warning: ", warn.Text)
 	}
 	writeFETable(t, s)
 }
@@ -441,7 +441,7 @@ func toJSON(s *solved) jsonWall {
 			}
 			j.Piers = append(j.Piers, jp)
 		}
-		j.Warnings = append(j.Warnings, r.Warnings...)
+		j.Warnings = append(j.Warnings, pier.Texts(r.Warnings)...)
 	}
 	if s.fe != nil || s.feErr != nil {
 		f := &jsonFE{Piers: []jsonFEShare{}, Warnings: []string{}}
