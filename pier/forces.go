@@ -42,6 +42,7 @@ func (s *solver) loads(w *geometry.Wall, root *node) (err error) {
 		p.Moment = p.Share * V * arm
 	}
 	r.Overturning = V * (inflection(root.rect, w.Support) - root.rect.Y0)
+	s.shear = V
 	s.lateral(root, V, 0)
 	if !(E > 0 && s.thick > 0) {
 		return nil
@@ -121,6 +122,17 @@ func (s *solver) lateral(n *node, V, N float64) {
 			couple -= float64(p.Shear) * (inflection(p.Rect, p.Support) - ym)
 			dx := (c.rect.X0+c.rect.X1)/2 - xbar
 			inertia += c.rect.W() * dx * dx
+		}
+		if live == 1 && math.Abs(couple) > 1e-9*s.shear*s.height {
+			for _, c := range rw.piers {
+				if !c.dead() {
+					whose := "the wall's overturning moment"
+					if !n.wall {
+						whose = "the moment of pier " + n.name
+					}
+					s.warn(WarnOnePier, SeverityCaution, c.name, fmt.Sprintf("pier %s is the only pier of its band, so no couple of axial forces can carry %s there: it passes through %s as bending beyond the end moments the method gives it (V·h/2 fixed-fixed, V·h cantilever); check %s for the full moment at its height", c.name, whose, c.name, c.name))
+				}
+			}
 		}
 		for _, c := range rw.piers {
 			if c.dead() {

@@ -190,6 +190,7 @@ const (
 	WarnNearEdge     = "opening near base or top"
 	WarnFixedPiers   = "fixed piers"
 	WarnFixedTop     = "fixed top"
+	WarnOnePier      = "one pier in its band"
 )
 
 // LayoutWarning reports whether a warning kind comes from the layout of the

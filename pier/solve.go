@@ -31,6 +31,7 @@ type solver struct {
 	eps    float64 // absolute tolerance, metres
 	thick  float64 // wall thickness, metres (0 when unknown)
 	height float64 // wall height, metres
+	shear  float64 // the wall's shear, N (loads)
 	units  geometry.System
 	ops    []opening // every opening of the active layout
 	res    *Result
