@@ -401,7 +401,10 @@ func TestOnePierBandWarns(t *testing.T) {
 	})
 	// Without a shear there are no forces to warn about.
 	w := wallFt(20, 10, geometry.Cantilever, [4]float64{0, 0, 4, 7})
-	if r, _ := Solve(w); len(r.Warnings) != 0 {
-		t.Errorf("no shear, warnings %q", Texts(r.Warnings))
+	r, _ = Solve(w)
+	for _, w := range r.Warnings {
+		if w.Kind == WarnOnePier {
+			t.Errorf("no shear, yet %q", w.Text)
+		}
 	}
 }
