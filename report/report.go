@@ -129,6 +129,7 @@ func inputs(w *Text, wall *geometry.Wall, res *pier.Result) {
 	} else {
 		w.KV("Load", "none given (relative values only)")
 	}
+	w.KV("Gravity", gravityLine(wall))
 	drift, source, _ := strings.Cut(driftLine(wall.Drift), "\n")
 	w.KV("Drift", drift)
 	if source != "" {
@@ -212,8 +213,8 @@ func pierTable(w *Text, res *pier.Result, wall *geometry.Wall) {
 	t := Table{Head: []string{"pier", "h", "L", "h/L", "support", "R rel"}, Right: []bool{false, true, true, true, false, true}}
 	f := Table{Head: []string{"pier", "share", "bending/shear"}, Right: []bool{false, true, true}}
 	if res.HasLoad {
-		f.Head = append(f.Head, "V "+u.Force, "M "+u.Moment)
-		f.Right = append(f.Right, true, true)
+		f.Head = append(f.Head, "V "+u.Force, "M "+u.Moment, "N "+u.Force)
+		f.Right = append(f.Right, true, true, true)
 	}
 	var cut, nested bool
 	for _, p := range res.Piers {
@@ -227,10 +228,10 @@ func pierTable(w *Text, res *pier.Result, wall *geometry.Wall) {
 		nested = nested || (!p.Leaf && !p.Cut)
 		t.Add(name(p), L(p.H()), L(p.L()), fmt.Sprintf("%.2f", p.Ratio()), supportShort(p.Support), rel)
 		row := []string{name(p), fmt.Sprintf("%.1f %%", 100*p.Share), split}
-		if res.HasLoad && p.Leaf && !p.Cut {
-			row = append(row, fmt.Sprintf("%.2f", u.ForceOf(p.Shear)), fmt.Sprintf("%.2f", u.MomentOf(p.Moment)))
+		if res.HasLoad && !p.Cut {
+			row = append(row, fixed2(u.ForceOf(p.Shear)), fixed2(u.MomentOf(p.Moment)), fixed2(u.ForceOf(p.Loads.Lateral.Middle.Axial)))
 		} else if res.HasLoad {
-			row = append(row, "-", "-")
+			row = append(row, "-", "-", "-")
 		}
 		f.Add(row...)
 	}
@@ -238,14 +239,88 @@ func pierTable(w *Text, res *pier.Result, wall *geometry.Wall) {
 	w.Blank()
 	f.Write(w, "  ")
 	if nested {
-		w.Wrapped("  * ", "pier with openings of its own; its share is split among the piers inside it, which carry the forces.")
+		w.Wrapped("  * ", "pier with openings of its own; its share and forces are those of the whole pier, which the piers inside it share.")
 	}
 	if cut {
 		w.Wrapped("  † ", "pier that its own openings cut: it has no load path, no rigidity and no share.")
 	}
 	if res.HasLoad {
-		w.Wrapped("  ", "M is at the base of a cantilever pier, and at the top and the base (V·h/2) of a fixed pier.")
+		w.Wrapped("  ", "M is at the base of a cantilever pier, and at the top and the base (V·h/2) of a fixed pier. N is the axial force of the overturning, compression positive: the piers of a band act as one section about the centroid of their areas (common practice; docs/method.md §6).")
 	}
+	w.Blank()
+	sectionTable(w, res, wall)
+}
+
+// sectionTable writes every pier's forces at its bottom, middle and top,
+// unfactored, by load case: lateral (V, M, N of the overturning), dead and
+// live (N by tributary width, docs/method.md §6).
+func sectionTable(w *Text, res *pier.Result, wall *geometry.Wall) {
+	u := UnitsFor(wall.Units)
+	w.Wrapped("  ", "Section forces, unfactored, by load case (compression positive; moments positive when they compress the right end):")
+	t := Table{Head: []string{"pier", "section"}, Right: []bool{false, false}}
+	if res.HasLoad {
+		t.Head = append(t.Head, "V "+u.Force, "M "+u.Moment, "N lat")
+		t.Right = append(t.Right, true, true, true)
+	}
+	t.Head = append(t.Head, "N dead", "N live")
+	t.Right = append(t.Right, true, true)
+	for _, p := range res.Piers {
+		if p.Cut {
+			continue
+		}
+		l := p.Loads
+		for i, at := range []struct {
+			name            string
+			lat, dead, live pier.Forces
+		}{
+			{"top", l.Lateral.Top, l.Dead.Top, l.Live.Top},
+			{"middle", l.Lateral.Middle, l.Dead.Middle, l.Live.Middle},
+			{"bottom", l.Lateral.Bottom, l.Dead.Bottom, l.Live.Bottom},
+		} {
+			name := ""
+			if i == 0 {
+				name = strings.Repeat("  ", depth(p.Name)-1) + p.Name
+			}
+			row := []string{name, at.name}
+			if res.HasLoad {
+				row = append(row, fixed2(u.ForceOf(at.lat.Shear)), fixed2(u.MomentOf(at.lat.Moment)), fixed2(u.ForceOf(at.lat.Axial)))
+			}
+			t.Add(append(row, fixed2(u.ForceOf(at.dead.Axial)), fixed2(u.ForceOf(at.live.Axial)))...)
+		}
+	}
+	t.Write(w, "  ")
+	w.Wrapped("  ", fmt.Sprintf("Forces in %s and %s. Dead and live: the line loads on each pier's tributary width (its own width and half of each opening beside it) and the wall's weight above the section in that width (common practice; docs/method.md §6).", u.Force, u.Moment))
+}
+
+// fixed2 prints a force or moment to two decimals, never as -0.00.
+func fixed2(x float64) string {
+	if math.Abs(x) < 0.005 {
+		x = 0
+	}
+	return fmt.Sprintf("%.2f", x)
+}
+
+// gravityLine describes the gravity loads of a wall: the line loads along
+// its top and its self weight, given or by default.
+func gravityLine(wall *geometry.Wall) string {
+	u := UnitsFor(wall.Units)
+	g := wall.Gravity
+	line := func(l geometry.LineLoad) string {
+		return fmt.Sprintf("%s %s/%s", Number(u.ForceOf(geometry.Force(l))/u.CoordOf(1)), u.Force, u.Coord)
+	}
+	s := "dead " + line(g.Dead) + ", live " + line(g.Live) + " along the top; "
+	self, how := g.SelfWeight, "given"
+	switch {
+	case g.NoSelf:
+		return s + "no self weight (set to zero)"
+	case self == 0:
+		self, how = pier.DefaultSelfWeight(wall), "default for the material and thickness"
+	}
+	if wall.Units == geometry.SI {
+		return s + fmt.Sprintf("self weight %s kN/m² of face (%s)", Number(float64(self)/1e3), how)
+	}
+	psf := float64(geometry.Pound) / float64(geometry.Foot*geometry.Foot)
+	return s + fmt.Sprintf("self weight %s lb/ft² of face (%s)", Number(float64(self)/psf), how)
 }
 
 func results(w *Text, res *pier.Result, wall *geometry.Wall, u Units) {
@@ -255,6 +330,13 @@ func results(w *Text, res *pier.Result, wall *geometry.Wall, u Units) {
 		w.KV("Split", fmt.Sprintf("bending %.0f %%, shear %.0f %% of the wall's deflection", 100*res.Split.Bending/d, 100*res.Split.Shear/d))
 	}
 	inUnits(w, wall, u, res.RigidityAbs, res.HasLoad, res.DeflectionAbs, res.Drift)
+	if res.HasLoad {
+		arm := "V·h"
+		if wall.Support == geometry.Fixed {
+			arm = "V·h/2, the top held against rotation"
+		}
+		w.KV("Overturning", fmt.Sprintf("M = %s %s at the base (%s)", Number(u.MomentOf(res.Overturning)), u.Moment, arm))
+	}
 }
 
 // inUnits writes a rigidity (N/m, 0 when the material gives no modulus)

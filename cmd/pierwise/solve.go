@@ -240,12 +240,11 @@ func writeSolveTable(out io.Writer, s *solved) {
 		}
 		t.Line(check)
 	}
-	if len(r.Piers) == 0 {
-		t.Line("  no openings: the wall is one solid pier")
-	} else {
-		t.Blank()
-		pierRows(t, r, w)
+	if r.HasLoad {
+		t.Line(fmt.Sprintf("  overturning moment at the base %s %s", report.Number(u.MomentOf(r.Overturning)), u.Moment))
 	}
+	t.Blank()
+	pierRows(t, r, w)
 	for _, warn := range r.Warnings {
 		t.Wrapped("  warning: ", warn.Text)
 	}
@@ -253,15 +252,17 @@ func writeSolveTable(out io.Writer, s *solved) {
 }
 
 // pierRows writes the pier table of the solve command: * marks a pier with
-// openings of its own (its forces are in the piers inside it), † a pier
-// that its openings cut (no load path).
+// openings of its own (its forces are those of the whole pier, which the
+// piers inside it share), † a pier that its openings cut (no load path).
+// N is the axial force of the band's overturning couple (compression
+// positive).
 func pierRows(t *report.Text, r *pier.Result, w *geometry.Wall) {
 	u := report.UnitsFor(w.Units)
 	L := func(x float64) string { return geometry.FormatLength(geometry.Length(x), w.Units) }
 	tab := report.Table{Head: []string{"pier", "h", "L", "h/L", "support", "R rel", "share"}, Right: []bool{false, true, true, true, false, true, true}}
 	if r.HasLoad {
-		tab.Head = append(tab.Head, "V "+u.Force, "M "+u.Moment)
-		tab.Right = append(tab.Right, true, true)
+		tab.Head = append(tab.Head, "V "+u.Force, "M "+u.Moment, "N "+u.Force)
+		tab.Right = append(tab.Right, true, true, true)
 	}
 	for _, p := range r.Piers {
 		name, rel := p.Name, fmt.Sprintf("%.4f", p.Rigidity)
@@ -272,10 +273,10 @@ func pierRows(t *report.Text, r *pier.Result, w *geometry.Wall) {
 			name += "*"
 		}
 		row := []string{name, L(p.H()), L(p.L()), fmt.Sprintf("%.2f", p.Ratio()), supportWord(p.Support), rel, fmt.Sprintf("%.1f%%", 100*p.Share)}
-		if r.HasLoad && p.Leaf && !p.Cut {
-			row = append(row, fmt.Sprintf("%.2f", u.ForceOf(p.Shear)), fmt.Sprintf("%.2f", u.MomentOf(p.Moment)))
+		if r.HasLoad && !p.Cut {
+			row = append(row, fmt.Sprintf("%.2f", u.ForceOf(p.Shear)), fmt.Sprintf("%.2f", u.MomentOf(p.Moment)), fmt.Sprintf("%.2f", u.ForceOf(p.Loads.Lateral.Middle.Axial)))
 		} else if r.HasLoad {
-			row = append(row, "-", "-")
+			row = append(row, "-", "-", "-")
 		}
 		tab.Add(row...)
 	}
@@ -328,6 +329,7 @@ type jsonWall struct {
 	Rigidity           *float64   `json:"rigidity,omitempty"`
 	Deflection         *float64   `json:"deflection,omitempty"`
 	Shear              *float64   `json:"shear,omitempty"`
+	Overturning        *float64   `json:"overturning,omitempty"`
 	Drift              *jsonDrift `json:"drift,omitempty"`
 	Piers              []jsonPier `json:"piers"`
 	Warnings           []string   `json:"warnings"`
@@ -351,22 +353,53 @@ type jsonDrift struct {
 }
 
 type jsonPier struct {
-	Name             string   `json:"name"`
-	Parent           string   `json:"parent,omitempty"`
-	X0               float64  `json:"x0"`
-	X1               float64  `json:"x1"`
-	Y0               float64  `json:"y0"`
-	Y1               float64  `json:"y1"`
-	H                float64  `json:"h"`
-	L                float64  `json:"l"`
-	Support          string   `json:"support"`
-	RigidityRelative float64  `json:"rigidity_relative"`
-	Share            float64  `json:"share"`
-	Leaf             bool     `json:"leaf"`
-	Cut              bool     `json:"cut,omitempty"`
-	BendingFraction  float64  `json:"bending_fraction"`
-	Shear            *float64 `json:"shear,omitempty"`
-	Moment           *float64 `json:"moment,omitempty"`
+	Name             string      `json:"name"`
+	Parent           string      `json:"parent,omitempty"`
+	X0               float64     `json:"x0"`
+	X1               float64     `json:"x1"`
+	Y0               float64     `json:"y0"`
+	Y1               float64     `json:"y1"`
+	H                float64     `json:"h"`
+	L                float64     `json:"l"`
+	Support          string      `json:"support"`
+	RigidityRelative float64     `json:"rigidity_relative"`
+	Share            float64     `json:"share"`
+	Leaf             bool        `json:"leaf"`
+	Cut              bool        `json:"cut,omitempty"`
+	BendingFraction  float64     `json:"bending_fraction"`
+	Shear            *float64    `json:"shear,omitempty"`
+	Moment           *float64    `json:"moment,omitempty"`
+	Forces           *jsonForces `json:"forces,omitempty"`
+}
+
+// jsonForces are a pier's section forces (docs/method.md §6), unfactored,
+// per load case: the lateral shear and moment with the axial force of the
+// overturning, and the axial forces of the dead and live loads
+// (compression positive).
+type jsonForces struct {
+	Bottom jsonSection `json:"bottom"`
+	Middle jsonSection `json:"middle"`
+	Top    jsonSection `json:"top"`
+}
+
+type jsonSection struct {
+	Shear        float64 `json:"shear"`
+	Moment       float64 `json:"moment"`
+	AxialLateral float64 `json:"axial_lateral"`
+	AxialDead    float64 `json:"axial_dead"`
+	AxialLive    float64 `json:"axial_live"`
+}
+
+func sectionsJSON(l pier.PierLoads, u report.Units) *jsonForces {
+	at := func(lat, dead, live pier.Forces) jsonSection {
+		return jsonSection{Shear: u.ForceOf(lat.Shear), Moment: u.MomentOf(lat.Moment),
+			AxialLateral: u.ForceOf(lat.Axial), AxialDead: u.ForceOf(dead.Axial), AxialLive: u.ForceOf(live.Axial)}
+	}
+	return &jsonForces{
+		Bottom: at(l.Lateral.Bottom, l.Dead.Bottom, l.Live.Bottom),
+		Middle: at(l.Lateral.Middle, l.Dead.Middle, l.Live.Middle),
+		Top:    at(l.Lateral.Top, l.Dead.Top, l.Live.Top),
+	}
 }
 
 type jsonFE struct {
@@ -419,6 +452,7 @@ func toJSON(s *solved) jsonWall {
 		}
 		if r.HasLoad {
 			j.Shear = ptr(u.ForceOf(w.Load.Shear))
+			j.Overturning = ptr(u.MomentOf(r.Overturning))
 			j.Deflection = ptr(u.DeflectionOf(r.DeflectionAbs))
 			d := &jsonDrift{Design: u.DeflectionOf(r.Drift.Design), Ratio: r.Drift.Ratio, OK: r.Drift.OK}
 			if r.Drift.Allowable > 0 {
@@ -436,8 +470,11 @@ func toJSON(s *solved) jsonWall {
 			if d := p.Parts.Total(); d > 0 {
 				jp.BendingFraction = p.Parts.Bending / d
 			}
-			if r.HasLoad && p.Leaf {
+			if r.HasLoad && !p.Cut {
 				jp.Shear, jp.Moment = ptr(u.ForceOf(p.Shear)), ptr(u.MomentOf(p.Moment))
+			}
+			if !p.Cut {
+				jp.Forces = sectionsJSON(p.Loads, u)
 			}
 			j.Piers = append(j.Piers, jp)
 		}
