@@ -1,7 +1,8 @@
 // Package pier computes the lateral rigidity of a masonry or concrete shear
-// wall with openings by the classic hand method of DESIGN §3, and with it
-// the share of the wall shear that each pier carries, the pier shears and
-// moments, the wall's top deflection and the storey-drift check.
+// wall with openings by the classic hand method of docs/method.md §2, and
+// with it the share of the wall shear that each pier carries, the forces of
+// every pier (docs/method.md §6), the wall's top deflection and the
+// storey-drift check.
 //
 // # What is computed
 //
@@ -10,16 +11,27 @@
 // (d = r³/kf + 1.2r/(g·kv)), r = h/L, split into bending and shear. These are
 // Timoshenko beams with shear coefficient 5/6.
 //
-// Solve decomposes the active layout of a wall: start from the solid wall,
+// Solve decomposes the active layout of a wall as a tree of regions (the
+// wall, and every pier with openings inside it), built first and computed
+// from the leaves up: start from the solid wall,
 // and for each band (merged vertical projection of the openings) remove the
 // solid strip and put back the band's piers in parallel; a pier with an
 // opening inside is decomposed the same way one level down. Bands that
 // reach the top of a cantilever region are cantilevers; every other band is
 // fixed-fixed. The result holds the working (Steps), every pier (Piers:
-// names P1, P2, … left to right, lowest band first; P2.1 inside P2), the
-// wall's relative deflection and rigidity and their bending/shear split,
-// and, when the material and the load are given, the rigidity in N/m, the
-// top deflection, pier forces and the drift check.
+// names P1, P2, … left to right, lowest band first; P2.1 inside P2; a wall
+// with no opening is the one pier P1), the wall's relative deflection and
+// rigidity and their bending/shear split, the warnings (one typed list:
+// kind, severity, subject, text), and, when the material and the load are
+// given, the rigidity in N/m, the top deflection and the drift check.
+//
+// Every pier, parents included, gets its section forces at its bottom,
+// middle and top (Pier.Loads) under the lateral load (V = share × V, the
+// moment of its support, the axial force of its band's overturning
+// couple), the dead load and the live load (axial forces by tributary
+// width, with the wall's self weight above each section; DefaultSelfWeight
+// when the file gives none). Result.Overturning is the wall's base
+// overturning moment.
 //
 // MaterialModuli turns a material into E and E_v by TMS 402 (masonry) or
 // ACI 318 (concrete), with the user's overrides, and says where each value
@@ -47,6 +59,11 @@
 //   - A mirrored wall gives mirrored piers and shares; scaling every length
 //     leaves every relative value and share unchanged.
 //   - Deflection = Split.Bending + Split.Shear.
+//   - In every band with two piers or more, at each of its piers' sections,
+//     the lateral shears add up to the region's shear, the lateral axial
+//     forces to the region's (zero for the wall), and Σ(M_i + N_i·(x_i − x̄))
+//     to the region's moment about the piers' centroid x̄; the dead loads of
+//     a wall band add up to the line load on the wall and the weight above.
 //
 // # Assumptions (the method's, not the code's)
 //

@@ -8,7 +8,7 @@ import (
 	"pierwise/geometry"
 )
 
-// Default element parameters (DESIGN §3, §4): E_v = 0.4 E and gross-section
+// Default element parameters (docs/method.md §2, §3): E_v = 0.4 E and gross-section
 // stiffness.
 const (
 	DefaultG  = 0.4
@@ -58,7 +58,7 @@ func (p Params) validate() error {
 
 // Element returns the relative deflection (E = 1, t = 1, V = 1) of a solid
 // rectangular element of height h and length l, split into bending and
-// shear (DESIGN §3), with r = h/l:
+// shear (docs/method.md §2), with r = h/l:
 //
 //	cantilever:  d = 4·r³/kf + 1.2·r/(g·kv)
 //	fixed-fixed: d =   r³/kf + 1.2·r/(g·kv)
@@ -93,7 +93,7 @@ func ParamsFor(w *geometry.Wall, m Moduli) Params {
 	return p
 }
 
-// Sources of the modulus rules (DESIGN §4).
+// Sources of the modulus rules (docs/method.md §2.1).
 const (
 	srcTMS     = "TMS 402 §1.8.2.2"
 	srcACI     = "ACI 318 §19.2.2.1"
@@ -107,7 +107,7 @@ func MaterialModuli(m geometry.Material) (Moduli, error) {
 	return MaterialModuliFor(m, geometry.US)
 }
 
-// MaterialModuliFor returns E and E_v of a material (DESIGN §4):
+// MaterialModuliFor returns E and E_v of a material (docs/method.md §3):
 //
 //   - concrete masonry E_m = 900 f'm, clay masonry E_m = 700 f'm, E_v = 0.4 E_m
 //     (TMS 402 §1.8.2.2);

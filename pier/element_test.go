@@ -15,7 +15,7 @@ func near(got, want, rel float64) bool {
 }
 
 func TestElementFormulas(t *testing.T) {
-	// Hand arithmetic of DESIGN §3: cantilever d = 4r³ + 3r, fixed-fixed
+	// Hand arithmetic of docs/method.md §2: cantilever d = 4r³ + 3r, fixed-fixed
 	// d = r³ + 3r with the defaults (g = 0.4, kf = kv = 1), r = h/L.
 	tests := []struct {
 		h, l     float64
@@ -60,7 +60,7 @@ func TestSquatWallIsMostlyShear(t *testing.T) {
 }
 
 func TestBendingShearCrossover(t *testing.T) {
-	// DESIGN §4: bending equals shear at h/L = √0.75 for the cantilever
+	// docs/method.md §2.1: bending equals shear at h/L = √0.75 for the cantilever
 	// formula (4r³ = 3r) and at h/L = √3 for fixed-fixed (r³ = 3r); below
 	// it shear governs, above it bending.
 	for _, tc := range []struct {
@@ -82,7 +82,7 @@ func TestElementIsTimoshenkoBeam(t *testing.T) {
 	// Gere & Timoshenko, Mechanics of Materials: a cantilever deflects
 	// V·h³/(3EI) + V·h/(κ·G·A), a beam fixed at the base and guided at the
 	// top V·h³/(12EI) + V·h/(κ·G·A); rectangle I = t·L³/12, A = t·L,
-	// κ = 5/6, and G = 0.4 E (DESIGN §4). Element times V/(E·t) must agree.
+	// κ = 5/6, and G = 0.4 E (docs/method.md §2.1). Element times V/(E·t) must agree.
 	const (
 		E  = 12.4e9 // Pa (invented, any positive value)
 		th = 0.19   // m

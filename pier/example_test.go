@@ -7,7 +7,7 @@ import (
 	"pierwise/pier"
 )
 
-// The Masonry Chronicles wall with a nested opening (DESIGN §3): the
+// The Masonry Chronicles wall with a nested opening (docs/method.md §2): the
 // published answer is 7.614 (exact arithmetic 7.607) and R = 0.131.
 func ExampleSolve() {
 	ft := geometry.Foot

@@ -188,7 +188,7 @@ func TestDoorAndWindowForces(t *testing.T) {
 	})
 }
 
-// The nested wall of Masonry Chronicles (DESIGN §3 geometry): 18 ft × 16 ft
+// The nested wall of Masonry Chronicles (docs/method.md §2.5 geometry): 18 ft × 16 ft
 // cantilever, door D1 x 4–8 ft, 0–8 ft; window W1 x 12–16 ft, 2–6 ft. P1
 // (0–4 ft) and P2 (8–18 ft) in the band [0, 8]; P2.1 (8–12 ft) and P2.2
 // (16–18 ft) in P2's band [2, 6]. V = 10 kip, D = 1 kip/ft, 80 lb/ft².

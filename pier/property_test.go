@@ -10,7 +10,7 @@ import (
 	"pierwise/geometry"
 )
 
-// Invariants of the classic method (STYLE.md, DESIGN §3) over seeded random
+// Invariants of the classic method (docs/method.md §2) over seeded random
 // layouts on a 2 ft grid, so that openings often touch, line up and nest.
 
 const walls = 3000 // random walls per property

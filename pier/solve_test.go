@@ -29,8 +29,8 @@ func wallFt(l, h float64, sup geometry.Support, ops ...[4]float64) *geometry.Wal
 
 func solidWall(l, h float64, sup geometry.Support) *geometry.Wall { return wallFt(l, h, sup) }
 
-// chronicles is the Masonry Chronicles wall with a nested opening (DESIGN
-// §3): 18 ft × 16 ft cantilever, door 4 ft × 8 ft at 4 ft, window 4 ft × 4 ft
+// chronicles is the Masonry Chronicles wall with a nested opening
+// (docs/method.md §2.5): 18 ft × 16 ft cantilever, door 4 ft × 8 ft at 4 ft, window 4 ft × 4 ft
 // with its sill at 2 ft at 12 ft.
 func chronicles() *geometry.Wall {
 	w := wallFt(18, 16, geometry.Cantilever, [4]float64{4, 0, 4, 8}, [4]float64{12, 2, 4, 4})
@@ -52,7 +52,7 @@ func TestMasonryChroniclesNestedOpening(t *testing.T) {
 	// Masonry Chronicles (Concrete Masonry Association of California and
 	// Nevada), wall with a nested opening, printed in units of 1/(E t):
 	// solid 5.476, strip 1.421, piers 3.559, wall 7.614, R = 0.131. Exact
-	// arithmetic gives 7.607; the printed figures carry rounding (DESIGN §3).
+	// arithmetic gives 7.607; the printed figures carry rounding (docs/method.md §2).
 	r, err := Solve(chronicles())
 	if err != nil {
 		t.Fatal(err)
@@ -156,7 +156,7 @@ func TestSolidWallIsTheFormula(t *testing.T) {
 
 func TestTwoStoreysOfWindowsAreNamedLowestBandFirst(t *testing.T) {
 	// 30 ft × 20 ft, two rows of two windows: piers of the lower band are
-	// P1–P3 left to right, those of the upper band P4–P6 (DESIGN §3).
+	// P1–P3 left to right, those of the upper band P4–P6 (docs/method.md §2).
 	w := wallFt(30, 20, geometry.Cantilever,
 		[4]float64{17, 12, 4, 4}, [4]float64{5, 12, 4, 4}, // upper row first, to check the sort
 		[4]float64{5, 3, 4, 4}, [4]float64{17, 3, 4, 4})
@@ -329,7 +329,7 @@ func TestForcesAndDrift(t *testing.T) {
 	var sum float64
 	for _, p := range r.Leaves() {
 		sum += float64(p.Shear)
-		// DESIGN §3: M = V·h/2 for fixed-fixed piers.
+		// docs/method.md §2: M = V·h/2 for fixed-fixed piers.
 		if want := p.Share * V * p.H() / 2; !near(p.Moment, want, 1e-12) {
 			t.Errorf("%s: M = %g, want %g", p.Name, p.Moment, want)
 		}
@@ -410,7 +410,7 @@ func TestWarnings(t *testing.T) {
 }
 
 func TestKnownCaseNewOpeningMakesWallStiffer(t *testing.T) {
-	// Documented behaviour of the classic rules (DESIGN §3), kept on
+	// Documented behaviour of the classic rules (docs/method.md §2), kept on
 	// purpose: 10 ft × 10 ft cantilever with windows W1 (x 2–4 ft, y 2–4 ft)
 	// and W2 (x 6–8 ft, y 3–6 ft) staggered in one band [2, 6]. No window
 	// spans the band, so both are cuts and the piers (0–2, 4–6, 8–10 ft)
@@ -490,7 +490,7 @@ func TestExtremeProportionsAreErrorsNotInf(t *testing.T) {
 }
 
 // A full-height opening leaves a solid path on each side of it: §3 solves
-// the wall as the two parts side by side. Hand arithmetic (DESIGN §3
+// the wall as the two parts side by side. Hand arithmetic (docs/method.md §2
 // formulas): each part is 8 ft long and 10 ft high, r = 1.25.
 func TestFullHeightOpenings(t *testing.T) {
 	tests := []struct {

@@ -12,7 +12,7 @@ import (
 // solid wall above it, up to the next opening or the wall's top: the cut at
 // the pier's top is a line of the method, not an edge of the masonry.
 func TestNestedSpandrelMeasuredToTheNextOpening(t *testing.T) {
-	// Masonry Chronicles wall (DESIGN §3): the window W1 (head at 6 ft) sits
+	// Masonry Chronicles wall (docs/method.md §2): the window W1 (head at 6 ft) sits
 	// in pier P2 (0–8 ft) of a 16 ft wall, so 10 ft of wall lie over it,
 	// more than the 4 ft height of the piers beside it: no warning. Before
 	// the fix only the 2 ft inside P2 counted (ratio 0.50).
@@ -88,7 +88,7 @@ func TestSlenderSolidWall(t *testing.T) {
 	}
 }
 
-// DESIGN §4: E_v given as Poisson's ratio, E_v = E/(2(1+ν)) (isotropic
+// docs/method.md §3: E_v given as Poisson's ratio, E_v = E/(2(1+ν)) (isotropic
 // elasticity, Gere & Timoshenko, Mechanics of Materials). For concrete with
 // ν = 0.2, E_v = E/2.4, so a cantilever of h/L = 0.5 deflects 4·0.125 +
 // 1.2·0.5·2.4 = 1.94 (instead of 2.0 with E_v = 0.4 E); f'c = 4000 psi
