@@ -198,23 +198,22 @@ func (s *solver) gravity(n *node, t0, t1 float64, g gravityLoad) {
 		return
 	}
 	for _, rw := range n.rows {
-		var live []*node
-		for _, c := range rw.piers {
-			if !c.dead() {
-				live = append(live, c)
+		a := t0 // the left end of the next live pier's strip
+		for i, c := range rw.piers {
+			if c.dead() {
+				continue
 			}
-		}
-		for i, c := range live {
-			a, b := t0, t1
-			if i > 0 {
-				a = (live[i-1].rect.X1 + c.rect.X0) / 2
-			}
-			if i+1 < len(live) {
-				b = (c.rect.X1 + live[i+1].rect.X0) / 2
+			b := t1
+			for _, next := range rw.piers[i+1:] {
+				if !next.dead() {
+					b = (c.rect.X1 + next.rect.X0) / 2
+					break
+				}
 			}
 			p := &r.Piers[c.pier]
 			p.Loads.Dead, p.Loads.Live = s.gravitySections(c.rect, a, b, g)
 			s.gravity(c, a, b, g)
+			a = b
 		}
 	}
 }
@@ -222,30 +221,41 @@ func (s *solver) gravity(n *node, t0, t1 float64, g gravityLoad) {
 // gravitySections returns the dead and live axial forces at the bottom,
 // middle and top of a pier with the tributary strip [a, b].
 func (s *solver) gravitySections(rect geometry.Rect, a, b float64, g gravityLoad) (dead, live Sections) {
-	axial := func(N float64) Forces { return Forces{Axial: geometry.Force(N)} }
-	at := func(y float64) (Forces, Forces) {
-		return axial(g.dead*(b-a) + g.self*s.faceAbove(a, b, y)), axial(g.live * (b - a))
+	ys := [3]float64{rect.Y0, (rect.Y0 + rect.Y1) / 2, rect.Y1}
+	var area [3]float64
+	if g.self != 0 {
+		area = s.faceAbove(a, b, ys)
 	}
-	dead.Bottom, live.Bottom = at(rect.Y0)
-	dead.Middle, live.Middle = at((rect.Y0 + rect.Y1) / 2)
-	dead.Top, live.Top = at(rect.Y1)
+	line := func(w float64) geometry.Force { return geometry.Force(w * (b - a)) }
+	dead.Bottom.Axial = line(g.dead) + geometry.Force(g.self*area[0])
+	dead.Middle.Axial = line(g.dead) + geometry.Force(g.self*area[1])
+	dead.Top.Axial = line(g.dead) + geometry.Force(g.self*area[2])
+	live.Bottom.Axial, live.Middle.Axial, live.Top.Axial = line(g.live), line(g.live), line(g.live)
 	return dead, live
 }
 
 // faceAbove returns the solid face area of the wall between x = a and
-// x = b above the height y: the strip less the openings in it.
-func (s *solver) faceAbove(a, b, y float64) float64 {
-	h := s.height - y
-	if h <= 0 || b <= a {
-		return 0
+// x = b above each height in ys: the strip less the openings in it.
+func (s *solver) faceAbove(a, b float64, ys [3]float64) (area [3]float64) {
+	if b <= a {
+		return area
 	}
-	area := (b - a) * h
+	for k, y := range ys {
+		area[k] = (b - a) * math.Max(s.height-y, 0)
+	}
 	for _, o := range s.ops {
+		if o.r.X1 <= a || o.r.X0 >= b {
+			continue
+		}
 		dx := math.Min(b, o.r.X1) - math.Max(a, o.r.X0)
-		dy := o.r.Y1 - math.Max(y, o.r.Y0)
-		if dx > 0 && dy > 0 {
-			area -= dx * dy
+		for k, y := range ys {
+			if dy := o.r.Y1 - math.Max(y, o.r.Y0); dy > 0 {
+				area[k] -= dx * dy
+			}
 		}
 	}
-	return math.Max(area, 0)
+	for k := range area {
+		area[k] = math.Max(area[k], 0)
+	}
+	return area
 }
