@@ -50,7 +50,7 @@
 //
 //   - A Result never holds NaN or Inf. A wall that the openings cut (no
 //     solid path from base to top) is a *CutError; a full-height opening
-//     leaves two cantilever piers side by side, which §3 solves as it
+//     leaves two cantilever piers side by side, which docs/method.md §2.2 solves as it
 //     stands; a band with no pier is a *StaggeredError;
 //     sizes that are not positive and finite are plain errors.
 //   - The BandShare of the piers of one band sum to one; a pier's Share is

@@ -42,7 +42,7 @@ type Step struct {
 
 	// AllCuts is set on a StepPiers step whose band has no opening that
 	// spans its full height: every opening was taken as a cut and every
-	// pier as the band's full height (§3), a conservative reading of
+	// pier as the band's full height (docs/method.md §2.2), a conservative reading of
 	// staggered openings.
 	AllCuts bool
 }

@@ -77,7 +77,7 @@ type row struct {
 func (n *node) dead() bool { return n.cutBy != "" || n.noPath }
 
 // build makes the region's subtree: its bands and their piers, named, each
-// pier built in turn (§3 steps 2–3 without the arithmetic). A band with no
+// pier built in turn (docs/method.md §2.2, steps 2–3 without the arithmetic). A band with no
 // pier is a *StaggeredError.
 func (s *solver) build(n *node) error {
 	if len(n.ops) == 0 {
@@ -128,7 +128,7 @@ func (s *solver) build(n *node) error {
 	return nil
 }
 
-// compute returns the region's relative deflection (§3 steps 1, 3, 4),
+// compute returns the region's relative deflection (docs/method.md §2.2, steps 1, 3, 4),
 // its piers' first. A region whose band has no pier with a load path is
 // marked noPath.
 func (s *solver) compute(n *node) (Parts, error) {
