@@ -157,26 +157,22 @@ type gravityLoad struct {
 }
 
 // gravityLoads reads the wall's gravity settings, with the default self
-// weight when none is given (docs/method.md §6).
+// weight when none is given (SelfWeightOf; docs/method.md §6).
 func (s *solver) gravityLoads(w *geometry.Wall) (gravityLoad, error) {
-	g := gravityLoad{dead: float64(w.Gravity.Dead), live: float64(w.Gravity.Live), self: float64(w.Gravity.SelfWeight)}
+	g := gravityLoad{dead: float64(w.Gravity.Dead), live: float64(w.Gravity.Live)}
 	for _, v := range []struct {
 		what string
 		v    float64
-	}{{"dead load", g.dead}, {"live load", g.live}, {"self weight", g.self}} {
+	}{{"dead load", g.dead}, {"live load", g.live}} {
 		if math.IsNaN(v.v) || math.IsInf(v.v, 0) || v.v < 0 {
-			return g, fmt.Errorf("pier: the %s must be zero or positive, got %g", v.what, v.v)
+			return g, fmt.Errorf("pier: the %s must be zero or positive, got %g N/m", v.what, v.v)
 		}
 	}
-	switch {
-	case w.Gravity.NoSelf:
-		g.self = 0
-	case g.self == 0:
-		g.self = float64(DefaultSelfWeight(w))
-		if math.IsNaN(g.self) || math.IsInf(g.self, 0) || g.self < 0 {
-			g.self = 0
-		}
+	sw, err := SelfWeightOf(w)
+	if err != nil {
+		return g, err
 	}
+	g.self = float64(sw.Weight)
 	return g, nil
 }
 

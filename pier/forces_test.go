@@ -85,7 +85,7 @@ func TestSelfWeightDefault(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	sw := float64(DefaultSelfWeight(w))
+	sw := float64(DefaultSelfWeight(w).Weight)
 	if !(sw > 0) {
 		t.Fatalf("default self weight %g", sw)
 	}

@@ -309,18 +309,19 @@ func gravityLine(wall *geometry.Wall) string {
 		return fmt.Sprintf("%s %s/%s", Number(u.ForceOf(geometry.Force(l))/u.CoordOf(1)), u.Force, u.Coord)
 	}
 	s := "dead " + line(g.Dead) + ", live " + line(g.Live) + " along the top; "
-	self, how := g.SelfWeight, "given"
+	sw, err := pier.SelfWeightOf(wall)
 	switch {
-	case g.NoSelf:
-		return s + "no self weight (set to zero)"
-	case self == 0:
-		self, how = pier.DefaultSelfWeight(wall), "default for the material and thickness"
+	case err != nil:
+		return s + "self weight not valid"
+	case sw.Weight == 0:
+		return s + "no self weight: " + sw.Source
 	}
+	how := sw.Source
 	if wall.Units == geometry.SI {
-		return s + fmt.Sprintf("self weight %s kN/m² of face (%s)", Number(float64(self)/1e3), how)
+		return s + fmt.Sprintf("self weight %s kN/m² of face (%s)", Number(float64(sw.Weight)/1e3), how)
 	}
 	psf := float64(geometry.Pound) / float64(geometry.Foot*geometry.Foot)
-	return s + fmt.Sprintf("self weight %s lb/ft² of face (%s)", Number(float64(self)/psf), how)
+	return s + fmt.Sprintf("self weight %s lb/ft² of face (%s)", Number(float64(sw.Weight)/psf), how)
 }
 
 func results(w *Text, res *pier.Result, wall *geometry.Wall, u Units) {
