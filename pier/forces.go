@@ -118,7 +118,7 @@ func (s *solver) lateral(n *node, V, N float64) {
 				continue
 			}
 			live++
-			p := r.Piers[c.pier]
+			p := &r.Piers[c.pier]
 			couple -= float64(p.Shear) * (inflection(p.Rect, p.Support) - ym)
 			dx := (c.rect.X0+c.rect.X1)/2 - xbar
 			inertia += c.rect.W() * dx * dx
