@@ -200,7 +200,8 @@ func usesAllCuts(r *Result) bool {
 }
 
 func TestPropertyNoNaNAnywhere(t *testing.T) {
-	solved(t, 5, func(w *geometry.Wall, r *Result) {
+	solved(t, 5, func(w *geometry.Wall, _ *Result) {
+		// The same wall again with a material, a load and a drift limit.
 		w.Material = geometry.Material{Kind: geometry.ClayMasonry, Strength: 2500 * geometry.PSI}
 		w.Load.Shear = 25 * geometry.Kip
 		w.Drift = geometry.Drift{Cd: 2, Limit: 0.007}
