@@ -36,8 +36,17 @@ func (s *wallSheet) side(d *doc, in WallInput, m stressMap) {
 	d.text(x+13, y+3.5, 2.5, "opening (tag: name, width × height)", "start")
 	y += 9
 	d.close("g")
-	y = s.pierTable(d, x, y, w, in, bot-34)
-	s.notes(d, x, y+2, w, in, bot-24)
+	notes := s.noteLines(in, w)
+	y = s.pierTable(d, x, y, w, in, bot-26-3.1*float64(len(notes)))
+	d.open("g", "id", "notes", "font-family", fontFamily, "fill", inkColour)
+	y += 2
+	for _, l := range notes {
+		if l != "" {
+			d.text(x, y, 2.3, l, "start")
+		}
+		y += 3.1
+	}
+	d.close("g")
 	d.scaleBar(x, bot-14, w-12, s.sys, s.sc)
 }
 
@@ -199,30 +208,25 @@ func (s *wallSheet) pierTable(d *doc, x, y, w float64, in WallInput, maxY float6
 	return y + 1
 }
 
-// notes says how to read the sheet.
-func (s *wallSheet) notes(d *doc, x, y, w float64, in WallInput, maxY float64) {
+// noteLines says how to read the sheet, wrapped to w mm.
+func (s *wallSheet) noteLines(in WallInput, w float64) []string {
 	wall := in.Wall
 	support := "Cantilever: fixed base, free top."
 	if wall.Support == geometry.Fixed {
 		support = "Fixed-fixed: fixed base, top held from rotating (dashed line)."
 	}
-	notes := []string{
-		support + " V acts toward the right at the top.",
-		"Pier moments: V·h at the base of a cantilever pier, V·h/2 at each end of a fixed-fixed pier.",
+	var notes []string
+	if s.unlabelled > 0 {
+		notes = append(notes, fmt.Sprintf("%d piers too small at this scale for a label are in the table only.", s.unlabelled))
 	}
+	notes = append(notes, support+" V acts toward the right at the top.",
+		"Pier moments: V·h at the base of a cantilever pier, V·h/2 at each end of a fixed-fixed pier.")
 	if wall.Units == geometry.SI {
 		notes = append(notes, "Dimensions in millimetres.")
 	}
-	d.open("g", "id", "notes", "font-family", fontFamily, "fill", inkColour)
+	var lines []string
 	for _, n := range notes {
-		for _, l := range wrap(n, 2.3, w) {
-			if y > maxY {
-				d.close("g")
-				return
-			}
-			d.text(x, y, 2.3, l, "start")
-			y += 3.1
-		}
+		lines = append(lines, wrap(n, 2.3, w)...)
 	}
-	d.close("g")
+	return lines
 }

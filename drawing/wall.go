@@ -104,6 +104,8 @@ type wallSheet struct {
 	ox, oy float64 // wall's bottom-left corner on the sheet
 	ww, hh float64 // wall's size on the sheet
 	sys    geometry.System
+
+	unlabelled int // piers too small at this scale for a label
 }
 
 func (s *wallSheet) at(x, y float64) (float64, float64) { return s.ox + x*s.k, s.oy - y*s.k }
@@ -354,21 +356,21 @@ func (s *wallSheet) hChain(d *doc, xs []float64, y, from float64) {
 	p.move(px[0]-1.5, y)
 	p.line(px[len(px)-1]+1.5, y)
 	d.el("path", "d", p.String(), "fill", "none", "stroke", inkColour, "stroke-width", "0.18")
-	lastEnd := math.Inf(-1)
+	// A number goes above the line when it fits its segment, else under
+	// it, else (a crowded chain at a small scale) it is left out rather
+	// than printed over its neighbour.
+	above, below := math.Inf(-1), math.Inf(-1) // right end of the last text
 	for i := 1; i < len(xs); i++ {
 		t := dimText(xs[i]-xs[i-1], s.sys)
 		mid := (px[i] + px[i-1]) / 2
 		tw := textWidth(t, dimFont)
-		ty := y - 1
-		if tw > px[i]-px[i-1]-1 || mid-tw/2 < lastEnd+1 {
-			ty = y + 1 + dimFont // too tight: under the line
-			if mid-tw/2 < lastEnd+1 {
-				ty = y - 1
-			}
-		}
-		d.text(mid, ty, dimFont, t, "middle")
-		if ty < y {
-			lastEnd = mid + tw/2
+		switch {
+		case tw <= px[i]-px[i-1]-0.6 && mid-tw/2 > above+0.8:
+			d.text(mid, y-1, dimFont, t, "middle")
+			above = mid + tw/2
+		case mid-tw/2 > below+0.8 && mid-tw/2 > above+0.8-tw:
+			d.text(mid, y+1+dimFont, dimFont, t, "middle")
+			below = mid + tw/2
 		}
 	}
 }
@@ -387,16 +389,22 @@ func (s *wallSheet) vChain(d *doc, ys []float64, x, from float64) {
 	p.move(x, py[0]+1.5)
 	p.line(x, py[len(py)-1]-1.5)
 	d.el("path", "d", p.String(), "fill", "none", "stroke", inkColour, "stroke-width", "0.18")
-	lastEnd := math.Inf(1) // sheet y of the top of the last text above the line
+	// As hChain: beside the line toward the wall when the number fits,
+	// else on the far side, else left out. Sheet y grows downward, so the
+	// chain is walked upward and "end" is the top of the last text.
+	near, far := math.Inf(1), math.Inf(1)
 	for i := 1; i < len(ys); i++ {
 		t := dimText(ys[i]-ys[i-1], s.sys)
 		mid := (py[i] + py[i-1]) / 2
 		tw := textWidth(t, dimFont)
-		tx := x - 1
-		if tw > py[i-1]-py[i]-1 || mid+tw/2 > lastEnd-1 {
-			tx = x + 1 + dimFont
-		} else {
-			lastEnd = mid - tw/2
+		tx := 0.0
+		switch {
+		case tw <= py[i-1]-py[i]-0.6 && mid+tw/2 < near-0.8:
+			tx, near = x-1, mid-tw/2
+		case mid+tw/2 < far-0.8:
+			tx, far = x+1+dimFont, mid-tw/2
+		default:
+			continue
 		}
 		d.text(tx, mid, dimFont, t, "middle", "transform", "rotate(-90 "+num(tx)+" "+num(mid)+")")
 	}
@@ -421,13 +429,16 @@ func (s *wallSheet) openingTags(d *doc, w *geometry.Wall) {
 		if name == "" {
 			name = "(opening)"
 		}
-		hgt := (r.Y1 - r.Y0) * s.k
-		if hgt < 8 {
+		wid, hgt := (r.X1-r.X0)*s.k, (r.Y1-r.Y0)*s.k
+		switch {
+		case hgt >= 8 && textWidth(size, 2.3) <= wid+4 && textWidth(name, 3) <= wid:
+			d.text(cx, cy-0.4, 3, name, "middle", "font-weight", "bold")
+			d.text(cx, cy+3.2, 2.3, size, "middle")
+		case hgt >= 3.5 && textWidth(name, 2.6) <= wid:
 			d.text(cx, cy+1.1, 2.6, name, "middle", "font-weight", "bold")
-			continue
 		}
-		d.text(cx, cy-0.4, 3, name, "middle", "font-weight", "bold")
-		d.text(cx, cy+3.2, 2.3, size, "middle")
+		// Too small at this scale for its name: the dimension chains
+		// still place it.
 	}
 	d.close("g")
 }
@@ -458,16 +469,36 @@ func (s *wallSheet) pierLabels(d *doc, in WallInput) {
 		cx, cy := s.at((p.Rect.X0+p.Rect.X1)/2, (p.Rect.Y0+p.Rect.Y1)/2)
 		_, top := s.at(0, p.Rect.Y1)
 		_, bot := s.at(0, p.Rect.Y0)
+		pw, ph := (p.Rect.X1-p.Rect.X0)*s.k, bot-top
+		if bw > pw+6 || bh > ph+2 {
+			// Too big for the pier: the name alone, or nothing (the
+			// pier table lists every pier).
+			lines = nil
+			bw, bh = textWidth(p.Name, 2.6)+1.2, 4
+			if bw > pw+0.5 || bh > ph+1 {
+				s.unlabelled++
+				continue
+			}
+		}
 		b := box{cx - bw/2, cy - bh/2, cx + bw/2, cy + bh/2}
+		ok := false
 		for _, dy := range []float64{0, -1, 1, -2, 2} {
 			c := box{b.x0, b.y0 + dy*(bh+0.8), b.x1, b.y1 + dy*(bh+0.8)}
 			if !overlaps(c) && (dy == 0 || c.y0 >= top && c.y1 <= bot) {
-				b = c
+				b, ok = c, true
 				break
 			}
 		}
+		if !ok {
+			s.unlabelled++
+			continue
+		}
 		placed = append(placed, b)
 		d.rect(b.x0, b.y0, b.x1, b.y1, "fill", "#ffffff", "stroke", inkColour, "stroke-width", "0.2")
+		if lines == nil {
+			d.text((b.x0+b.x1)/2, b.y0+3, 2.6, p.Name, "middle", "font-weight", "bold")
+			continue
+		}
 		y := b.y0 + 3.6
 		d.text((b.x0+b.x1)/2, y, 3, p.Name, "middle", "font-weight", "bold")
 		for _, l := range lines {
