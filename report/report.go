@@ -37,6 +37,7 @@ type Input struct {
 	FEErr   error
 	Now     time.Time
 	Version string
+	Drawing string // the SVG drawing written beside the report, "" for none
 }
 
 // Wall writes the text report of one wall layout.
@@ -53,6 +54,9 @@ func Wall(out io.Writer, in Input) error {
 	w.KV("Program", "pierwise "+in.Version)
 	w.KV("Units", unitsLine(wall.Units))
 	w.KV("Method", "classic strip method (solid wall − strips with openings + piers)")
+	if in.Drawing != "" {
+		w.KV("Drawing", in.Drawing+" (beside this report)")
+	}
 
 	w.Section("1. Inputs")
 	inputs(w, wall, in.Result)

@@ -3,8 +3,8 @@ package tui
 import (
 	"errors"
 	"fmt"
-	"io"
 	"math"
+	"path/filepath"
 	"strconv"
 	"strings"
 	"time"
@@ -13,6 +13,7 @@ import (
 	"github.com/charmbracelet/bubbles/key"
 	tea "github.com/charmbracelet/bubbletea"
 
+	"pierwise/drawing"
 	"pierwise/geometry"
 	"pierwise/pier"
 	"pierwise/pier/fe"
@@ -195,11 +196,12 @@ func (e *elevation) update(msg tea.Msg) (screen, tea.Cmd) {
 			return e, e.scheduleFE()
 		}
 		return e, nil
-	case snapshotDoneMsg:
+	case reportDrawnMsg:
 		if msg.err != nil {
 			e.refuse("no report: %v", msg.err)
 		} else {
-			e.say("report written to %s", msg.path)
+			// File names first, so a narrow window still shows them.
+			e.say("wrote %s and its drawing .svg in %s", filepath.Base(msg.report), filepath.Dir(msg.report))
 		}
 		return e, nil
 	case quitRequestMsg:
@@ -590,18 +592,26 @@ func (e *elevation) deleteLayout() {
 	e.say("deleted layout %q (u undoes)", name)
 }
 
-// snapshot writes the text report of the current layout next to the wall
-// file (a new, timestamped file each time), in the background.
+// snapshot writes the text report of the current layout and its SVG
+// drawing next to the wall file (new, timestamped files each time), in the
+// background.
 func (e *elevation) snapshot() tea.Cmd {
 	d := e.c.doc
 	in := report.Input{Path: d.path, Wall: d.wall, Result: e.res, Err: e.solveErr, Now: e.c.now(), Version: ProgramVersion}
 	if e.fe.on && !e.fe.running {
 		in.FE, in.FEErr = e.fe.res, e.fe.err
 	}
+	draw := drawing.WallInput{Path: d.path, Wall: d.wall, Basis: "classic strip method", Piers: drawing.LeafPiers(e.res),
+		Now: in.Now, Version: ProgramVersion}
+	if e.res != nil {
+		draw.HasLoad, draw.Warnings = e.res.HasLoad, e.res.Warnings
+	} else if e.solveErr != nil {
+		draw.NoAnswer = e.solveErr.Error()
+	}
 	e.say("writing the report...")
 	return func() tea.Msg {
-		out, err := writeSnapshot(in.Path, "report", in.Now, func(f io.Writer) error { return report.Wall(f, in) })
-		return snapshotDoneMsg{out, err}
+		out, svg, err := writeReportAndDrawing(in, draw)
+		return reportDrawnMsg{out, svg, err}
 	}
 }
 

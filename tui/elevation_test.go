@@ -1,6 +1,7 @@
 package tui
 
 import (
+	"bytes"
 	"fmt"
 	"os"
 	"path/filepath"
@@ -245,10 +246,12 @@ func TestSnapshot(t *testing.T) {
 	}
 	ed.press(cmd())
 	msg := ed.elev().msg
-	if ed.elev().msgBad || !strings.HasPrefix(msg, "report written to ") {
+	var name, dir string
+	if _, err := fmt.Sscanf(msg, "wrote %s and its drawing .svg in %s", &name, &dir); ed.elev().msgBad || err != nil {
 		t.Fatalf("message %q", msg)
 	}
-	out := strings.TrimPrefix(msg, "report written to ")
+	out := filepath.Join(dir, name)
+	svgName := strings.TrimSuffix(name, ".txt") + ".svg"
 	if filepath.Dir(out) != filepath.Dir(path) {
 		t.Errorf("report %s not beside %s", out, path)
 	}
@@ -256,10 +259,18 @@ func TestSnapshot(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	for _, want := range []string{w.Title, report.Caution, "P1.2.1"} {
+	for _, want := range []string{w.Title, report.Caution, "P1.2.1", "Drawing:", svgName + " (beside this report)"} {
 		if !strings.Contains(string(data), want) {
 			t.Errorf("report lacks %q", want)
 		}
+	}
+	// The drawing is beside the report, under the report's name.
+	svg, err := os.ReadFile(filepath.Join(filepath.Dir(out), svgName))
+	if err != nil {
+		t.Fatal(err)
+	}
+	if !bytes.Contains(svg, []byte("<svg")) || !bytes.Contains(svg, []byte("P1.2.1")) {
+		t.Errorf("the drawing is not the wall's SVG sheet")
 	}
 }
 
