@@ -298,7 +298,7 @@ func (s *wallSheet) load(d *doc, in WallInput) {
 	h.closePath()
 	d.el("path", "d", h.String(), "fill", inkColour)
 	label := "V (no shear given)"
-	if in.HasLoad {
+	if in.Wall.Load.Shear > 0 {
 		label = "V = " + geometry.FormatForce(in.Wall.Load.Shear, in.Wall.Units)
 	}
 	d.text(x0, y-2, 2.8, label, "start", "font-family", fontFamily, "font-weight", "bold")

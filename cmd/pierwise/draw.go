@@ -1,6 +1,7 @@
 package main
 
 import (
+	"errors"
 	"fmt"
 	"time"
 
@@ -30,7 +31,8 @@ func runDraw(e *env, args []string) error {
 	field := fs.String("field", "", "map the finite-element stress over the wall: shear (τxy) or vertical (σy)")
 	basis := fs.String("basis", "", "the model the pier values come from: classic (default) or fe")
 	var ff feFlags
-	ff.register(fs, "run the finite-element model (implied by --field)")
+	fs.StringVar(&ff.mesh, "mesh", "", "maximum element size of the stress map's model, e.g. 6in or 150mm (with --field)")
+	fs.StringVar(&ff.element, "element", "", "finite-element type of the stress map's model: qm6 (default) or q4 (with --field)")
 	files, err := parseInterleaved(fs, args)
 	if err != nil {
 		return err
@@ -67,9 +69,13 @@ func runDraw(e *env, args []string) error {
 	}
 	now := time.Now()
 	var svg []byte
+	var classicErr error // the drawing is written, but the wall has no answer
+	if comp == drawing.NoField && (ff.mesh != "" || ff.element != "") {
+		return usagef("--mesh and --element set up the stress map's model: they go with --field")
+	}
 	if isStorey(arg) {
-		if comp != drawing.NoField || ff.on || sh != drawing.Shares {
-			return usagef("--show, --field, --fe, --mesh and --element apply to wall files, not to the storey file %s", arg)
+		if comp != drawing.NoField || sh != drawing.Shares {
+			return usagef("--show and --field apply to wall files, not to the storey file %s", arg)
 		}
 		a, err := storey.Load(arg)
 		if err != nil {
@@ -79,7 +85,6 @@ func runDraw(e *env, args []string) error {
 			return err
 		}
 	} else {
-		ff.implied()
 		s, err := solveArg(arg, nil)
 		if err != nil {
 			return err
@@ -92,6 +97,7 @@ func runDraw(e *env, args []string) error {
 			in.HasLoad, in.Warnings = s.res.HasLoad, s.res.Warnings
 		} else if s.err != nil {
 			in.NoAnswer = s.err.Error()
+			classicErr = s.err
 		}
 		if sh == drawing.Ratios {
 			if pierRatios == nil {
@@ -115,12 +121,21 @@ func runDraw(e *env, args []string) error {
 		}
 	}
 	if *outPath == "" {
-		_, err := e.stdout.Write(svg)
-		return err
+		if _, err := e.stdout.Write(svg); err != nil {
+			return err
+		}
+	} else {
+		if err := geometry.WriteFileAtomic(*outPath, svg); err != nil {
+			return err
+		}
+		fmt.Fprintln(e.stderr, "drawing written to", *outPath)
 	}
-	if err := geometry.WriteFileAtomic(*outPath, svg); err != nil {
-		return err
+	if classicErr != nil {
+		var le *locatedError
+		if errors.As(classicErr, &le) {
+			return classicErr // it names the file already
+		}
+		return fmt.Errorf("%s: %w", displayName(arg), classicErr)
 	}
-	fmt.Fprintln(e.stderr, "drawing written to", *outPath)
 	return nil
 }

@@ -1,0 +1,96 @@
+package main
+
+import (
+	"bytes"
+	"encoding/xml"
+	"errors"
+	"io"
+	"os"
+	"path/filepath"
+	"strings"
+	"testing"
+)
+
+// parses reports whether s is well-formed XML with an <svg> root.
+func parses(t *testing.T, s string) {
+	t.Helper()
+	dec := xml.NewDecoder(strings.NewReader(s))
+	root := ""
+	for {
+		tok, err := dec.Token()
+		if errors.Is(err, io.EOF) {
+			break
+		}
+		if err != nil {
+			t.Fatalf("not well-formed: %v", err)
+		}
+		if se, ok := tok.(xml.StartElement); ok && root == "" {
+			root = se.Name.Local
+		}
+	}
+	if root != "svg" {
+		t.Fatalf("root element %q, want svg", root)
+	}
+}
+
+func TestDrawCommand(t *testing.T) {
+	for _, args := range [][]string{
+		{"draw", "../../testdata/walls/nested.toml"},
+		{"draw", "../../testdata/walls/nested.toml", "--show", "forces"},
+		{"draw", "../../testdata/walls/si.toml", "--field", "vertical", "--mesh", "300mm"},
+		{"draw", "../../testdata/walls/variants.toml:" + "door moved"},
+		{"draw", "../../testdata/storey/workshop.toml"},
+	} {
+		code, out, errs := runCLI(args...)
+		if code != exitOK {
+			t.Errorf("%v: exit %d: %s", args, code, errs)
+			continue
+		}
+		parses(t, out)
+		if !strings.Contains(out, "licensed engineer") {
+			t.Errorf("%v: no caution on the sheet", args)
+		}
+	}
+}
+
+func TestDrawCommandErrors(t *testing.T) {
+	for _, c := range []struct {
+		args []string
+		code int
+		say  string
+	}{
+		{[]string{"draw"}, exitUsage, "draw needs one FILE"},
+		{[]string{"draw", "../../testdata/walls/nested.toml", "--show", "ratios"}, exitUsage, "pier design is not available yet"},
+		{[]string{"draw", "../../testdata/walls/nested.toml", "--show", "colour"}, exitUsage, "unknown value"},
+		{[]string{"draw", "../../testdata/walls/nested.toml", "--basis", "fe"}, exitUsage, "finite-element basis is not in this build yet"},
+		{[]string{"draw", "../../testdata/walls/nested.toml", "--field", "torsion"}, exitUsage, "unknown component"},
+		{[]string{"draw", "../../testdata/storey/workshop.toml", "--field", "shear"}, exitUsage, "not to the storey file"},
+		{[]string{"draw", "missing.toml"}, exitInput, "missing.toml"},
+		{[]string{"draw", "../../testdata/walls/nested.toml", "--mesh", "3in"}, exitUsage, "go with --field"},
+		{[]string{"draw", "../../testdata/walls/nested.toml", "-o", "../../testdata/walls/nested.toml"}, exitUsage, "would overwrite"},
+	} {
+		code, _, errs := runCLI(c.args...)
+		if code != c.code || !strings.Contains(errs, c.say) {
+			t.Errorf("%v: exit %d, %q; want exit %d saying %q", c.args, code, errs, c.code, c.say)
+		}
+	}
+}
+
+// A cut wall (no classic answer) is still drawn, and the sheet says why it
+// has no pier values; the exit status says the wall has no answer, as the
+// report's does.
+func TestDrawCutWall(t *testing.T) {
+	out := filepath.Join(t.TempDir(), "cut.svg")
+	code, _, errs := runCLI("draw", "testdata/cut.toml", "-o", out)
+	if code != exitInput || !strings.Contains(errs, "cut.toml") {
+		t.Fatalf("exit %d: %s", code, errs)
+	}
+	data, err := os.ReadFile(out)
+	if err != nil {
+		t.Fatal(err)
+	}
+	parses(t, string(data))
+	if !bytes.Contains(data, []byte("No pier values")) {
+		t.Error("the sheet does not say why there are no pier values")
+	}
+}
