@@ -69,11 +69,12 @@ func fieldColour(k int) string {
 // the colour scale and the peak.
 type stressMap struct {
 	comp  Component
-	unit  string  // "psi", "MPa" or "× V/(L·t)"
-	scale float64 // shown value per relative value
-	limit float64 // colour scale runs −limit … +limit (shown unit)
-	peak  float64 // largest |value| of the element centres (shown unit)
-	clip  bool    // the limit is below the peak
+	unit  string        // "psi", "MPa" or "× V/(L·t)"
+	scale float64       // shown value per relative value
+	limit float64       // colour scale runs −limit … +limit (shown unit)
+	peak  float64       // largest |value| of the element centres (shown unit)
+	at    geometry.Rect // the element where the peak is
+	clip  bool          // the limit is below the peak
 }
 
 func (c Component) of(s fe.Stress) float64 {
@@ -111,7 +112,9 @@ func newStressMap(f *fe.Field, c Component, w *geometry.Wall) stressMap {
 		a := cell.Rect.W() * cell.Rect.H()
 		vals = append(vals, av{a, v})
 		total += a
-		m.peak = math.Max(m.peak, v)
+		if v > m.peak {
+			m.peak, m.at = v, cell.Rect
+		}
 	}
 	sort.Slice(vals, func(i, j int) bool { return vals[i].v < vals[j].v })
 	acc := 0.0
@@ -131,6 +134,24 @@ func newStressMap(f *fe.Field, c Component, w *geometry.Wall) stressMap {
 	m.limit = niceCeil(m.limit)
 	m.clip = m.peak > m.limit*1.0001
 	return m
+}
+
+// peakPlace says where the peak element is: at the base, at a corner of
+// an opening (the element touches it), or at its centre's coordinates.
+func (m stressMap) peakPlace(w *geometry.Wall) string {
+	r := m.at
+	if r.Y0 <= 1e-9 {
+		return fmt.Sprintf("at the base, x = %s", dimText((r.X0+r.X1)/2, w.Units))
+	}
+	for _, o := range w.Openings() {
+		q := o.Rect()
+		for _, c := range [][2]float64{{q.X0, q.Y0}, {q.X1, q.Y0}, {q.X0, q.Y1}, {q.X1, q.Y1}} {
+			if c[0] >= r.X0-1e-9 && c[0] <= r.X1+1e-9 && c[1] >= r.Y0-1e-9 && c[1] <= r.Y1+1e-9 {
+				return "at a corner of " + orText(o.Name, "an opening")
+			}
+		}
+	}
+	return fmt.Sprintf("at x = %s, y = %s", dimText((r.X0+r.X1)/2, w.Units), dimText((r.Y0+r.Y1)/2, w.Units))
 }
 
 // niceCeil rounds v up to 1, 1.2, 1.5, 2, 2.5, 3, 4, 5, 6, 8 × 10ⁿ, so the

@@ -99,7 +99,7 @@ func (s *wallSheet) fieldScale(d *doc, x, y, w float64, in WallInput, m stressMa
 	ny := y + 4
 	var notes []string
 	if m.clip {
-		notes = append(notes, fmt.Sprintf("Colours saturate beyond ±%s; the peak, %s, is at a re-entrant opening corner or the base, where the elastic stress is singular.", trim(m.limit), trim(m.peak)))
+		notes = append(notes, fmt.Sprintf("Colours saturate beyond ±%s. Peak %s %s; at opening corners and where the base meets a free edge the elastic stress is singular.", trim(m.limit), trim(m.peak), m.peakPlace(in.Wall)))
 	}
 	notes = append(notes, fmt.Sprintf("Plane-stress model, %s elements up to %s; element-centre stresses averaged at the nodes.", in.Field.Elem, geometry.FormatLength(in.Field.Mesh, in.Wall.Units)))
 	if m.unit != "psi" && m.unit != "MPa" {
