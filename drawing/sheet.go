@@ -249,7 +249,7 @@ func (d *doc) scaleBar(x, y, maxW float64, sys geometry.System, sc scale) {
 	perUnit := unit * 1000 / sc.Den // mm of paper per ft or m
 	// The largest round step that puts four steps in maxW.
 	step := 0.0
-	for _, s := range []float64{1000, 500, 200, 100, 50, 20, 10, 5, 2, 1} {
+	for _, s := range []float64{1000, 500, 200, 100, 50, 25, 20, 10, 5, 4, 2, 1} {
 		if 4*s*perUnit <= maxW {
 			step = s
 			break

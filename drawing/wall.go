@@ -330,10 +330,16 @@ func (s *wallSheet) dimensions(d *doc, w *geometry.Wall) {
 	}
 	xs, ys = stations(xs), stations(ys)
 	d.open("g", "id", "dimensions", "font-family", fontFamily, "fill", inkColour)
-	s.hChain(d, xs, s.oy+10, s.oy+1.5)
-	s.hChain(d, []float64{0, L}, s.oy+20, s.oy+1.5)
-	s.vChain(d, ys, s.ox+s.ww+10, s.ox+s.ww+1.5)
-	s.vChain(d, []float64{0, H}, s.ox+s.ww+21, s.ox+s.ww+1.5)
+	// The overall dimension goes outside the chain, or alone in its
+	// place when there is no chain (nothing between the ends).
+	if len(xs) > 2 {
+		s.hChain(d, xs, s.oy+10, s.oy+1.5)
+	}
+	s.hChain(d, []float64{0, L}, s.oy+10+10*b2f(len(xs) > 2), s.oy+1.5)
+	if len(ys) > 2 {
+		s.vChain(d, ys, s.ox+s.ww+10, s.ox+s.ww+1.5)
+	}
+	s.vChain(d, []float64{0, H}, s.ox+s.ww+10+11*b2f(len(ys) > 2), s.ox+s.ww+1.5)
 	d.close("g")
 	if w.Units == geometry.SI {
 		d.text(s.ox+s.ww+21, s.oy+20+7.5, 2.3, "dimensions in mm", "end", "font-family", fontFamily, "font-style", "italic")
@@ -341,6 +347,13 @@ func (s *wallSheet) dimensions(d *doc, w *geometry.Wall) {
 }
 
 const dimFont = 2.5
+
+func b2f(b bool) float64 {
+	if b {
+		return 1
+	}
+	return 0
+}
 
 // hChain draws a horizontal chain of dimensions at sheet height y through
 // the wall stations xs; extension lines start at from.
@@ -458,6 +471,13 @@ func (s *wallSheet) pierLabels(d *doc, in WallInput) {
 	}
 	u := report.UnitsFor(s.sys)
 	d.open("g", "id", "pier-labels", "font-family", fontFamily, "fill", inkColour)
+	if len(in.Piers) == 0 && len(in.Wall.Openings()) == 0 {
+		// A solid wall is one pier that takes the whole shear.
+		cx, cy := s.ox+s.ww/2, s.oy-s.hh/2
+		d.rect(cx-14, cy-4.6, cx+14, cy+4.6, "fill", "#ffffff", "stroke", inkColour, "stroke-width", "0.2")
+		d.text(cx, cy-0.8, 3, "Solid wall", "middle", "font-weight", "bold")
+		d.text(cx, cy+2.9, 2.5, "one pier: 100 % of V", "middle")
+	}
 	for _, p := range in.Piers {
 		lines := pierValue(in, p, u)
 		bw := textWidth(p.Name, 3)
