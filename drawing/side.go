@@ -59,7 +59,7 @@ func (s *wallSheet) classes(d *doc, x, y, w float64, in WallInput) float64 {
 	d.text(x, y, 2.6, head, "start", "font-weight", "bold")
 	y += 2
 	if in.Show == Ratios && in.Ratio == nil {
-		for _, l := range wrap("Pier design is not available yet: demand/capacity ratios come with the pier design (TMS 402-22, ACI 318-19), which this build does not have. Piers are left unfilled.", 2.5, w) {
+		for _, l := range wrap("Pier design is not available yet for this drawing: demand/capacity ratios come from the pier design checks (TMS 402-22, ACI 318-19), which were not given to it. Piers are left unfilled.", 2.5, w) {
 			y += 3.4
 			d.text(x, y, 2.5, l, "start", "fill", "#8c2a14")
 		}

@@ -21,7 +21,9 @@ func init() {
 }
 
 // pierRatios is where pier design plugs in its demand/capacity ratios for
-// --show ratios; nil until that package is in the build.
+// --show ratios (the governing ratio of each leaf pier, by name, e.g. from
+// design.CheckWall's PierResult.Ratio); nil until the design checks read
+// their inputs from the wall file.
 var pierRatios func(s *solved) (drawing.RatioFunc, error)
 
 func runDraw(e *env, args []string) error {
@@ -101,7 +103,7 @@ func runDraw(e *env, args []string) error {
 		}
 		if sh == drawing.Ratios {
 			if pierRatios == nil {
-				return usagef("--show ratios: pier design is not available yet in this build, so there are no demand/capacity ratios to draw; use --show shares or --show forces")
+				return usagef("--show ratios: pier design is not available yet for drawings (the design checks are not yet connected to the wall file's reinforcement and loads), so there are no demand/capacity ratios to draw; use --show shares or --show forces")
 			}
 			if in.Ratio, err = pierRatios(s); err != nil {
 				return err
