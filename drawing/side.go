@@ -186,7 +186,10 @@ func (s *wallSheet) pierTable(d *doc, x, y, w float64, in WallInput, maxY float6
 			break
 		}
 		cells := []string{p.Name, dimText(p.Rect.W(), s.sys), dimText(p.Rect.H(), s.sys),
-			fmt.Sprintf("%.2f", p.Rect.H()/p.Rect.W()), fmt.Sprintf("%.1f %%", 100*p.Share)}
+			"–", fmt.Sprintf("%.1f %%", 100*p.Share)}
+		if p.Rect.W() > 0 {
+			cells[3] = fmt.Sprintf("%.2f", p.Rect.H()/p.Rect.W())
+		}
 		if p.Cut {
 			cells[4] = "cut"
 		}

@@ -187,7 +187,7 @@ func Wall(in WallInput) ([]byte, error) {
 	s.side(d, in, stress)
 
 	lines := [][2]string{{"File", orText(in.Path, "(built-in demo wall)")}}
-	if len(w.Layouts) > 1 || w.Layouts[w.Active].Name != "" {
+	if w.Active >= 0 && w.Active < len(w.Layouts) && w.Layouts[w.Active].Name != "" {
 		lines = append(lines, [2]string{"Layout", w.Layouts[w.Active].Name})
 	}
 	lines = append(lines, [2]string{"Basis", orText(in.Basis, "classic")}, [2]string{"Showing", showing(in)})
