@@ -458,7 +458,11 @@ func TestStoreyGolden(t *testing.T) {
 		}
 	}
 	flat := strings.Join(strings.Fields(text), " ")
-	for _, want := range []string{"CM (40.00, 25.00) ft", "CR (", Caution} {
+	wants := []string{"CM (40.00, 25.00) ft", "CR (", Caution}
+	for _, wl := range a.Walls { // each wall's design shear, as the storey package gives it
+		wants = append(wants, "V = "+geometry.FormatForce(geometry.Force(wl.Design.Shear), a.Storey.Units))
+	}
+	for _, want := range wants {
 		if !strings.Contains(flat, want) {
 			t.Errorf("%q missing", want)
 		}
@@ -485,5 +489,82 @@ func TestStoreyGolden(t *testing.T) {
 	x, y := ws.at(10*0.3048, 10*0.3048)
 	if f := patch(img, x, y, 2, hex("#f4f4f0"), 4); f < 0.9 {
 		t.Error("the diaphragm is not tinted")
+	}
+}
+
+// TestScaleChoice: the chosen scale is the largest of the list at which the
+// object fits (the next larger one does not), and a huge object still gets
+// a scale at which it fits.
+func TestScaleChoice(t *testing.T) {
+	for _, c := range []struct {
+		sys  geometry.System
+		w, h float64 // metres
+	}{
+		{geometry.US, 18 * 0.3048, 16 * 0.3048}, {geometry.US, 100 * 0.3048, 24 * 0.3048},
+		{geometry.SI, 9.6, 3.6}, {geometry.SI, 0.5, 0.4}, {geometry.SI, 5000, 10}, {geometry.US, 3000, 3000},
+	} {
+		const aw, ah = 230.0, 160.0
+		sc := chooseScale(c.sys, c.w, c.h, aw, ah)
+		if c.w*1000/sc.Den > aw+1e-9 || c.h*1000/sc.Den > ah+1e-9 {
+			t.Errorf("%v %gx%g m: %s does not fit", c.sys, c.w, c.h, sc.Name)
+		}
+		list := usScales
+		if c.sys == geometry.SI {
+			list = siScales
+		}
+		for _, larger := range list {
+			if larger.Den < sc.Den && c.w*1000/larger.Den <= aw && c.h*1000/larger.Den <= ah {
+				t.Errorf("%v %gx%g m: %s chosen, but %s fits", c.sys, c.w, c.h, sc.Name, larger.Name)
+			}
+		}
+	}
+}
+
+// TestHatch: every hatch segment lies inside its rectangle at 45°, and the
+// segments of one family are Spacing apart.
+func TestHatch(t *testing.T) {
+	for _, pt := range sharePaints {
+		var p pathBuilder
+		x0, y0, x1, y1 := 12.3, 40.1, 31.7, 95.2
+		hatch(&p, pt, x0, y0, x1, y1)
+		var segs [][4]float64
+		for _, part := range strings.Split(p.String(), "M")[1:] {
+			var a, b, c, d float64
+			if _, err := fmt.Sscanf(part, "%g %gL%g %g", &a, &b, &c, &d); err != nil {
+				t.Fatalf("%q: %v", part, err)
+			}
+			segs = append(segs, [4]float64{a, b, c, d})
+		}
+		if len(segs) == 0 {
+			t.Fatalf("%s: no hatch", pt.Fill)
+		}
+		rising := 0
+		for _, s := range segs {
+			for _, v := range [][2]float64{{s[0], s[1]}, {s[2], s[3]}} {
+				if v[0] < x0-0.01 || v[0] > x1+0.01 || v[1] < y0-0.01 || v[1] > y1+0.01 {
+					t.Fatalf("%s: point %v outside the rectangle", pt.Fill, v)
+				}
+			}
+			if math.Abs(math.Abs(s[2]-s[0])-math.Abs(s[3]-s[1])) > 0.02 {
+				t.Fatalf("%s: segment %v not at 45°", pt.Fill, s)
+			}
+			if (s[2]-s[0])*(s[3]-s[1]) > 0 {
+				rising++
+			}
+		}
+		// Family y = x − c: neighbouring c differ by Spacing·√2, so
+		// neighbouring lines are Spacing apart.
+		first := segs[0]
+		second := segs[1]
+		dc := math.Abs((second[0] - second[1]) - (first[0] - first[1]))
+		if math.Abs(dc-pt.Spacing*math.Sqrt2) > 0.03 {
+			t.Errorf("%s: lines %.3f apart along x, want %.3f", pt.Fill, dc, pt.Spacing*math.Sqrt2)
+		}
+		if !pt.Cross && rising != len(segs) {
+			t.Errorf("%s: a single hatch has both diagonals", pt.Fill)
+		}
+		if pt.Cross && (rising == 0 || rising == len(segs)) {
+			t.Errorf("%s: a cross hatch lacks a diagonal", pt.Fill)
+		}
 	}
 }
