@@ -45,7 +45,7 @@ func loadWall(t testing.TB, name string) (*geometry.Wall, *pier.Result) {
 
 func wallInput(path string, w *geometry.Wall, r *pier.Result) WallInput {
 	return WallInput{Path: path, Wall: w, Basis: "classic strip method", Piers: LeafPiers(r), HasLoad: r.HasLoad,
-		Warnings: r.Warnings, Now: fixedNow, Version: "test"}
+		Warnings: pier.Texts(r.Warnings), Now: fixedNow, Version: "test"}
 }
 
 // wellFormed parses the whole document with encoding/xml.

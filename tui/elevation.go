@@ -604,7 +604,7 @@ func (e *elevation) snapshot() tea.Cmd {
 	draw := drawing.WallInput{Path: d.path, Wall: d.wall, Basis: "classic strip method", Piers: drawing.LeafPiers(e.res),
 		Now: in.Now, Version: ProgramVersion}
 	if e.res != nil {
-		draw.HasLoad, draw.Warnings = e.res.HasLoad, e.res.Warnings
+		draw.HasLoad, draw.Warnings = e.res.HasLoad, pier.Texts(e.res.Warnings)
 	} else if e.solveErr != nil {
 		draw.NoAnswer = e.solveErr.Error()
 	}

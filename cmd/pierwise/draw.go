@@ -7,6 +7,7 @@ import (
 
 	"pierwise/drawing"
 	"pierwise/geometry"
+	"pierwise/pier"
 	"pierwise/pier/fe"
 	"pierwise/storey"
 )
@@ -96,7 +97,7 @@ func runDraw(e *env, args []string) error {
 			Show: sh, Component: comp, Now: now, Version: version,
 		}
 		if s.res != nil {
-			in.HasLoad, in.Warnings = s.res.HasLoad, s.res.Warnings
+			in.HasLoad, in.Warnings = s.res.HasLoad, pier.Texts(s.res.Warnings)
 		} else if s.err != nil {
 			in.NoAnswer = s.err.Error()
 			classicErr = s.err
