@@ -760,3 +760,6 @@ func wallName(ref WallRef, w *geometry.Wall) string {
 	}
 	return name
 }
+
+// Ratio is the pier's h/L.
+func (p PierForce) Ratio() float64 { return p.H() / p.L() }

@@ -87,9 +87,9 @@ type Action struct {
 type Irregularity int
 
 const (
-	Regular  Irregularity = iota // δ_max/δ_avg ≤ 1.2
-	Type1a                       // 1.2 < δ_max/δ_avg ≤ 1.4: torsional irregularity
-	Type1b                       // δ_max/δ_avg > 1.4: extreme torsional irregularity
+	Regular Irregularity = iota // δ_max/δ_avg ≤ 1.2
+	Type1a                      // 1.2 < δ_max/δ_avg ≤ 1.4: torsional irregularity
+	Type1b                      // δ_max/δ_avg > 1.4: extreme torsional irregularity
 )
 
 func (t Irregularity) String() string {

@@ -68,11 +68,11 @@ type WallRef struct {
 	HasRigidity bool
 	Length      geometry.Length
 
-	Start     geometry.Length // where it begins along its line (x of an x-wall, y of a y-wall)
-	Layout    string          // the wall file's layout to use; "" for the file's active one
-	HasStart  bool            // false: the wall is drawn centred on the plan
-	Line      int             // line of the [[wall]] header in the storey file
-	lines     map[string]int  // key → line, for messages
+	Start    geometry.Length // where it begins along its line (x of an x-wall, y of a y-wall)
+	Layout   string          // the wall file's layout to use; "" for the file's active one
+	HasStart bool            // false: the wall is drawn centred on the plan
+	Line     int             // line of the [[wall]] header in the storey file
+	lines    map[string]int  // key → line, for messages
 }
 
 // DefaultAccidental is the accidental eccentricity as a fraction of the plan
