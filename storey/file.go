@@ -476,9 +476,12 @@ func (p *parser) direction(v any, ref *WallRef) {
 // its line (its centre, for the sketch). A wall along 0° or 90° becomes an
 // x- or y-wall on that line.
 func (p *parser) anglePosition(v any, ref *WallRef, s *Storey, sizeOK bool) {
+	if _, isList := v.([]any); !isList {
+		p.errorf("wall.position", "a wall at an angle is placed by a point on its line, its centre: position = [\"20ft\", \"12ft\"], not %s", show(v))
+		return
+	}
 	xy, ok := p.pair(v, "wall.position", s.Units)
 	if !ok {
-		p.errorf("wall.position", "a wall at an angle is placed by a point on its line, its centre: position = [\"20ft\", \"12ft\"]")
 		return
 	}
 	if sizeOK && (!inside(xy[0], s.Size[0]) || !inside(xy[1], s.Size[1])) {
