@@ -689,9 +689,36 @@ func planWarnings(a *Analysis) []string {
 			fmtLen(geometry.Length(hmin), s.Units), fmtLen(geometry.Length(hmax), s.Units)))
 	}
 	out = append(out, torsionWarnings(a)...)
+	out = append(out, collectorWarnings(a)...)
 	r := float64(s.Size[0]) / float64(s.Size[1])
 	if s.Diaphragm == Rigid && (r > 3 || r < 1.0/3) {
 		out = append(out, "the plan is more than three times as long as it is wide: check that the diaphragm is rigid enough to be treated as rigid")
+	}
+	return out
+}
+
+// collectorWarnings names the flexible diaphragm's wall lines whose walls
+// cover less than half of the plan across the load: the diaphragm's shear
+// along the whole line must reach them through a collector (drag strut),
+// which the tributary rule assumes (common practice).
+func collectorWarnings(a *Analysis) []string {
+	if a.Flexible == nil {
+		return nil
+	}
+	s := a.Storey
+	var out []string
+	for _, load := range []Direction{X, Y} {
+		for _, ln := range a.Flexible.Lines[load] {
+			cover := 0.0
+			for _, i := range ln.Members {
+				cover += float64(wallLength(a.Walls[i]))
+			}
+			if along := float64(s.Size[load]); cover < along/2 {
+				out = append(out, fmt.Sprintf("flexible diaphragm: the %s-wall line at %s = %s has walls along %s of the plan's %s: a collector must bring the line's %s to them",
+					load, load.other(), fmtLen(geometry.Length(ln.Position), s.Units), fmtLen(geometry.Length(cover), s.Units),
+					fmtLen(geometry.Length(along), s.Units), geometry.FormatForce(geometry.Force(ln.Shear), s.Units)))
+			}
+		}
 	}
 	return out
 }
