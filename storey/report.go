@@ -172,7 +172,7 @@ func Report(out io.Writer, a *Analysis, now time.Time) error {
 		for i, wl := range a.Walls {
 			sh := c.Shares[i]
 			direct := "-"
-			if wl.Ref.Direction == c.Load {
+			if wl.Ref.Direction == c.Load || sh.Direct != 0 {
 				direct = num(u.ForceOf(geometry.Force(sh.Direct)), 2)
 			}
 			t.Add(string(WallKey(i)), wl.Name, wl.Ref.Direction.String(), num(u.CoordOf(d.Distance[i]), 2), direct,

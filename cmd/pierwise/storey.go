@@ -138,7 +138,7 @@ func writeStoreyTables(out io.Writer, a *storey.Analysis) {
 			for i, w := range a.Walls {
 				sh := c.Shares[i]
 				direct := "-"
-				if w.Ref.Direction == c.Load || w.Ref.Direction == storey.Angled {
+				if w.Ref.Direction == c.Load || sh.Direct != 0 {
 					direct = fmt.Sprintf("%.2f", u.ForceOf(geometry.Force(sh.Direct)))
 				}
 				cells := []string{w.Name, dirText(w.Ref), relText(s, w)}
