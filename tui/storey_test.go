@@ -302,3 +302,24 @@ func appendFile(t *testing.T, path, text string) {
 		t.Fatal(err)
 	}
 }
+
+// The storey screen with a wall given by its rigidity (the workshop copy
+// with a mezzanine frame): the wall is listed as given, its panel says so,
+// and enter refuses to open an elevation it does not have.
+func TestStoreyScreenRigidityWall(t *testing.T) {
+	dir := filepath.Dir(copyWorkshop(t))
+	d := newStoreyDriver(t, filepath.Join(dir, "workshop-frame.toml"), 80, 24)
+	for i := 0; i < 5; i++ {
+		d.press(tea.KeyMsg{Type: tea.KeyRunes, Runes: []rune{'j'}})
+	}
+	view := ansi.Strip(d.m.View())
+	for _, want := range []string{"6 Mezzanine", "given by its rigidity, 1,500 kip/in", "dmax/davg", "storey drift"} {
+		if !strings.Contains(view, want) {
+			t.Errorf("view lacks %q:\n%s", want, view)
+		}
+	}
+	d.press(tea.KeyMsg{Type: tea.KeyEnter})
+	if view := ansi.Strip(d.m.View()); !strings.Contains(view, "no elevation to open") || !strings.Contains(view, "Storey:") {
+		t.Errorf("enter on a rigidity wall:\n%s", view)
+	}
+}
