@@ -195,19 +195,22 @@ func Report(out io.Writer, a *Analysis, now time.Time) error {
 		Right: []bool{false, false, false, true, true, false, true},
 	}
 	if s.Diaphragm == Envelope {
-		t.Head = []string{"key", "wall", "dir", "rigid " + u.Force, "flexible " + u.Force, "design " + u.Force, "governs", "of V"}
-		t.Right = []bool{false, false, false, true, true, true, false, true}
+		t.Head = []string{"key", "wall", "dir", "rigid", "flexible", "design", "governs"}
+		t.Right = []bool{false, false, false, true, true, true, false}
 	}
 	for i, wl := range a.Walls {
 		design := []string{num(u.ForceOf(geometry.Force(wl.Design.Shear)), 2), CaseName(d, wl.Design.Case), fmt.Sprintf("%.1f %%", 100*wl.Design.Shear/float64(s.Shear))}
 		if s.Diaphragm == Envelope {
 			t.Add(append([]string{string(WallKey(i)), wl.Name, dirName(wl.Ref), num(u.ForceOf(geometry.Force(wl.Rigid.Shear)), 2),
-				num(u.ForceOf(geometry.Force(wl.Flexible)), 2)}, design...)...)
+				num(u.ForceOf(geometry.Force(wl.Flexible)), 2)}, design[:2]...)...)
 			continue
 		}
 		t.Add(append([]string{string(WallKey(i)), wl.Name, dirName(wl.Ref), num(u.ForceOf(geometry.Force(wl.Design.Direct)), 2)}, design...)...)
 	}
 	t.Write(w, "  ")
+	if s.Diaphragm == Envelope {
+		w.Line("  Shears in " + u.Force + ".")
+	}
 	if s.Diaphragm != Flexible {
 		w.Line("  Torsional shear is taken with its sign; where torsion would relieve a wall,")
 		w.Line("  the direct shear alone governs (\"direct\").")
@@ -224,7 +227,7 @@ func Report(out io.Writer, a *Analysis, now time.Time) error {
 		w.Blank()
 		src := wl.Ref.File
 		if wl.Ref.HasRigidity {
-			src = "given by rigidity, " + num(u.RigidityOf(wl.Ref.Rigidity), 1) + " " + u.Rigidity
+			src = "given by rigidity"
 		}
 		w.Line(fmt.Sprintf("%c  %s (%s), design shear %s, case %s", WallKey(i), wl.Name, src,
 			geometry.FormatForce(geometry.Force(wl.Design.Shear), s.Units), CaseName(d, wl.Design.Case)))
