@@ -552,7 +552,7 @@ func (a *Analysis) storeyDrift() {
 	}
 	names := [2][2]string{{"south", "north"}, {"west", "east"}}
 	for ci, c := range d.Cases {
-		for k, e := range c.Torsion.Edges {
+		for k, e := range c.Edges {
 			ed := EdgeDrift{Case: ci, Edge: names[c.Load][k], Drift: check(math.Abs(e))}
 			a.Edges = append(a.Edges, ed)
 		}

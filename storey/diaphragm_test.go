@@ -310,6 +310,11 @@ func TestTorsionalIrregularityByHand(t *testing.T) {
 	if got := c.Shares[1].Total(); !near(got, 54.33085, 1e-6) {
 		t.Errorf("east wall %g, want 54.33085", got)
 	}
+	// The edges as solved, for the storey drift: θ = 627.9727/1450 =
+	// 0.4330846, edges 50 ∓ 21.65423.
+	if !near(c.Edges[0], 28.34577, 1e-6) || !near(c.Edges[1], 71.65423, 1e-6) {
+		t.Errorf("amplified edges %v, want 28.34577 and 71.65423", c.Edges)
+	}
 	// The ratio itself is from A_x = 1, as §12.8.4.3 defines it.
 	if !near(c.Torsion.Ratio, 1.344828, 1e-6) {
 		t.Errorf("ratio after amplification %g, want the A_x = 1 value 1.344828", c.Torsion.Ratio)

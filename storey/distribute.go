@@ -133,6 +133,12 @@ type Case struct {
 	// radians when the rigidities are N/m.
 	Displacement [3]float64
 
+	// Edges is the displacement along the load at the plan edges
+	// perpendicular to it (at 0 and at the plan size) under this case as
+	// solved, amplified eccentricity included: the storey drift's δe there.
+	// Torsion.Edges are the same with A_x = 1.
+	Edges [2]float64
+
 	Torsion Torsion
 
 	// Shares holds one entry per member, in member order.
@@ -314,6 +320,7 @@ func Distribute(members []Member, a Action) (*Distribution, error) {
 			if c.Torsion.Amplification > 1 {
 				d.solveCase(&c, members, a, e0+float64(sign)*acc*c.Torsion.Amplification)
 			}
+			c.Edges = d.edges(c, a)
 			d.Cases = append(d.Cases, c)
 		}
 	}
@@ -368,16 +375,7 @@ func (d *Distribution) solveCase(c *Case, members []Member, a Action, e float64)
 // Table 12.3-1) and A_x = (δ_max/1.2 δ_avg)² within [1, 3] (ASCE 7-22
 // §12.8.4.3) when the category asks for it.
 func (d *Distribution) torsion(c Case, a Action) Torsion {
-	cr := d.CenterOfRigidity
-	u := c.Displacement
-	var t Torsion
-	for k, edge := range []float64{0, a.Size[c.Load.other()]} {
-		if c.Load == X {
-			t.Edges[k] = u[0] - u[2]*(edge-cr[Y])
-		} else {
-			t.Edges[k] = u[1] + u[2]*(edge-cr[X])
-		}
-	}
+	t := Torsion{Edges: d.edges(c, a)}
 	hi, avg := math.Max(t.Edges[0], t.Edges[1]), (t.Edges[0]+t.Edges[1])/2
 	t.Amplification = 1
 	switch {
@@ -402,6 +400,22 @@ func (d *Distribution) torsion(c Case, a Action) Torsion {
 		t.Amplification = ax
 	}
 	return t
+}
+
+// edges is the plate's displacement along the load at the two plan edges
+// perpendicular to it under case c as solved.
+func (d *Distribution) edges(c Case, a Action) [2]float64 {
+	cr := d.CenterOfRigidity
+	u := c.Displacement
+	var e [2]float64
+	for k, edge := range []float64{0, a.Size[c.Load.other()]} {
+		if c.Load == X {
+			e[k] = u[0] - u[2]*(edge-cr[Y])
+		} else {
+			e[k] = u[1] + u[2]*(edge-cr[X])
+		}
+	}
+	return e
 }
 
 func addOuter(k *[3][3]float64, r [3]float64, w float64) {

@@ -260,11 +260,47 @@ func TestStoreyDrift(t *testing.T) {
 		if e.Edge == "north" || e.Edge == "east" {
 			k = 1
 		}
-		if want := 3.5 * math.Abs(c.Torsion.Edges[k]) / 1.25; !near(e.Drift.Design, want, 1e-12) {
+		if want := 3.5 * math.Abs(c.Edges[k]) / 1.25; !near(e.Drift.Design, want, 1e-12) {
 			t.Errorf("%s %s: %g, want %g", c.Name(), e.Edge, e.Drift.Design, want)
 		}
 	}
 	if j := a.JSON(); j.StoreyDrift == nil || len(j.StoreyDrift.Edges) != 8 || j.Walls[0].StoreyDrift == nil || len(j.TorsionalIrregularity) != 4 {
 		t.Errorf("JSON lacks the storey drift or the irregularity")
+	}
+}
+
+// A wall at an angle given by its rigidity: it takes part in the rigid
+// diaphragm, the JSON places it by angle and point, and a flexible
+// diaphragm refuses it at its direction line.
+func TestAngledWallStorey(t *testing.T) {
+	text := strings.Replace(boxStorey, `diaphragm = "flexible"`, "", 1) + `
+[[wall]]
+name = "brace"
+rigidity = "800kip/in"
+direction = 30
+position = ["30ft", "12ft"]
+length = "8ft"
+`
+	path := writeStorey(t, text)
+	a, err := Load(path)
+	if err != nil {
+		t.Fatal(err)
+	}
+	j := a.JSON()
+	b := j.Walls[4]
+	if b.Angle == nil || *b.Angle != 30 || b.At == nil || b.At[0] != 30 || b.At[1] != 12 || !b.RigidityGiven {
+		t.Errorf("JSON brace %+v", b)
+	}
+	// It resists both directions: some direct shear under each load.
+	for _, c := range a.Distribution.Cases {
+		if !(math.Abs(c.Shares[4].Direct) > 0) {
+			t.Errorf("%s: brace direct shear %g", c.Name(), c.Shares[4].Direct)
+		}
+	}
+	flex := strings.Replace(text, "[storey]\n", "[storey]\ndiaphragm = \"flexible\"\n", 1)
+	_, err = Load(writeStorey(t, flex))
+	var e *Error
+	if !errors.As(err, &e) || e.Key != "wall[5].direction" || e.Line != 32 || !strings.Contains(e.Msg, "30°") {
+		t.Errorf("flexible with a wall at 30°: %v", err)
 	}
 }
