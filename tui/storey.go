@@ -234,7 +234,15 @@ func (s *storeyScreen) open(i int) tea.Cmd {
 	cc := *s.c
 	cc.doc = s.docs[i]
 	e := newElevation(&cc)
-	e.say("%s: esc or q returns to the storey", s.st.Walls[i].File)
+	if s.an != nil && s.err == nil && i < len(s.an.Walls) {
+		// The wall under its storey design shear (docs/method.md §9); its
+		// file's own load is left as it is.
+		e.shear = geometry.Force(s.an.Walls[i].Design.Shear)
+		e.resolve()
+		e.say("%s under its storey design shear %s; esc or q returns to the storey", s.st.Walls[i].File, geometry.FormatForce(e.shear, s.st.Units))
+	} else {
+		e.say("%s: esc or q returns to the storey", s.st.Walls[i].File)
+	}
 	return tea.Sequence(pushScreen(&storeyWall{e: e}), e.init())
 }
 

@@ -323,3 +323,21 @@ func TestStoreyScreenRigidityWall(t *testing.T) {
 		t.Errorf("enter on a rigidity wall:\n%s", view)
 	}
 }
+
+// Opening a wall from the storey screen shows it under its storey design
+// shear: the North wall of the workshop under 73.8 kip, its P1 taking
+// 16.3 % of it, 12.03 kip (the storey report's numbers), while its file is
+// left unchanged.
+func TestStoreyOpensWallUnderDesignShear(t *testing.T) {
+	d := newStoreyDriver(t, copyWorkshop(t), 80, 24)
+	d.press(tea.KeyMsg{Type: tea.KeyRunes, Runes: []rune{'j'}}, tea.KeyMsg{Type: tea.KeyEnter})
+	view := d.view()
+	for _, want := range []string{"under its storey design shear 73.8 kip", "12.03"} {
+		if !strings.Contains(view, want) {
+			t.Errorf("view lacks %q:\n%s", want, view)
+		}
+	}
+	if sc := d.screen(); sc.docs[1].dirty() || sc.docs[1].wall.Load.Shear != 0 {
+		t.Errorf("the wall document changed: dirty %v, load %g", sc.docs[1].dirty(), float64(sc.docs[1].wall.Load.Shear))
+	}
+}
