@@ -1,67 +1,44 @@
 // Package storey shares a storey shear among the shear walls of one storey
-// through a rigid diaphragm, with torsion (DESIGN §10; Taly, Design of
-// Reinforced Masonry Structures, 2nd ed., §7.9), and carries each wall's
-// design shear into its pier forces.
+// through its diaphragm — rigid (with torsion), flexible (by tributary
+// spans between wall lines) or the envelope of the two — checks the
+// torsional irregularity and the storey drift, and carries each wall's
+// design shear into its pier forces. The method, its assumptions and
+// sources are docs/method.md §9.
 //
 // # The storey file
 //
 // A TOML file (Parse, Load) with title, units ("us" or "si"), a [storey]
-// table (shear, mass_center = [x, y], size = [x, y], accidental, default
-// 0.05) and one [[wall]] per wall: file (a wall file, relative to the storey
-// file), direction ("x": the wall resists shear along x; "y"), position (its
-// line: y of an x-wall, x of a y-wall), and optionally start (where it
-// begins along its line; default: centred, used for the plan sketch and the
-// fit check), name (default: the wall file's title, else its base name)
-// and layout (one of the wall file's layouts; default: the file's active
-// one; the name then carries the layout).
-// The plan runs from (0, 0), its south-west corner, to size; x points east,
-// y north. Lengths and forces are read with geometry.ParseLength and
-// ParseForce in the storey's units; a bare number is ft/kip or m/kN. Errors
-// are *geometry.Error values naming file, line and key.
+// table (shear, mass_center = [x, y], size = [x, y], accidental (0.05),
+// diaphragm ("rigid"), basis ("classic"), sdc, cd, ie (1), height,
+// drift_limit) and one [[wall]] per wall: file (a wall file, relative to the
+// storey file) or rigidity ("500kip/in", with a name and optionally a
+// length), direction ("x", "y" or an angle in degrees from +x), position (y
+// of an x-wall, x of a y-wall; [x, y] of a point on the line of a wall at an
+// angle), and optionally start, name and layout. The plan runs from (0, 0),
+// its south-west corner, to size; x points east, y north. Lengths, forces
+// and rigidities are stored in SI (m, N, N/m). Errors are *geometry.Error
+// values naming file, line and key; values beyond any building are refused.
 //
-// # Rigidities
+// # The analysis
 //
-// A wall's rigidity in the distribution is its absolute rigidity R = E·t/d
-// (pier.Result.RigidityAbs, N/m) when every wall's material gives E. If one
-// does not, every wall uses its relative rigidity times its thickness, which
-// assumes one E for all walls; the analysis says so in a warning.
+// Analyse solves each wall on the storey's basis (classic strip method or
+// the finite-element model, the latter on a pool of one worker per core),
+// then Distribute solves the rigid diaphragm as a 3×3 stiffness problem
+// (u_x, u_y, θ) about the centre of rigidity, where it uncouples: for
+// orthogonal plans the shares are exactly the centre-of-rigidity method's
+// V·R/ΣR ± V·e·d·R/J. Four cases (load along x and y, accidental ±),
+// each checked for torsional irregularity (ASCE 7-22 Table 12.3-1) and, in
+// categories C to F, re-solved with A_x (§12.8.4.3). DistributeFlexible
+// carries the shear to wall lines by simple spans. A wall's design shear is
+// the largest |shear| of its cases, never below its direct shear (common
+// practice), or its flexible share, or the larger of both (envelope).
 //
-// # The distribution (Distribute)
+// Sign convention: a wall's shear is positive along the positive axis of
+// its own direction when V acts along the positive axis of the load; the
+// torsional shears of each direction sum to zero and the moment of all wall
+// shears about the centre of rigidity equals the load's.
 //
-// For the walls of each direction, ΣR and the centre of rigidity:
-// x_R = Σ R·x / Σ R over the y-walls, y_R = Σ R·y / Σ R over the x-walls.
-// d is each wall's signed distance from the centre of rigidity across its
-// line (y − y_R for an x-wall, x − x_R for a y-wall), and
-// J = Σ R·d² over the walls of both directions.
-//
-// The storey shear V acts at the mass centre along +x and along +y in turn.
-// For a load along x the eccentricity is e = y_m − y_R ± a·size_y, for a load
-// along y e = x_m − x_R ± a·size_x (a = accidental, 0.05 by ASCE 7-22
-// §12.8.4.2): four cases, "x +acc", "x -acc", "y +acc", "y -acc".
-//
-// Sign convention: a wall's shear is positive along the positive axis of its
-// own direction. A wall parallel to the load takes the direct shear V·R/ΣR
-// and the torsional shear +V·e·d·R/J (positive adds to the direct shear); a
-// wall across the load takes −V·e·d·R/J and no direct shear. With this
-// convention the torsional shears of one direction sum to zero, and the
-// moment of all wall shears about the centre of rigidity is V·e
-// (counter-clockwise for a load along y, clockwise for a load along x).
-//
-// A wall's design shear is the largest |direct + torsional| over the four
-// cases, and never less than its direct shear: torsion is not allowed to
-// relieve a wall (common practice; the load also reverses, which is why the
-// magnitude counts). Design.Case says which case governs, or -1 when the
-// direct shear alone does.
-//
-// # Piers
-//
-// Each wall is then solved with pier.Solve under its design shear, so each
-// leaf pier's shear is its share of the design shear and its moment V_i·h
-// (cantilever) or V_i·h/2 (fixed-fixed), as in DESIGN §3.
-//
-// # Assumptions
-//
-// The diaphragm is rigid; walls resist shear only along their own line;
-// walls of the storey share one diaphragm level; the plan is rectangular for
-// the accidental eccentricity. The report warns where these look weak.
+// Each wall is then solved under its design shear; its leaf piers take
+// their share of it on the storey's basis (Wall.Piers). PierDesign is the
+// hook through which pier design reports each wall's governing pier.
 package storey

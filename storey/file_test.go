@@ -2,6 +2,7 @@ package storey
 
 import (
 	"errors"
+	"math"
 	"os"
 	"path/filepath"
 	"strings"
@@ -99,6 +100,25 @@ func TestParseErrors(t *testing.T) {
 		{"bad accidental", `size = ["40ft", "20ft"]`, `size = ["40ft", "20ft"]` + "\naccidental = 5", 8, "storey.accidental", "fraction"},
 		{"bad units", `units = "us"`, `units = "imperial"`, 2, "units", `"us" or "si"`},
 		{"toml syntax", `position = "0ft"`, `position = "0ft`, 12, "", ""},
+		// Issue cases: values beyond any building, NaN, angles, both file and rigidity.
+		{"shear 1e300kip", `shear = "100kip"`, `shear = "1e300kip"`, 5, "storey.shear", "implausible"},
+		{"shear 1e200kip", `shear = "100kip"`, `shear = "1e200kip"`, 5, "storey.shear", "implausible"},
+		{"accidental nan", `size = ["40ft", "20ft"]`, `size = ["40ft", "20ft"]` + "\naccidental = nan", 8, "storey.accidental", "fraction"},
+		{"plan 1e200ft", `size = ["40ft", "20ft"]`, `size = ["1e200ft", "20ft"]`, 7, "storey.size", "implausible"},
+		{"angle nan", `direction = "x"`, `direction = nan`, 11, "wall[1].direction", "finite"},
+		{"angle inf", `direction = "x"`, `direction = "inf"`, 11, "wall[1].direction", "finite"},
+		{"angle -inf number", `direction = "x"`, `direction = -inf`, 11, "wall[1].direction", "finite"},
+		{"angled wall by one length", `direction = "x"`, `direction = 30`, 12, "wall[1].position", "point on its line"},
+		{"file and rigidity", `file = "a.toml"`, `file = "a.toml"` + "\nrigidity = \"500kip/in\"", 11, "wall[1].rigidity", "not both"},
+		{"rigidity without a name", `file = "a.toml"`, `rigidity = "500kip/in"`, 9, "wall[1].name", "needs a name"},
+		{"bad rigidity unit", `file = "a.toml"`, `name = "frame"` + "\nrigidity = \"500kip/furlong\"", 11, "wall[1].rigidity", "unknown length unit"},
+		{"rigidity 1e300", `file = "a.toml"`, `name = "frame"` + "\nrigidity = \"1e300kip/in\"", 11, "wall[1].rigidity", "plausible"},
+		{"sdc G", `size = ["40ft", "20ft"]`, `size = ["40ft", "20ft"]` + "\nsdc = \"G\"", 8, "storey.sdc", `"A" to "F"`},
+		{"diaphragm", `size = ["40ft", "20ft"]`, `size = ["40ft", "20ft"]` + "\ndiaphragm = \"semi\"", 8, "storey.diaphragm", `"rigid", "flexible" or "envelope"`},
+		{"basis", `size = ["40ft", "20ft"]`, `size = ["40ft", "20ft"]` + "\nbasis = \"exact\"", 8, "storey.basis", `"classic" or "fe"`},
+		{"cd nan", `size = ["40ft", "20ft"]`, `size = ["40ft", "20ft"]` + "\ncd = nan\nheight = \"14ft\"", 8, "storey.cd", "C_d"},
+		{"cd without height", `size = ["40ft", "20ft"]`, `size = ["40ft", "20ft"]` + "\ncd = 3.5", 8, "storey.cd", "height"},
+		{"drift preset", `size = ["40ft", "20ft"]`, `size = ["40ft", "20ft"]` + "\ncd = 3.5\nheight = 14\ndrift_limit = \"tight\"", 10, "storey.drift_limit", "masonry-cantilever"},
 	} {
 		t.Run(c.name, func(t *testing.T) {
 			text := strings.Replace(goodStorey, c.old, c.new, 1)
@@ -117,6 +137,48 @@ func TestParseErrors(t *testing.T) {
 	}
 	if _, err := Parse("plan.toml", []byte(goodStorey)); err != nil {
 		t.Errorf("good storey: %v", err)
+	}
+}
+
+// The new keys, read: the diaphragm, the basis, the category, the storey
+// drift settings, a wall at an angle and a wall given by its rigidity
+// (500 kip/in = 500·4448.2216 N / 0.0254 m, NIST SP 811 factors).
+func TestParseNewKeys(t *testing.T) {
+	text := strings.Replace(goodStorey, `size = ["40ft", "20ft"]`, `size = ["40ft", "20ft"]
+diaphragm = "envelope"
+basis = "fe"
+sdc = "d"
+cd = 3.5
+ie = 1.25
+height = "14ft"
+drift_limit = "masonry-other"`, 1) + `
+[[wall]]
+name = "frame"
+rigidity = "500kip/in"
+direction = 30
+position = ["20ft", "10ft"]
+length = "12ft"
+
+[[wall]]
+name = "east frame"
+rigidity = "90 kN/mm"
+direction = "90deg"
+position = ["40ft", "10ft"]
+`
+	s, err := Parse("plan.toml", []byte(text))
+	if err != nil {
+		t.Fatal(err)
+	}
+	if s.Diaphragm != Envelope || s.Basis != geometry.BasisFE || s.SDC != "D" || s.Cd != 3.5 || s.Ie != 1.25 || s.DriftLimit != 0.007 || !near(float64(s.Height), 14*0.3048, 1e-12) {
+		t.Errorf("storey %+v", s)
+	}
+	w := s.Walls[2]
+	if w.Direction != Angled || !near(w.Angle, math.Pi/6, 1e-12) || !w.HasRigidity || !near(w.Rigidity, 500*4448.2216152605/0.0254, 1e-12) || !near(float64(w.At[0]), 20*0.3048, 1e-12) {
+		t.Errorf("angled frame %+v", w)
+	}
+	// 90° is a y-wall on the line x = 40 ft; 90 kN/mm = 9e7 N/m.
+	if e := s.Walls[3]; e.Direction != Y || !near(float64(e.Position), 40*0.3048, 1e-12) || !near(e.Rigidity, 9e7, 1e-12) {
+		t.Errorf("east frame %+v", e)
 	}
 }
 

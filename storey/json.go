@@ -1,6 +1,7 @@
 package storey
 
 import (
+	"math"
 	"strconv"
 
 	"pierwise/geometry"
@@ -25,6 +26,57 @@ type JSON struct {
 	Cases            []JSONCase `json:"cases"`
 	Walls            []JSONWall `json:"walls"`
 	Warnings         []string   `json:"warnings"`
+
+	Diaphragm             string             `json:"diaphragm"` // "rigid", "flexible" or "envelope"
+	Basis                 string             `json:"basis"`     // "classic" or "fe"
+	SDC                   string             `json:"sdc,omitempty"`
+	TorsionalIrregularity []JSONIrregularity `json:"torsional_irregularity"` // one per rigid-diaphragm case
+	Flexible              *JSONFlexible      `json:"flexible,omitempty"`
+	StoreyDrift           *JSONStoreyDrift   `json:"storey_drift,omitempty"`
+}
+
+// JSONIrregularity is the torsional irregularity check of one case
+// (ASCE 7-22 Table 12.3-1, §12.8.4.3): δ_max/δ_avg at the plan edges
+// perpendicular to the load, the type ("none", "1a", "1b") and A_x. Ratio
+// is null when the average displacement is not positive.
+type JSONIrregularity struct {
+	Case          string   `json:"case"`
+	Ratio         *float64 `json:"ratio"`
+	Type          string   `json:"type"`
+	Amplification float64  `json:"amplification"`
+}
+
+// JSONFlexible is the flexible-diaphragm distribution: the wall lines of
+// each direction with their tributary stretch and shear.
+type JSONFlexible struct {
+	Lines []JSONLine `json:"lines"`
+}
+
+// JSONLine is one wall line of the flexible diaphragm.
+type JSONLine struct {
+	Load      string     `json:"load"`
+	Position  float64    `json:"position"`
+	Tributary [2]float64 `json:"tributary"`
+	Shear     float64    `json:"shear"`
+	Walls     []string   `json:"walls"`
+}
+
+// JSONStoreyDrift is the storey drift check: C_d, I_e, the storey height,
+// the limit (fraction of the height, 0 when none) and the drift at the plan
+// edges in each rigid case.
+type JSONStoreyDrift struct {
+	Cd     float64         `json:"cd"`
+	Ie     float64         `json:"ie"`
+	Height float64         `json:"height"`
+	Limit  float64         `json:"limit"`
+	Edges  []JSONEdgeDrift `json:"edges"`
+}
+
+// JSONEdgeDrift is the drift at one plan edge in one case.
+type JSONEdgeDrift struct {
+	Case string `json:"case"`
+	Edge string `json:"edge"`
+	JSONDrift
 }
 
 // JSONUnits names the units of the numbers.
@@ -70,6 +122,23 @@ type JSONWall struct {
 	Drift            *JSONDrift      `json:"drift,omitempty"`      // the wall file's drift check under the design shear, when it sets a limit
 	Piers            []JSONPierForce `json:"piers"`
 	Warnings         []string        `json:"warnings"`
+
+	Angle           *float64       `json:"angle,omitempty"`  // degrees from +x, for a wall at an angle
+	At              *[2]float64    `json:"at,omitempty"`     // a point on its line, for a wall at an angle
+	RigidityGiven   bool           `json:"rigidity_given"`   // the wall is given by its rigidity, not a wall file
+	RigidityClassic *float64       `json:"rigidity_classic"` // the classic method's rigidity, in the unit of "rigidity"
+	RigidityFE      *float64       `json:"rigidity_fe"`      // the finite-element rigidity (fe basis)
+	RigidShear      float64        `json:"rigid_shear"`      // the rigid-diaphragm design shear
+	FlexibleShear   *float64       `json:"flexible_shear"`   // the flexible-diaphragm shear (flexible and envelope)
+	StoreyDrift     *JSONDrift     `json:"storey_drift"`     // the storey drift at the wall (Cd, Ie and height of [storey])
+	GoverningPier   *JSONGoverning `json:"governing_pier"`   // null until pier design exists
+}
+
+// JSONGoverning is a wall's governing pier under its design shear.
+type JSONGoverning struct {
+	Pier  string  `json:"pier"`
+	Ratio float64 `json:"ratio"`
+	Check string  `json:"check"`
 }
 
 // JSONWallCase is a wall's shear in one case.
@@ -115,29 +184,102 @@ func (a *Analysis) JSON() JSON {
 	for _, cs := range d.Cases {
 		j.Cases = append(j.Cases, JSONCase{Name: cs.Name(), Load: cs.Load.String(), Eccentricity: c(cs.Eccentricity), Torque: tidy(u.MomentOf(cs.Torque))})
 	}
+	j.Diaphragm, j.Basis, j.SDC = s.Diaphragm.String(), s.Basis.String(), s.SDC
+	for _, cs := range d.Cases {
+		ji := JSONIrregularity{Case: cs.Name(), Type: cs.Torsion.Type.String(), Amplification: tidy(cs.Torsion.Amplification)}
+		if r := cs.Torsion.Ratio; !math.IsInf(r, 0) {
+			r = tidy(r)
+			ji.Ratio = &r
+		}
+		j.TorsionalIrregularity = append(j.TorsionalIrregularity, ji)
+	}
+	if a.Flexible != nil {
+		jf := &JSONFlexible{Lines: []JSONLine{}}
+		for _, lines := range a.Flexible.Lines {
+			for _, ln := range lines {
+				jl := JSONLine{Load: ln.Load.String(), Position: c(ln.Position), Tributary: [2]float64{c(ln.Tributary[0]), c(ln.Tributary[1])}, Shear: f(ln.Shear)}
+				for _, i := range ln.Members {
+					jl.Walls = append(jl.Walls, a.Walls[i].Name)
+				}
+				jf.Lines = append(jf.Lines, jl)
+			}
+		}
+		j.Flexible = jf
+	}
+	jd := func(dr Drift) *JSONDrift {
+		if !dr.Checked {
+			return nil
+		}
+		return &JSONDrift{Design: tidy(u.DeflectionOf(geometry.Length(dr.Design))), Ratio: tidy(dr.Ratio), Allowable: tidy(u.DeflectionOf(geometry.Length(dr.Allowable))), OK: dr.OK}
+	}
+	if s.Cd > 0 && a.Absolute {
+		sd := &JSONStoreyDrift{Cd: s.Cd, Ie: s.Ie, Height: c(float64(s.Height)), Limit: s.DriftLimit, Edges: []JSONEdgeDrift{}}
+		for _, e := range a.Edges {
+			sd.Edges = append(sd.Edges, JSONEdgeDrift{Case: d.Cases[e.Case].Name(), Edge: e.Edge, JSONDrift: *jd(e.Drift)})
+		}
+		j.StoreyDrift = sd
+	}
 	for i, w := range a.Walls {
 		jw := JSONWall{
-			Name: w.Name, File: w.Ref.File, Layout: w.Wall.Layouts[w.Wall.Active].Name, Direction: w.Ref.Direction.String(), Position: c(float64(w.Ref.Position)),
-			RigidityRelative: w.Unit.Rigidity, Distance: c(d.Distance[i]),
+			Name: w.Name, File: w.Ref.File, Direction: w.Ref.Direction.String(), Position: c(float64(w.Ref.Position)),
+			Distance:    c(d.Distance[i]),
 			DirectShear: f(w.Design.Direct), DesignShear: f(w.Design.Shear), GoverningCase: CaseName(d, w.Design.Case),
-			Piers: []JSONPierForce{}, Warnings: append([]string{}, pier.Texts(w.Loaded.Warnings)...),
+			Piers: []JSONPierForce{}, Warnings: []string{}, RigidityGiven: w.Ref.HasRigidity, RigidShear: f(w.Rigid.Shear),
+			StoreyDrift: jd(w.Drift),
+		}
+		if w.Wall != nil {
+			jw.Layout = w.Wall.Layouts[w.Wall.Active].Name
+		}
+		if w.Ref.Direction == Angled {
+			ang, at := w.Ref.AngleDeg, [2]float64{c(float64(w.Ref.At[0])), c(float64(w.Ref.At[1]))}
+			jw.Angle, jw.At = &ang, &at
+		}
+		if w.Unit != nil {
+			jw.RigidityRelative = w.Unit.Rigidity
+		} else if w.FE != nil {
+			jw.RigidityRelative = w.FE.Rigidity
 		}
 		if a.Absolute {
 			r := tidy(u.RigidityOf(w.Rigidity))
 			jw.Rigidity = &r
 		}
+		rig := func(r float64) *float64 {
+			if !(r > 0) {
+				return nil
+			}
+			v := tidy(r)
+			if a.Absolute {
+				v = tidy(u.RigidityOf(r))
+			}
+			return &v
+		}
+		jw.RigidityClassic = rig(w.ClassicRigidity)
+		jw.RigidityFE = rig(w.FERigidity)
+		if a.Flexible != nil {
+			v := f(w.Flexible)
+			jw.FlexibleShear = &v
+		}
 		for _, cs := range d.Cases {
 			sh := cs.Shares[i]
 			jw.Cases = append(jw.Cases, JSONWallCase{Case: cs.Name(), Direct: f(sh.Direct), Torsional: f(sh.Torsional), Total: f(sh.Total())})
 		}
-		if w.Loaded.DeflectionAbs > 0 {
-			v := tidy(u.DeflectionOf(w.Loaded.DeflectionAbs))
+		if a.Absolute && w.Rigidity > 0 && w.Design.Shear > 0 {
+			v := tidy(u.DeflectionOf(geometry.Length(w.Design.Shear / w.Rigidity)))
 			jw.Deflection = &v
 		}
-		if dr := w.Loaded.Drift; w.Loaded.HasLoad && dr.Allowable > 0 {
-			jw.Drift = &JSONDrift{Design: tidy(u.DeflectionOf(dr.Design)), Ratio: tidy(dr.Ratio), Allowable: tidy(u.DeflectionOf(dr.Allowable)), OK: dr.OK}
+		if w.Loaded != nil {
+			jw.Warnings = append(jw.Warnings, pier.Texts(w.Loaded.Warnings)...)
+			if dr := w.Loaded.Drift; s.Basis == geometry.BasisClassic && w.Loaded.HasLoad && dr.Allowable > 0 {
+				jw.Drift = &JSONDrift{Design: tidy(u.DeflectionOf(dr.Design)), Ratio: tidy(dr.Ratio), Allowable: tidy(u.DeflectionOf(dr.Allowable)), OK: dr.OK}
+			}
 		}
-		for _, p := range w.Loaded.Leaves() {
+		if w.FE != nil {
+			jw.Warnings = append(jw.Warnings, w.FE.Warnings...)
+		}
+		if g := w.Governing; g != nil {
+			jw.GoverningPier = &JSONGoverning{Pier: g.Pier, Ratio: tidy(g.Ratio), Check: g.Check}
+		}
+		for _, p := range w.Piers {
 			jw.Piers = append(jw.Piers, JSONPierForce{
 				Name: p.Name, H: c(p.H()), L: c(p.L()), Support: supportName(p.Support),
 				Share: p.Share, Shear: f(float64(p.Shear)), Moment: tidy(u.MomentOf(p.Moment)),

@@ -59,8 +59,14 @@ func Plan(s *Storey, a *Analysis, cols, rows int) *PlanGrid {
 	}
 	for i, ref := range s.Walls {
 		var length float64
-		if a != nil && i < len(a.Walls) && a.Walls[i].Wall != nil {
-			length = float64(a.Walls[i].Wall.Length)
+		if a != nil && i < len(a.Walls) {
+			length = float64(wallLength(a.Walls[i]))
+		} else if ref.HasRigidity {
+			length = float64(ref.Length)
+		}
+		if ref.Direction == Angled {
+			g.angled(ref, length, i)
+			continue
 		}
 		along := float64(s.Size[ref.Direction])
 		start := (along - length) / 2
@@ -96,6 +102,28 @@ func Plan(s *Storey, a *Analysis, cols, rows int) *PlanGrid {
 		}
 	}
 	return g
+}
+
+// angled draws a wall at an angle centred on its point, with '/' or a backslash (or
+// '=' and '|' when it is nearly along an axis), clipped to the plan.
+func (g *PlanGrid) angled(ref WallRef, length float64, i int) {
+	c, s := math.Cos(ref.Angle), math.Sin(ref.Angle)
+	ch := '/'
+	switch {
+	case math.Abs(s) < 0.38: // within about 22° of x
+		ch = '='
+	case math.Abs(c) < 0.38:
+		ch = '|'
+	case c*s < 0:
+		ch = '\\'
+	}
+	x0, y0 := float64(ref.At[0]), float64(ref.At[1])
+	n := max(int(length/g.scale)*2, 1)
+	for k := 0; k <= n; k++ {
+		t := length * (float64(k)/float64(n) - 0.5)
+		g.set(g.col(x0+t*c), g.row(y0+t*s), ch, i)
+	}
+	g.set(g.col(x0), g.row(y0), WallKey(i), i)
 }
 
 func (g *PlanGrid) col(x float64) int {

@@ -3,6 +3,7 @@ package storey
 import (
 	"fmt"
 	"io"
+	"math"
 	"strings"
 	"time"
 
@@ -40,17 +41,34 @@ func Report(out io.Writer, a *Analysis, now time.Time) error {
 	w.KV("Date", now.Format("2006-01-02 15:04 MST"))
 	w.KV("Program", "pierwise "+Version)
 	w.KV("Units", unitsLine(s.Units, u))
-	w.KV("Method", "rigid diaphragm; direct shear by rigidity, torsion about R")
+	w.KV("Method", methodLine(s))
 
 	w.Section("1. Inputs")
 	w.KV("Shear", geometry.FormatForce(s.Shear, s.Units)+", applied along x and along y in turn")
 	w.KV("Mass centre", fmt.Sprintf("x = %s %s, y = %s %s", coord(u, s.MassCenter[0]), u.Coord, coord(u, s.MassCenter[1]), u.Coord))
 	w.KV("Plan", fmt.Sprintf("%s %s (x) × %s %s (y), origin at the south-west corner", coord(u, s.Size[0]), u.Coord, coord(u, s.Size[1]), u.Coord))
 	w.KV("Accidental", fmt.Sprintf("±%.3g %% of the plan size across the load (ASCE 7-22 §12.8.4.2)", 100*s.Accidental))
+	basisName := "classic method"
+	if s.Basis == geometry.BasisFE {
+		basisName = "finite-element model, basis fe"
+	}
 	if a.Absolute {
-		w.KV("Rigidities", "R = E·t/d of each wall (classic method), "+u.Rigidity)
+		w.KV("Rigidities", "R = E·t/d of each wall ("+basisName+"), "+u.Rigidity)
 	} else {
-		w.KV("Rigidities", "relative rigidity × thickness (one E assumed for every wall)")
+		w.KV("Rigidities", "relative rigidity × thickness (one E assumed for every wall; "+basisName+")")
+	}
+	if s.SDC != "" {
+		w.KV("SDC", s.SDC+" (ASCE 7-22 §11.6); A_x applies in C to F (§12.8.4.3)")
+	}
+	if s.Cd > 0 {
+		lim := "no limit given"
+		if s.DriftLimit > 0 {
+			lim = fmt.Sprintf("limit %.3g h", s.DriftLimit)
+			if s.DriftPreset != "" {
+				lim += " (" + s.DriftPreset + ", ASCE 7-22 Table 12.12-1)"
+			}
+		}
+		w.KV("Storey drift", fmt.Sprintf("Cd = %.3g, Ie = %.3g, h = %s; %s", s.Cd, s.Ie, geometry.FormatLength(s.Height, s.Units), lim))
 	}
 	w.Blank()
 	t := &report.Table{
@@ -58,6 +76,14 @@ func Report(out io.Writer, a *Analysis, now time.Time) error {
 		Right: []bool{false, false, false, true, true, true},
 	}
 	for i, wl := range a.Walls {
+		if wl.Wall == nil {
+			length := "-"
+			if wl.Ref.Length > 0 {
+				length = geometry.FormatLength(wl.Ref.Length, s.Units)
+			}
+			t.Add(string(WallKey(i)), wl.Name, "(given by rigidity)", length, "-", "-")
+			continue
+		}
 		t.Add(string(WallKey(i)), wl.Name, wl.Ref.File, geometry.FormatLength(wl.Wall.Length, s.Units),
 			geometry.FormatLength(wl.Wall.Height, s.Units), geometry.FormatLength(wl.Wall.Thickness, s.Units))
 	}
@@ -72,21 +98,56 @@ func Report(out io.Writer, a *Analysis, now time.Time) error {
 		if wl.Ref.HasStart {
 			from = coord(u, wl.Ref.Start)
 		}
-		t.Add(string(WallKey(i)), wl.Ref.Direction.String(), coord(u, wl.Ref.Position), from,
-			fmt.Sprintf("%.4f", wl.Unit.Rigidity), rigidity(a, u, wl.Rigidity))
+		dir, line := wl.Ref.Direction.String(), coord(u, wl.Ref.Position)
+		if wl.Ref.Direction == Angled {
+			dir = fmt.Sprintf("%g°", wl.Ref.AngleDeg)
+			line, from = coord(u, wl.Ref.At[0])+", "+coord(u, wl.Ref.At[1]), "at"
+		}
+		rel := "given"
+		switch {
+		case s.Basis == geometry.BasisFE && wl.FE != nil:
+			rel = fmt.Sprintf("%.4f", wl.FE.Rigidity)
+		case wl.Unit != nil:
+			rel = fmt.Sprintf("%.4f", wl.Unit.Rigidity)
+		}
+		t.Add(string(WallKey(i)), dir, line, from, rel, rigidity(a, u, wl.Rigidity))
 	}
 	t.Write(w, "  ")
-	w.Line("  line: y of an x-wall, x of a y-wall; from: where it begins along its line;")
-	w.Line("  R rel: relative rigidity, 1/(E·t) units")
+	w.Line("  line: y of an x-wall, x of a y-wall (x, y of a point on an angled wall's")
+	w.Line("  line); from: where it begins along its line; R rel: relative rigidity,")
+	w.Line("  1/(E·t) units; given: the wall is given by its rigidity")
+	if s.Basis == geometry.BasisFE {
+		w.Blank()
+		w.Line("  Rigidity by each model (the distribution uses the finite-element one):")
+		t := &report.Table{
+			Head:  []string{"key", "wall", "classic " + rigUnit(a, u), "FE " + rigUnit(a, u), "classic - FE"},
+			Right: []bool{false, false, true, true, true},
+		}
+		for i, wl := range a.Walls {
+			cl, fr, diff := "-", "-", "-"
+			if wl.ClassicRigidity > 0 {
+				cl = rigidity(a, u, wl.ClassicRigidity)
+			}
+			if wl.FERigidity > 0 {
+				fr = rigidity(a, u, wl.FERigidity)
+			}
+			if wl.ClassicRigidity > 0 && wl.FERigidity > 0 && !wl.Ref.HasRigidity {
+				diff = fmt.Sprintf("%+.1f %%", 100*(wl.ClassicRigidity-wl.FERigidity)/wl.FERigidity)
+			}
+			t.Add(string(WallKey(i)), wl.Name, cl, fr, diff)
+		}
+		t.Write(w, "  ")
+	}
 
 	w.Section("2. Plan (north up; = x-wall, | y-wall, M mass centre, R centre of rigidity)")
 	w.Lines(Plan(s, a, 72, 20).String(), "  ")
 	w.Line(fmt.Sprintf("  x from 0 to %s %s (east), y from 0 to %s %s (north)", coord(u, s.Size[0]), u.Coord, coord(u, s.Size[1]), u.Coord))
 
-	w.Section("3. Centre of rigidity and torsional rigidity")
+	w.Section("3. Centre of rigidity and torsional rigidity (rigid diaphragm)")
 	w.KV("x_R", fmt.Sprintf("%s %s  (Σ R·x / Σ R over the y-walls, Σ R = %s %s)", num(u.CoordOf(d.CenterOfRigidity[X]), 2), u.Coord, rigidity(a, u, d.SumRigidity[Y]), rigUnit(a, u)))
 	w.KV("y_R", fmt.Sprintf("%s %s  (Σ R·y / Σ R over the x-walls, Σ R = %s %s)", num(u.CoordOf(d.CenterOfRigidity[Y]), 2), u.Coord, rigidity(a, u, d.SumRigidity[X]), rigUnit(a, u)))
 	w.KV("J", fmt.Sprintf("%s  (Σ R·d², all walls)", torsional(a, u, d.J)))
+	w.Wrapped("  ", "The diaphragm is solved as a stiffness problem in u_x, u_y and θ; about the centre of rigidity it uncouples, and each wall's shear is the direct part V·R/ΣR plus the torsional part V·e·d·R/J, as tabulated below.")
 
 	for _, c := range d.Cases {
 		across := c.Load.other()
@@ -98,6 +159,9 @@ func Report(out io.Writer, a *Analysis, now time.Time) error {
 		}
 		w.KV("e", fmt.Sprintf("%s_m - %s_R %s accidental = %s %s %s = %s %s",
 			across, across, sign, num(u.CoordOf(e0), 2), sign, num(u.CoordOf(d.AccidentalEccentricity[c.Load]), 2), num(u.CoordOf(c.Eccentricity), 2), u.Coord))
+		if c.Torsion.Amplification > 1 {
+			w.KV("A_x", fmt.Sprintf("%.3f: the accidental part is amplified (ASCE 7-22 §12.8.4.3)", c.Torsion.Amplification))
+		}
 		w.KV("V·e", fmt.Sprintf("%s %s", num(u.MomentOf(c.Torque), 1), u.Moment))
 		w.KV("Shears", u.Force+"; d from the centre of rigidity across the wall's line")
 		w.Blank()
@@ -108,7 +172,7 @@ func Report(out io.Writer, a *Analysis, now time.Time) error {
 		for i, wl := range a.Walls {
 			sh := c.Shares[i]
 			direct := "-"
-			if wl.Ref.Direction == c.Load {
+			if wl.Ref.Direction == c.Load || sh.Direct != 0 {
 				direct = num(u.ForceOf(geometry.Force(sh.Direct)), 2)
 			}
 			t.Add(string(WallKey(i)), wl.Name, wl.Ref.Direction.String(), num(u.CoordOf(d.Distance[i]), 2), direct,
@@ -117,29 +181,73 @@ func Report(out io.Writer, a *Analysis, now time.Time) error {
 		t.Write(w, "  ")
 	}
 
-	w.Section("5. Design shears (the worst case of each wall, never below its direct shear)")
+	torsionSection(w, a, u)
+	n := 6
+	if a.Flexible != nil {
+		flexibleSection(w, a, u)
+		n++
+	}
+
+	w.Section(fmt.Sprintf("%d. Design shears (%s)", n, designRule(s.Diaphragm)))
+	n++
 	t = &report.Table{
 		Head:  []string{"key", "wall", "dir", "direct " + u.Force, "design " + u.Force, "governs", "of V"},
 		Right: []bool{false, false, false, true, true, false, true},
 	}
+	if s.Diaphragm == Envelope {
+		t.Head = []string{"key", "wall", "dir", "rigid", "flexible", "design", "governs"}
+		t.Right = []bool{false, false, false, true, true, true, false}
+	}
 	for i, wl := range a.Walls {
-		t.Add(string(WallKey(i)), wl.Name, wl.Ref.Direction.String(), num(u.ForceOf(geometry.Force(wl.Design.Direct)), 2),
-			num(u.ForceOf(geometry.Force(wl.Design.Shear)), 2), CaseName(d, wl.Design.Case), fmt.Sprintf("%.1f %%", 100*wl.Design.Shear/float64(s.Shear)))
+		design := []string{num(u.ForceOf(geometry.Force(wl.Design.Shear)), 2), CaseName(d, wl.Design.Case), fmt.Sprintf("%.1f %%", 100*wl.Design.Shear/float64(s.Shear))}
+		if s.Diaphragm == Envelope {
+			t.Add(append([]string{string(WallKey(i)), wl.Name, dirName(wl.Ref), num(u.ForceOf(geometry.Force(wl.Rigid.Shear)), 2),
+				num(u.ForceOf(geometry.Force(wl.Flexible)), 2)}, design[:2]...)...)
+			continue
+		}
+		t.Add(append([]string{string(WallKey(i)), wl.Name, dirName(wl.Ref), num(u.ForceOf(geometry.Force(wl.Design.Direct)), 2)}, design...)...)
 	}
 	t.Write(w, "  ")
-	w.Line("  Torsional shear is taken with its sign; where torsion would relieve a wall,")
-	w.Line("  the direct shear alone governs (\"direct\").")
+	if s.Diaphragm == Envelope {
+		w.Line("  Shears in " + u.Force + ".")
+	}
+	if s.Diaphragm != Flexible {
+		w.Line("  Torsional shear is taken with its sign; where torsion would relieve a wall,")
+		w.Line("  the direct shear alone governs (\"direct\").")
+	}
+	if s.Cd > 0 {
+		driftSection(w, a, u, n)
+		n++
+	}
 
-	w.Section("6. Walls under their design shears")
+	w.Section(fmt.Sprintf("%d. Walls under their design shears (%s basis)", n, s.Basis))
+	n++
 	for i, wl := range a.Walls {
 		res := wl.Loaded
 		w.Blank()
-		w.Line(fmt.Sprintf("%c  %s (%s), design shear %s, case %s", WallKey(i), wl.Name, wl.Ref.File,
+		src := wl.Ref.File
+		if wl.Ref.HasRigidity {
+			src = "given by rigidity"
+		}
+		w.Line(fmt.Sprintf("%c  %s (%s), design shear %s, case %s", WallKey(i), wl.Name, src,
 			geometry.FormatForce(geometry.Force(wl.Design.Shear), s.Units), CaseName(d, wl.Design.Case)))
+		if g := wl.Governing; g != nil {
+			w.Line(fmt.Sprintf("   governing pier %s, %s, ratio %.2f", g.Pier, g.Check, g.Ratio))
+		}
+		if wl.Wall == nil {
+			if a.Absolute && wl.Rigidity > 0 {
+				w.Line(fmt.Sprintf("   displacement under the design shear: %s %s (elastic)", num(u.DeflectionOf(geometry.Length(wl.Design.Shear/wl.Rigidity)), 4), u.Deflection))
+			}
+			continue
+		}
+		if res == nil {
+			w.Line("   the classic method cannot solve this layout: no piers (see the wall's own report)")
+			continue
+		}
 		w.Blank()
 		w.Lines(sketch.Elevation(wl.Wall, res, 60, 12).String(), "   ")
 		w.Blank()
-		leaves := res.Leaves()
+		leaves := wl.Piers
 		if len(leaves) == 0 {
 			w.Line("   solid wall: no piers; it takes the whole design shear")
 		} else {
@@ -154,21 +262,162 @@ func Report(out io.Writer, a *Analysis, now time.Time) error {
 			}
 			t.Write(w, "   ")
 		}
-		if res.DeflectionAbs > 0 {
-			w.Line(fmt.Sprintf("   top deflection under the design shear: %s %s (elastic)", num(u.DeflectionOf(res.DeflectionAbs), 4), u.Deflection))
+		if a.Absolute && wl.Rigidity > 0 {
+			w.Line(fmt.Sprintf("   top deflection under the design shear: %s %s (elastic)", num(u.DeflectionOf(geometry.Length(wl.Design.Shear/wl.Rigidity)), 4), u.Deflection))
 		}
-		if line := DriftLine(res, u); line != "" {
+		if line := DriftLine(res, u); line != "" && s.Basis == geometry.BasisClassic {
 			w.Wrapped("   ", line)
 		}
 		for _, msg := range res.Warnings {
 			w.Wrapped("   ! ", msg.Text)
 		}
+		if wl.FE != nil {
+			for _, msg := range wl.FE.Warnings {
+				w.Wrapped("   ! ", msg)
+			}
+		}
 	}
 
-	w.Section("7. Warnings (each wall's own are listed with it above)")
-	w.Close(append(append([]string(nil), a.Warnings...),
-		"The diaphragm is assumed rigid; a flexible diaphragm shares the shear by tributary area instead."))
+	w.Section(fmt.Sprintf("%d. Warnings (each wall's own are listed with it above)", n))
+	closing := "The diaphragm is assumed rigid; a flexible diaphragm shares the shear by tributary area instead."
+	switch s.Diaphragm {
+	case Flexible:
+		closing = "The diaphragm is taken as flexible; a rigid diaphragm shares the shear by rigidity, with torsion, instead."
+	case Envelope:
+		closing = "Each wall takes the larger of its rigid- and flexible-diaphragm shares (envelope)."
+	}
+	w.Close(append(append([]string(nil), a.Warnings...), closing))
 	return w.Err()
+}
+
+func methodLine(s *Storey) string {
+	switch s.Diaphragm {
+	case Flexible:
+		return "flexible diaphragm; shear to wall lines by tributary spans"
+	case Envelope:
+		return "envelope of rigid and flexible diaphragms, per wall"
+	}
+	return "rigid diaphragm; direct shear by rigidity, torsion about R"
+}
+
+func designRule(d Diaphragm) string {
+	switch d {
+	case Flexible:
+		return "flexible diaphragm: the line's shear shared by rigidity"
+	case Envelope:
+		return "the larger of rigid and flexible, per wall"
+	}
+	return "the worst case of each wall, never below its direct shear"
+}
+
+func dirName(r WallRef) string {
+	if r.Direction == Angled {
+		return fmt.Sprintf("%g°", r.AngleDeg)
+	}
+	return r.Direction.String()
+}
+
+// torsionSection is the torsional irregularity check of each rigid case.
+func torsionSection(w *report.Text, a *Analysis, u report.Units) {
+	s, d := a.Storey, a.Distribution
+	w.Section("5. Torsional irregularity (ASCE 7-22 Table 12.3-1, §12.8.4.3)")
+	w.Wrapped("  ", "Displacement along the load at the two plan edges perpendicular to it, rigid diaphragm, accidental torsion included with A_x = 1. Type 1a above 1.2, 1b above 1.4; A_x = (δmax/1.2 δavg)², from 1 to 3, in seismic design categories C to F.")
+	if s.Diaphragm == Flexible {
+		w.Wrapped("  ", "For information only: the diaphragm is flexible, and Types 1a and 1b apply to rigid or semirigid diaphragms.")
+	}
+	unit := u.Deflection
+	dec := 5 // inches
+	if u.Deflection == "mm" {
+		dec = 3
+	}
+	scale := func(v float64) string { return num(u.DeflectionOf(geometry.Length(v)), dec) }
+	if !a.Absolute {
+		unit = "relative"
+		scale = func(v float64) string { return fmt.Sprintf("%.4g", v) }
+	}
+	w.Blank()
+	t := &report.Table{
+		Head:  []string{"case", "edges", "δ1 " + unit, "δ2 " + unit, "δmax/δavg", "type", "A_x"},
+		Right: []bool{false, false, true, true, true, false, true},
+	}
+	for _, c := range d.Cases {
+		edges := "south, north"
+		if c.Load == Y {
+			edges = "west, east"
+		}
+		ratio := "n/a"
+		if !math.IsInf(c.Torsion.Ratio, 0) {
+			ratio = fmt.Sprintf("%.3f", c.Torsion.Ratio)
+		}
+		t.Add(c.Name(), edges, scale(c.Torsion.Edges[0]), scale(c.Torsion.Edges[1]), ratio, c.Torsion.Type.String(), fmt.Sprintf("%.3f", c.Torsion.Amplification))
+	}
+	t.Write(w, "  ")
+}
+
+// flexibleSection shows the wall lines of the flexible diaphragm.
+func flexibleSection(w *report.Text, a *Analysis, u report.Units) {
+	s := a.Storey
+	w.Section("6. Flexible diaphragm: shear to the wall lines")
+	w.Wrapped("  ", "The storey shear is spread across the plan as the mass is (uniform, or linear with its resultant at the mass centre), carried to the wall lines as simple spans between lines (the stretch from a plan edge to the outermost line goes to that line), and shared within a line by rigidity. No torsion.")
+	for _, load := range []Direction{X, Y} {
+		ld := a.Flexible.Load[load]
+		w.Blank()
+		w.Line(fmt.Sprintf("  Load along %s: w = %s %s/%s at %s = 0, %s at %s = %s", load,
+			num(u.ForceOf(geometry.Force(ld[0]))*float64(s.Units.BaseLength()), 3), u.Force, u.Coord, load.other(),
+			num(u.ForceOf(geometry.Force(ld[0]+ld[1]*float64(s.Size[load.other()])))*float64(s.Units.BaseLength()), 3), load.other(), coord(u, s.Size[load.other()])))
+		t := &report.Table{
+			Head:  []string{"line " + u.Coord, "tributary " + u.Coord, "shear " + u.Force, "walls"},
+			Right: []bool{true, false, true, false},
+		}
+		for _, ln := range a.Flexible.Lines[load] {
+			var keys []string
+			for _, i := range ln.Members {
+				keys = append(keys, string(WallKey(i)))
+			}
+			t.Add(num(u.CoordOf(ln.Position), 2), num(u.CoordOf(ln.Tributary[0]), 2)+" to "+num(u.CoordOf(ln.Tributary[1]), 2),
+				num(u.ForceOf(geometry.Force(ln.Shear)), 2), strings.Join(keys, " "))
+		}
+		t.Write(w, "  ")
+	}
+}
+
+// driftSection is the storey drift check at the walls and the plan edges.
+func driftSection(w *report.Text, a *Analysis, u report.Units, n int) {
+	s := a.Storey
+	w.Section(fmt.Sprintf("%d. Storey drift (ASCE 7-22 §12.8.6, §12.12.1)", n))
+	if !a.Absolute {
+		w.Wrapped("  ", "Not checked: the rigidities are relative (not every wall's material gives E).")
+		return
+	}
+	w.Wrapped("  ", fmt.Sprintf("δ = Cd·δe/Ie with Cd = %.3g and Ie = %.3g; δe from the diaphragm's displacements (a wall's shear over its rigidity). Storey height %s.",
+		s.Cd, s.Ie, geometry.FormatLength(s.Height, s.Units)))
+	row := func(t *report.Table, name string, dr Drift) {
+		verdict, lim := "-", "-"
+		if dr.Allowable > 0 {
+			lim = num(u.DeflectionOf(geometry.Length(dr.Allowable)), 3)
+			verdict = "OK"
+			if !dr.OK {
+				verdict = "EXCEEDS"
+			}
+		}
+		t.Add(name, num(u.DeflectionOf(geometry.Length(dr.Elastic)), 4), num(u.DeflectionOf(geometry.Length(dr.Design)), 4), fmt.Sprintf("%.5f", dr.Ratio), lim, verdict)
+	}
+	head := []string{"where", "δe " + u.Deflection, "δ " + u.Deflection, "δ/h", "limit " + u.Deflection, "check"}
+	right := []bool{false, true, true, true, true, false}
+	w.Blank()
+	t := &report.Table{Head: head, Right: right}
+	for i, wl := range a.Walls {
+		row(t, string(WallKey(i))+" "+wl.Name, wl.Drift)
+	}
+	t.Write(w, "  ")
+	if len(a.Edges) > 0 {
+		w.Blank()
+		t := &report.Table{Head: head, Right: right}
+		for _, e := range a.Edges {
+			row(t, a.Distribution.Cases[e.Case].Name()+", "+e.Edge+" edge", e.Drift)
+		}
+		t.Write(w, "  ")
+	}
 }
 
 // CaseName names case i of d, or "direct" for -1.
@@ -189,6 +438,9 @@ func DriftLine(res *pier.Result, u report.Units) string {
 }
 
 func CaseName(d *Distribution, i int) string {
+	if i == CaseFlexible {
+		return "flexible"
+	}
 	if i < 0 || i >= len(d.Cases) {
 		return "direct"
 	}

@@ -54,6 +54,48 @@ func TestReportGolden(t *testing.T) {
 	}
 }
 
+// The report of the workshop copy with a mezzanine frame given by its
+// rigidity, a seismic design category and the storey drift check, against
+// a golden file (rounded numbers; read the diff after -update).
+func TestReportGoldenFrame(t *testing.T) {
+	Version = "test"
+	var buf bytes.Buffer
+	now := time.Date(2026, 12, 2, 12, 0, 0, 0, time.UTC)
+	if err := WriteReport(&buf, filepath.Join("..", "testdata", "storey", "workshop-frame.toml"), now); err != nil {
+		t.Fatal(err)
+	}
+	golden := filepath.Join("testdata", "workshop-frame.report.txt")
+	if *update {
+		if err := os.WriteFile(golden, buf.Bytes(), 0o644); err != nil {
+			t.Fatal(err)
+		}
+	}
+	want, err := os.ReadFile(golden)
+	if err != nil {
+		t.Fatalf("%v (run with -update to create it)", err)
+	}
+	if got := buf.String(); got != string(want) {
+		gl, wl := strings.Split(got, "\n"), strings.Split(string(want), "\n")
+		for i := 0; i < len(gl) && i < len(wl); i++ {
+			if gl[i] != wl[i] {
+				t.Fatalf("report differs from %s at line %d:\n got: %q\nwant: %q", golden, i+1, gl[i], wl[i])
+			}
+		}
+		t.Fatalf("report differs from %s in length", golden)
+	}
+	for _, s := range []string{"Mezzanine frame", "(given by rigidity)", "Storey drift (ASCE 7-22 §12.8.6", "Torsional irregularity", "licensed"} {
+		if !strings.Contains(buf.String(), s) {
+			t.Errorf("report lacks %q", s)
+		}
+	}
+	// Every line fits the report's 78 columns.
+	for i, l := range strings.Split(buf.String(), "\n") {
+		if n := len([]rune(l)); n > 78 {
+			t.Errorf("line %d has %d columns: %q", i+1, n, l)
+		}
+	}
+}
+
 // A bad storey file: nothing is written and the error names file and line.
 func TestWriteReportError(t *testing.T) {
 	dir := t.TempDir()

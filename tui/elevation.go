@@ -39,6 +39,11 @@ type elevation struct {
 	solveErr error
 	version  int // document version res belongs to
 
+	// shear, when positive, is the shear the wall is solved under instead
+	// of its file's own load (the storey screen opens a wall under its
+	// storey design shear); the document is not changed.
+	shear geometry.Force
+
 	msg    string
 	msgBad bool
 
@@ -137,6 +142,11 @@ func (e *elevation) wall() *geometry.Wall { return e.c.doc.wall }
 // the selection. It is the only place the editor asks pier for answers.
 func (e *elevation) resolve() {
 	w := e.wall()
+	if e.shear > 0 {
+		loaded := *w // shallow copy: pier.Solve reads the layouts only
+		loaded.Load.Shear = e.shear
+		w = &loaded
+	}
 	e.res, e.solveErr = pier.Solve(w)
 	e.version = e.c.doc.version
 	n := len(w.Openings())

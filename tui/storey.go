@@ -2,6 +2,7 @@ package tui
 
 import (
 	"fmt"
+	"math"
 	"path/filepath"
 	"strings"
 
@@ -199,6 +200,10 @@ func (s *storeyScreen) update(msg tea.Msg) (screen, tea.Cmd) {
 		case key.Matches(msg, s.keys.Up):
 			s.sel = (s.sel + len(s.docs) - 1) % len(s.docs)
 		case key.Matches(msg, s.keys.Open):
+			if s.st.Walls[s.sel].HasRigidity {
+				s.refuse("%s is given by its rigidity: it has no elevation to open", s.st.Walls[s.sel].Name)
+				return s, nil
+			}
 			return s, s.open(s.sel)
 		case key.Matches(msg, s.keys.Save):
 			s.saveAll()
@@ -229,7 +234,15 @@ func (s *storeyScreen) open(i int) tea.Cmd {
 	cc := *s.c
 	cc.doc = s.docs[i]
 	e := newElevation(&cc)
-	e.say("%s: esc or q returns to the storey", s.st.Walls[i].File)
+	if s.an != nil && s.err == nil && i < len(s.an.Walls) {
+		// The wall under its storey design shear (docs/method.md §9); its
+		// file's own load is left as it is.
+		e.shear = geometry.Force(s.an.Walls[i].Design.Shear)
+		e.resolve()
+		e.say("%s under its storey design shear %s; esc or q returns to the storey", s.st.Walls[i].File, geometry.FormatForce(e.shear, s.st.Units))
+	} else {
+		e.say("%s: esc or q returns to the storey", s.st.Walls[i].File)
+	}
 	return tea.Sequence(pushScreen(&storeyWall{e: e}), e.init())
 }
 
@@ -308,7 +321,7 @@ func (w *storeyWall) update(msg tea.Msg) (screen, tea.Cmd) {
 func (s *storeyScreen) view() string {
 	st := s.c.styles
 	W, H := s.width, s.height
-	title := fmt.Sprintf(" Storey: %s — %s", orText(s.st.Title, "untitled"), filepath.Base(s.st.Path))
+	title := fmt.Sprintf(" Storey: %s — %s  [%s, %s]", orText(s.st.Title, "untitled"), filepath.Base(s.st.Path), s.st.Diaphragm, s.st.Basis)
 	if n := len(s.dirty()); n > 0 {
 		title += fmt.Sprintf("  [%d wall(s) changed]", n)
 	}
@@ -385,16 +398,27 @@ func (s *storeyScreen) tableView(w, h int) string {
 	for _, wl := range a.Walls {
 		nameW = max(nameW, len([]rune(wl.Name)))
 	}
-	nameW = min(nameW, max(w-36, 8))
-	head := fmt.Sprintf("  %-*s %s %7s %8s %6s %-6s", nameW, "wall", "d", "R rel", "design", "of V", "case")
+	nameW = min(nameW, max(w-38, 8))
+	head := fmt.Sprintf("  %-*s %s %7s %8s %6s %-8s", nameW, "wall", "d", "R rel", "design", "of V", "case")
 	lines = append(lines, st.dim.Render(truncate(head, w)))
 	for i, wl := range a.Walls {
 		mark := " "
 		if s.docs[i].dirty() {
 			mark = "*"
 		}
-		row := fmt.Sprintf("%c%s%-*s %s %7.4f %8.2f %5.1f%% %-6s", storey.WallKey(i), mark, nameW, truncate(wl.Name, nameW), wl.Ref.Direction,
-			wl.Unit.Rigidity, u.ForceOf(geometry.Force(wl.Design.Shear)),
+		dir := wl.Ref.Direction.String()
+		if wl.Ref.Direction == storey.Angled {
+			dir = "a"
+		}
+		rel := "  given"
+		switch {
+		case wl.FE != nil && s.st.Basis == geometry.BasisFE:
+			rel = fmt.Sprintf("%7.4f", wl.FE.Rigidity)
+		case wl.Unit != nil:
+			rel = fmt.Sprintf("%7.4f", wl.Unit.Rigidity)
+		}
+		row := fmt.Sprintf("%c%s%-*s %s %s %8.2f %5.1f%% %-8s", storey.WallKey(i), mark, nameW, truncate(wl.Name, nameW), dir,
+			rel, u.ForceOf(geometry.Force(wl.Design.Shear)),
 			100*wl.Design.Shear/float64(s.st.Shear), storey.CaseName(d, wl.Design.Case))
 		row = truncate(row, w)
 		if i == s.sel {
@@ -406,10 +430,31 @@ func (s *storeyScreen) tableView(w, h int) string {
 	lines = append(lines, "")
 	lines = append(lines, fmt.Sprintf("centre of rigidity x_R %.2f, y_R %.2f %s", u.CoordOf(d.CenterOfRigidity[0]), u.CoordOf(d.CenterOfRigidity[1]), u.Coord))
 	lines = append(lines, fmt.Sprintf("mass centre        x_M %.2f, y_M %.2f %s", u.CoordOf(float64(s.st.MassCenter[0])), u.CoordOf(float64(s.st.MassCenter[1])), u.Coord))
-	for _, c := range d.Cases {
-		if c.Sign > 0 {
-			lines = append(lines, st.dim.Render(fmt.Sprintf("load along %s: e = %.2f / %.2f %s", c.Load, u.CoordOf(c.Eccentricity),
-				u.CoordOf(c.Eccentricity-2*d.AccidentalEccentricity[c.Load]), u.Coord)))
+	for _, load := range []storey.Direction{storey.X, storey.Y} {
+		var e [2]float64
+		var worst storey.Torsion
+		for _, c := range d.Cases {
+			if c.Load != load {
+				continue
+			}
+			e[(1-c.Sign)/2] = u.CoordOf(c.Eccentricity)
+			if c.Torsion.Ratio > worst.Ratio {
+				worst = c.Torsion
+			}
+		}
+		ratio := "n/a"
+		if !math.IsInf(worst.Ratio, 0) {
+			ratio = fmt.Sprintf("%.2f", worst.Ratio)
+		}
+		line := fmt.Sprintf("along %s: e %.2f/%.2f %s; dmax/davg %s", load, e[0], e[1], u.Coord, ratio)
+		if worst.Type != storey.Regular {
+			line += " type " + worst.Type.String()
+			if worst.Amplification > 1 {
+				line += fmt.Sprintf(" A_x %.2f", worst.Amplification)
+			}
+			lines = append(lines, st.errText.Render(truncate(line, w)))
+		} else {
+			lines = append(lines, st.dim.Render(truncate(line, w)))
 		}
 	}
 	lines = append(lines, "")
@@ -417,10 +462,28 @@ func (s *storeyScreen) tableView(w, h int) string {
 	lines = append(lines, st.heading.Render(truncate(sel.Name, w)))
 	lines = append(lines, truncate(fmt.Sprintf("direct %.2f, design %.2f %s (%s)", u.ForceOf(geometry.Force(sel.Design.Direct)),
 		u.ForceOf(geometry.Force(sel.Design.Shear)), u.Force, storey.CaseName(d, sel.Design.Case)), w))
-	leaves := sel.Loaded.Leaves()
-	if len(leaves) == 0 {
+	if sel.Drift.Checked {
+		verdict := ""
+		if sel.Drift.Allowable > 0 {
+			verdict = " OK"
+			if !sel.Drift.OK {
+				verdict = " EXCEEDS"
+			}
+		}
+		lines = append(lines, truncate(fmt.Sprintf("storey drift δ %.3f %s (%.4f h)%s", u.DeflectionOf(geometry.Length(sel.Drift.Design)), u.Deflection, sel.Drift.Ratio, verdict), w))
+	}
+	if g := sel.Governing; g != nil {
+		lines = append(lines, truncate(fmt.Sprintf("governing pier %s (%s), ratio %.2f", g.Pier, g.Check, g.Ratio), w))
+	}
+	leaves := sel.Piers
+	switch {
+	case sel.Wall == nil:
+		lines = append(lines, truncate(fmt.Sprintf("given by its rigidity, %s %s", report.Grouped(u.RigidityOf(sel.Ref.Rigidity)), u.Rigidity), w))
+	case sel.Loaded == nil:
+		lines = append(lines, "classic method cannot solve it: no piers")
+	case len(leaves) == 0:
 		lines = append(lines, "solid wall: no piers")
-	} else {
+	default:
 		lines = append(lines, st.dim.Render(fmt.Sprintf("%-7s %5s %-10s %6s %8s %9s", "pier", "h/L", "support", "share", "V "+u.Force, "M "+u.Moment)))
 	}
 	room := h - len(lines)
@@ -433,8 +496,8 @@ func (s *storeyScreen) tableView(w, h int) string {
 		if p.Support == geometry.Fixed {
 			support = "fixed"
 		}
-		lines = append(lines, fmt.Sprintf("%-7s %5.2f %-10s %5.1f%% %8.2f %9.1f", p.Name, p.Ratio(), support, 100*p.Share,
-			u.ForceOf(p.Shear), u.MomentOf(p.Moment)))
+		lines = append(lines, truncate(fmt.Sprintf("%-7s %5.2f %-10s %5.1f%% %8.2f %9.1f", p.Name, p.Ratio(), support, 100*p.Share,
+			u.ForceOf(p.Shear), u.MomentOf(p.Moment)), w))
 	}
 	return strings.Join(lines, "\n")
 }
@@ -443,7 +506,11 @@ func (s *storeyScreen) tableView(w, h int) string {
 func (s *storeyScreen) wallList(w int) string {
 	var lines []string
 	for i, ref := range s.st.Walls {
-		row := fmt.Sprintf("%c %s (%s)", storey.WallKey(i), ref.File, ref.Direction)
+		name := ref.File
+		if ref.HasRigidity {
+			name = ref.Name + ", given by rigidity"
+		}
+		row := fmt.Sprintf("%c %s (%s)", storey.WallKey(i), name, ref.Direction)
 		if s.docs[i].dirty() {
 			row += " *"
 		}

@@ -302,3 +302,42 @@ func appendFile(t *testing.T, path, text string) {
 		t.Fatal(err)
 	}
 }
+
+// The storey screen with a wall given by its rigidity (the workshop copy
+// with a mezzanine frame): the wall is listed as given, its panel says so,
+// and enter refuses to open an elevation it does not have.
+func TestStoreyScreenRigidityWall(t *testing.T) {
+	dir := filepath.Dir(copyWorkshop(t))
+	d := newStoreyDriver(t, filepath.Join(dir, "workshop-frame.toml"), 80, 24)
+	for i := 0; i < 5; i++ {
+		d.press(tea.KeyMsg{Type: tea.KeyRunes, Runes: []rune{'j'}})
+	}
+	view := ansi.Strip(d.m.View())
+	for _, want := range []string{"6 Mezzanine", "given by its rigidity, 1,500 kip/in", "dmax/davg", "storey drift"} {
+		if !strings.Contains(view, want) {
+			t.Errorf("view lacks %q:\n%s", want, view)
+		}
+	}
+	d.press(tea.KeyMsg{Type: tea.KeyEnter})
+	if view := ansi.Strip(d.m.View()); !strings.Contains(view, "no elevation to open") || !strings.Contains(view, "Storey:") {
+		t.Errorf("enter on a rigidity wall:\n%s", view)
+	}
+}
+
+// Opening a wall from the storey screen shows it under its storey design
+// shear: the North wall of the workshop under 73.8 kip, its P1 taking
+// 16.3 % of it, 12.03 kip (the storey report's numbers), while its file is
+// left unchanged.
+func TestStoreyOpensWallUnderDesignShear(t *testing.T) {
+	d := newStoreyDriver(t, copyWorkshop(t), 80, 24)
+	d.press(tea.KeyMsg{Type: tea.KeyRunes, Runes: []rune{'j'}}, tea.KeyMsg{Type: tea.KeyEnter})
+	view := d.view()
+	for _, want := range []string{"under its storey design shear 73.8 kip", "12.03"} {
+		if !strings.Contains(view, want) {
+			t.Errorf("view lacks %q:\n%s", want, view)
+		}
+	}
+	if sc := d.screen(); sc.docs[1].dirty() || sc.docs[1].wall.Load.Shear != 0 {
+		t.Errorf("the wall document changed: dirty %v, load %g", sc.docs[1].dirty(), float64(sc.docs[1].wall.Load.Shear))
+	}
+}

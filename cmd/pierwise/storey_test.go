@@ -173,3 +173,107 @@ func TestStoreyTableAbsoluteRigidity(t *testing.T) {
 		t.Errorf("no J line:\n%s", out)
 	}
 }
+
+// storey --diaphragm and --basis override the storey file; the JSON gives
+// the irregularity per case, the flexible and rigid shears, and on the fe
+// basis both rigidities of every wall. Statics checked on the printed
+// numbers: the flexible shears of each direction sum to V (tributary
+// spans, common practice); each envelope design shear is the larger of
+// the two (common practice).
+func TestStoreyDiaphragmAndBasis(t *testing.T) {
+	type wallJSON struct {
+		Name            string   `json:"name"`
+		Direction       string   `json:"direction"`
+		DesignShear     float64  `json:"design_shear"`
+		RigidShear      float64  `json:"rigid_shear"`
+		FlexibleShear   *float64 `json:"flexible_shear"`
+		Rigidity        float64  `json:"rigidity"`
+		RigidityClassic *float64 `json:"rigidity_classic"`
+		RigidityFE      *float64 `json:"rigidity_fe"`
+	}
+	var s struct {
+		Diaphragm string `json:"diaphragm"`
+		Basis     string `json:"basis"`
+		Irregular []struct {
+			Case          string   `json:"case"`
+			Ratio         *float64 `json:"ratio"`
+			Type          string   `json:"type"`
+			Amplification float64  `json:"amplification"`
+		} `json:"torsional_irregularity"`
+		Walls []wallJSON `json:"walls"`
+	}
+	code, out, errs := runCLI("storey", workshop, "--json", "--diaphragm", "envelope")
+	if code != exitOK {
+		t.Fatalf("exit %d: %s", code, errs)
+	}
+	if err := json.Unmarshal([]byte(out), &s); err != nil {
+		t.Fatal(err)
+	}
+	if s.Diaphragm != "envelope" || s.Basis != "classic" || len(s.Irregular) != 4 {
+		t.Fatalf("diaphragm %q basis %q, %d irregularity cases", s.Diaphragm, s.Basis, len(s.Irregular))
+	}
+	for _, c := range s.Irregular {
+		if c.Ratio == nil || *c.Ratio < 1 || c.Amplification != 1 || c.Type != "none" {
+			t.Errorf("case %+v: the workshop is regular (ratios 1.04 to 1.11)", c)
+		}
+	}
+	sum := map[string]float64{}
+	for _, w := range s.Walls {
+		if w.FlexibleShear == nil {
+			t.Fatalf("%s: no flexible_shear", w.Name)
+		}
+		sum[w.Direction] += *w.FlexibleShear
+		if want := math.Max(w.RigidShear, *w.FlexibleShear); math.Abs(w.DesignShear-want) > 1e-9 {
+			t.Errorf("%s: design %g, want max(%g, %g)", w.Name, w.DesignShear, w.RigidShear, *w.FlexibleShear)
+		}
+	}
+	if math.Abs(sum["x"]-120) > 1e-6 || math.Abs(sum["y"]-120) > 1e-6 {
+		t.Errorf("flexible shears sum to %v, want 120 kip each way", sum)
+	}
+
+	s.Walls = nil
+	code, out, errs = runCLI("storey", workshop, "--json", "--basis", "fe")
+	if code != exitOK {
+		t.Fatalf("exit %d: %s", code, errs)
+	}
+	if err := json.Unmarshal([]byte(out), &s); err != nil {
+		t.Fatal(err)
+	}
+	if s.Basis != "fe" {
+		t.Errorf("basis %q", s.Basis)
+	}
+	for _, w := range s.Walls {
+		if w.RigidityFE == nil || w.RigidityClassic == nil || math.Abs(w.Rigidity-*w.RigidityFE) > 1e-9**w.RigidityFE {
+			t.Fatalf("%s: rigidity %g, FE %v, classic %v", w.Name, w.Rigidity, w.RigidityFE, w.RigidityClassic)
+		}
+		// The classic method overestimates walls with openings (DESIGN §5:
+		// often by tens of percent); it is never below the model here.
+		if *w.RigidityClassic < *w.RigidityFE {
+			t.Errorf("%s: classic %g below FE %g", w.Name, *w.RigidityClassic, *w.RigidityFE)
+		}
+	}
+
+	for _, c := range []struct{ args []string }{
+		{[]string{"storey", workshop, "--basis", "exact"}},
+		{[]string{"storey", workshop, "--diaphragm", "semi"}},
+		{[]string{"storey", workshop, "--edit", "--basis", "fe"}},
+	} {
+		if code, _, _ := runCLI(c.args...); code != exitUsage {
+			t.Errorf("%v: exit %d, want usage", c.args, code)
+		}
+	}
+}
+
+// The workshop copy with a frame given by its rigidity, a category and the
+// storey drift check runs, and shows the frame and the drift table.
+func TestStoreyWorkshopFrame(t *testing.T) {
+	code, out, errs := runCLI("storey", "../../testdata/storey/workshop-frame.toml")
+	if code != exitOK {
+		t.Fatalf("exit %d: %s", code, errs)
+	}
+	for _, want := range []string{"Mezzanine frame", "given by its rigidity, 1,500 kip/in", "storey drift δ = Cd·δe/Ie", "seismic design category D", "south edge"} {
+		if !strings.Contains(out, want) {
+			t.Errorf("output lacks %q", want)
+		}
+	}
+}
