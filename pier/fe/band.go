@@ -1,91 +1,66 @@
 package fe
 
 import (
+	"context"
 	"math"
-
-	"gonum.org/v1/gonum/blas"
-	"gonum.org/v1/gonum/blas/blas64"
-	"gonum.org/v1/gonum/lapack/lapack64"
 )
 
-// Band Cholesky A = UᵀU of a symmetric positive definite band matrix stored
-// as LAPACK's upper band in row-major order (gonum's blas64.SymmetricBand):
-// row i holds A[i][i..i+kd] at ab[i*(kd+1):]. Two implementations:
+// band is a symmetric positive definite band matrix A of n equations with
+// kd superdiagonals, stored as LAPACK's upper band in row-major order
+// (gonum's blas64.SymmetricBand layout): row i holds A[i][i..i+kd] at
+// ab[i*(kd+1):]. It is factored in place as A = UᵀU and then solves any
+// number of right-hand sides.
 //
-//   - choleskyLAPACK: gonum lapack64.Pbtrf/Pbtrs (blocked, BLAS-3);
-//   - choleskyBlock4: right-looking, the trailing window (which stays in
-//     cache) updated by four rows of U at a time.
+// Preconditions (programmer errors, checked by panics where cheap):
+//   - ab has at least n*(kd+1) values, all zero before assembly; the caller
+//     supplies it (the workspace), and the band never allocates;
+//   - entries are added with j ≥ i and j − i ≤ kd only;
+//   - solve is called only after factor returned nil, and the caller keeps
+//     ab unchanged in between.
 //
-// On the 160 × 80 mesh of a 20 ft × 10 ft wall (25,760 equations, band 165)
-// one factorisation and solve took 103 ms with choleskyBlock4 and 151 ms with
-// Pbtrf/Pbtrs (BenchmarkBandCholesky, 20 runs, on this project's shared
-// 2-core machine; a CPU profile under heavier load gave 121 and 137 ms for
-// the factorisation alone), so Solve uses choleskyBlock4. A plain
-// one-row-at-a-time version took 218 ms. TestBandCholesky and
-// TestBandCholeskyRandom check it against LAPACK.
-
-// bandFactor factors ab in place; false when the matrix is not positive
-// definite.
-type bandFactor func(ab []float64, n, kd int) bool
-
-// bandSolveFn solves UᵀU x = b in place with a factor from bandFactor.
-type bandSolveFn func(ab []float64, n, kd int, b []float64)
-
-func choleskyLAPACK(ab []float64, n, kd int) bool {
-	_, ok := lapack64.Pbtrf(blas64.SymmetricBand{Uplo: blas.Upper, N: n, K: kd, Data: ab, Stride: kd + 1})
-	return ok
+// The factorisation is right-looking with rank-4 updates of the trailing
+// window (which stays in cache). Measured against gonum's LAPACK
+// lapack64.Pbtrf/Pbtrs, the tests' reference, on the 160 × 80 mesh of a
+// 20 ft × 10 ft wall (25,760 equations, band 165; BenchmarkBandCholesky,
+// 6 runs each on this project's shared 2-core machine): 162–254 ms, median
+// 175 ms, against 205–234 ms, median 220 ms for Pbtrf/Pbtrs, about 20 %
+// faster; it also checks for cancellation as it goes, which Pbtrf cannot.
+// (mat.BandCholesky is not used: it always estimates the condition number.)
+type band struct {
+	n, kd int
+	ab    []float64
 }
 
-func solveLAPACK(ab []float64, n, kd int, b []float64) {
-	t := blas64.TriangularBand{Uplo: blas.Upper, Diag: blas.NonUnit, N: n, K: kd, Data: ab, Stride: kd + 1}
-	lapack64.Pbtrs(t, blas64.General{Rows: n, Cols: 1, Data: b, Stride: 1})
+// newBand returns the n × n band matrix of kd superdiagonals held in work,
+// which must have room for n*(kd+1) values and be zero.
+func newBand(n, kd int, work []float64) band {
+	if len(work) < n*(kd+1) {
+		panic("fe: band workspace too small")
+	}
+	return band{n: n, kd: kd, ab: work[:n*(kd+1)]}
 }
 
-// axpy computes y += a x (len(y) == len(x)), unrolled by four.
-func axpy(a float64, x, y []float64) {
-	y = y[:len(x)]
-	i := 0
-	for ; i+4 <= len(x); i += 4 {
-		y[i] += a * x[i]
-		y[i+1] += a * x[i+1]
-		y[i+2] += a * x[i+2]
-		y[i+3] += a * x[i+3]
-	}
-	for ; i < len(x); i++ {
-		y[i] += a * x[i]
-	}
-}
+// add adds v to A[i][j], j ≥ i.
+func (b *band) add(i, j int, v float64) { b.ab[i*(b.kd+1)+j-i] += v }
 
-func solveAxpy(ab []float64, n, kd int, b []float64) {
-	ld := kd + 1
-	// Uᵀ y = b (forward): y_k = b_k / U_kk, then b_j -= U_kj y_k.
-	for k := 0; k < n; k++ {
-		rk := ab[k*ld:]
-		b[k] /= rk[0]
-		yk := b[k]
-		m := min(kd, n-1-k)
-		for s := 1; s <= m; s++ {
-			b[k+s] -= rk[s] * yk
-		}
-	}
-	// U x = y (backward).
-	for k := n - 1; k >= 0; k-- {
-		rk := ab[k*ld:]
-		m := min(kd, n-1-k)
-		s := b[k]
-		for j := 1; j <= m; j++ {
-			s -= rk[j] * b[k+j]
-		}
-		b[k] = s / rk[0]
-	}
-}
+// cancelEvery is how many rows the factorisation runs between checks of
+// its context: about a millisecond of work on the default mesh.
+const cancelEvery = 256
 
-// choleskyBlock4 factors ab in place (A = UᵀU). The trailing update is done
-// four rows of U at a time (a rank-4 update), which loads and stores each
-// trailing entry once per four rows instead of once per row.
-func choleskyBlock4(ab []float64, n, kd int) bool {
+// factor factors the matrix in place (A = UᵀU). It returns errSingular
+// when A is not positive definite (a wall with no load path), or ctx.Err()
+// when ctx is done first. The trailing update is done four rows of U at a
+// time (a rank-4 update), which loads and stores each trailing entry once
+// per four rows instead of once per row.
+func (b *band) factor(ctx context.Context) error {
+	ab, n, kd := b.ab, b.n, b.kd
 	ld := kd + 1
 	for k0 := 0; k0 < n; k0 += 4 {
+		if k0%cancelEvery == 0 {
+			if err := ctx.Err(); err != nil {
+				return err
+			}
+		}
 		nb := min(4, n-k0)
 		// Factor the block's rows; each already holds every update from
 		// the rows above the block.
@@ -94,7 +69,7 @@ func choleskyBlock4(ab []float64, n, kd int) bool {
 			rk := ab[k*ld : k*ld+ld]
 			d := rk[0]
 			if !(d > 0) {
-				return false
+				return errSingular
 			}
 			d = math.Sqrt(d)
 			rk[0] = d
@@ -167,5 +142,45 @@ func choleskyBlock4(ab []float64, n, kd int) bool {
 			}
 		}
 	}
-	return true
+	return nil
+}
+
+// solve solves UᵀU x = rhs in place (len(rhs) == n).
+func (b *band) solve(rhs []float64) {
+	ab, n, kd := b.ab, b.n, b.kd
+	ld := kd + 1
+	rhs = rhs[:n]
+	// Uᵀ y = b (forward): y_k = b_k / U_kk, then b_j -= U_kj y_k.
+	for k := 0; k < n; k++ {
+		rk := ab[k*ld:]
+		rhs[k] /= rk[0]
+		if m := min(kd, n-1-k); m > 0 {
+			axpy(-rhs[k], rk[1:m+1], rhs[k+1:k+1+m])
+		}
+	}
+	// U x = y (backward).
+	for k := n - 1; k >= 0; k-- {
+		rk := ab[k*ld:]
+		m := min(kd, n-1-k)
+		s := rhs[k]
+		for j := 1; j <= m; j++ {
+			s -= rk[j] * rhs[k+j]
+		}
+		rhs[k] = s / rk[0]
+	}
+}
+
+// axpy computes y += a x (len(y) == len(x)), unrolled by four.
+func axpy(a float64, x, y []float64) {
+	y = y[:len(x)]
+	i := 0
+	for ; i+4 <= len(x); i += 4 {
+		y[i] += a * x[i]
+		y[i+1] += a * x[i+1]
+		y[i+2] += a * x[i+2]
+		y[i+3] += a * x[i+3]
+	}
+	for ; i < len(x); i++ {
+		y[i] += a * x[i]
+	}
 }

@@ -15,8 +15,8 @@ import (
 // WriteCalculix writes a CalculiX (ccx) input file for the identical model
 // Solve builds for these arguments, with CPS4 elements (the plain bilinear
 // quadrilateral, like "q4"): same nodes, same elements, E = 1, t = 1, the
-// same ν, supports and top load. Node n of the model is ccx node n+1, and
-// element e is ccx element e+1. The step prints the displacements of every
+// same ν, supports, ties (*EQUATION) and top load. Node n of the model is
+// ccx node n+1, and element e is ccx element e+1. The step prints the displacements of every
 // node (set NALL) and the reactions of the base (set NBASE) to the .dat file.
 // Only an isotropic material (no stiffness modifiers) can be written.
 func WriteCalculix(out io.Writer, w *geometry.Wall, classic *pier.Result, opt Options, elem string) error {
@@ -51,21 +51,30 @@ func WriteCalculix(out io.Writer, w *geometry.Wall, classic *pier.Result, opt Op
 	for e, el := range m.elems {
 		fmt.Fprintf(b, "%d, %d, %d, %d, %d\n", e+1, el[0]+1, el[1]+1, el[2]+1, el[3]+1)
 	}
-	var base, topY []int
+	var base []int
+	groups := make([][]equationDOF, md.ntie)
 	for n, p := range m.nodeAt {
 		if p[1] == 0 {
 			base = append(base, n)
-		} else if md.eq[2*n+1] < 0 {
-			topY = append(topY, n)
+		}
+		for c := 0; c < 2; c++ {
+			if g := tied(md.eq[2*n+c]); g >= 0 {
+				groups[g] = append(groups[g], equationDOF{n, c})
+			}
 		}
 	}
 	writeSet(b, "NBASE", base)
-	if len(topY) > 0 {
-		writeSet(b, "NTOP", topY)
-	}
 	fmt.Fprintln(b, "*BOUNDARY\nNBASE, 1, 2")
-	if len(topY) > 0 {
-		fmt.Fprintln(b, "NTOP, 2, 2")
+	// Tied DOFs (the top collector's x, a fixed top's y): each moves with
+	// the group's first, u_n − u_first = 0.
+	for _, g := range groups {
+		if len(g) < 2 {
+			continue
+		}
+		fmt.Fprintln(b, "*EQUATION")
+		for _, d := range g[1:] {
+			fmt.Fprintf(b, "2\n%d, %d, 1., %d, %d, -1.\n", d.n+1, d.c+1, g[0].n+1, g[0].c+1)
+		}
 	}
 	fmt.Fprintf(b, "*MATERIAL, NAME=WALL\n*ELASTIC\n%s, %s\n", num(e), num(nu))
 	fmt.Fprintln(b, "*SOLID SECTION, ELSET=EALL, MATERIAL=WALL\n1.0")
@@ -78,6 +87,9 @@ func WriteCalculix(out io.Writer, w *geometry.Wall, classic *pier.Result, opt Op
 	fmt.Fprintln(b, "*NODE PRINT, NSET=NALL\nU\n*NODE PRINT, NSET=NBASE, TOTALS=YES\nRF\n*END STEP")
 	return b.Flush()
 }
+
+// equationDOF is component c (0: x, 1: y) of node n.
+type equationDOF struct{ n, c int }
 
 func writeSet(b *bufio.Writer, name string, nodes []int) {
 	fmt.Fprintf(b, "*NSET, NSET=%s\n", name)
@@ -94,15 +106,16 @@ func writeSet(b *bufio.Writer, name string, nodes []int) {
 
 // modelFor builds the model and load vector Solve would use.
 func modelFor(w *geometry.Wall, classic *pier.Result, opt Options) (*model, []float64, error) {
-	kind, size, d, leaves, err := prepare(w, classic, opt)
+	w, _ = pier.SnapEdges(w)
+	set, err := prepare(w, classic, opt)
 	if err != nil {
 		return nil, nil, err
 	}
-	md, err := buildModel(w, leaves, size, kind, d)
+	md, err := buildModel(w, set)
 	if err != nil {
 		return nil, nil, err
 	}
-	f, _, err := topLoad(md.m)
+	f, err := topLoad(md.m)
 	if err != nil {
 		return nil, nil, err
 	}

@@ -216,18 +216,18 @@ func compareCalculix(t *testing.T, ccx string, live, update bool, v ccxVariant, 
 func recordOf(md *model, c testWall, u []float64, rf map[int][2]float64, baseFx float64) ccxRecord {
 	m := md.m
 	rec := ccxRecord{BaseFx: baseFx}
-	top := 0
-	for n, p := range m.nodeAt {
-		if p[1] == m.ny {
-			rec.Deflection += u[2*n]
-			top++
-		}
+	// The work-conjugate deflection Σ f_i u_i / V of the same loads.
+	f, err := topLoad(m)
+	if err != nil {
+		panic(err)
 	}
-	rec.Deflection /= float64(top)
+	for dof, v := range f {
+		rec.Deflection += v * u[dof]
+	}
 	if c.classic != nil {
 		rec.Shares = map[string]float64{}
 		for _, p := range c.classic.Piers {
-			rec.Shares[p.Name] = sectionShear(md, u, p.Rect)
+			rec.Shares[p.Name] = md.section(u, 0, (p.Rect.Y0+p.Rect.Y1)/2, p.Rect.X0, p.Rect.X1, true).v
 		}
 	}
 	for _, name := range c.baseShare {

@@ -37,7 +37,7 @@ func ExampleSolve() {
 		fmt.Printf("%s %.2f\n", p.Name, p.Share)
 	}
 	// Output:
-	// classic deflection 7.61, FE (qm6) 11.2: the hand method is 47 % stiffer
+	// classic deflection 7.61, FE (qm6) 11.1: the hand method is 46 % stiffer
 	// P1 0.32
 	// P2.1 0.53
 	// P2.2 0.15

@@ -5,10 +5,14 @@ import (
 	"sort"
 
 	"pierwise/geometry"
+	"pierwise/pier"
 )
 
-// snap is the distance (metres) under which two mesh lines are one line.
-const snap = 1e-6
+// snap is the distance (metres) under which two key lines of the mesh are
+// one line: the tolerance under which pier.SnapEdges merges opening edges,
+// so that a pier edge the classic method drew within it of an opening edge
+// lands on that edge's line instead of making a sliver of elements.
+const snap = float64(pier.SnapTolerance)
 
 // mesh is a rectilinear grid of rectangles over the wall; cells that lie
 // inside an opening are not solid. Grid point (i, j) is at (xs[i], ys[j]).
@@ -23,6 +27,7 @@ type mesh struct {
 	nodeAt [][2]int
 	elems  [][4]int // solid cells' nodes, counter-clockwise from bottom-left
 	cellOf [][2]int // solid cells' (i, j)
+	elemAt []int    // cell (i, j) at j*nx + i → element, or −1
 }
 
 // Grading near opening edges. The stress at an opening's corner is singular
@@ -56,13 +61,11 @@ func gridLines(keys, refine []float64, lo, hi, size float64) []float64 {
 		}
 	}
 	merged[len(merged)-1] = hi
+	refine = append([]float64(nil), refine...)
+	sort.Float64s(refine)
 	isRefined := func(v float64) bool {
-		for _, r := range refine {
-			if math.Abs(r-v) <= snap {
-				return true
-			}
-		}
-		return false
+		k := sort.SearchFloat64s(refine, v-snap)
+		return k < len(refine) && refine[k] <= v+snap
 	}
 	lines := []float64{merged[0]}
 	for k := 1; k < len(merged); k++ {
@@ -122,6 +125,13 @@ func subdivide(lines []float64, a, b, size float64, ga, gb bool) []float64 {
 // through every opening edge and the extra key lines, no element larger than
 // size, and removes the cells inside openings.
 func newMesh(length, height float64, openings []geometry.Rect, xkeys, ykeys []float64, size float64) *mesh {
+	xs, ys := meshLines(length, height, openings, xkeys, ykeys, size)
+	return meshOf(xs, ys, openings)
+}
+
+// meshLines returns the grid lines of newMesh: cheap to compute, so the
+// size of the model can be judged before anything large is allocated.
+func meshLines(length, height float64, openings []geometry.Rect, xkeys, ykeys []float64, size float64) (xs, ys []float64) {
 	// With openings, grade toward the wall's ends and base too: where a fixed
 	// base meets a free edge the stress is singular as well (for a solid wall
 	// it matters little: a uniform mesh is within 0.1 % of the converged
@@ -134,24 +144,29 @@ func newMesh(length, height float64, openings []geometry.Rect, xkeys, ykeys []fl
 		xr = append(xr, o.X0, o.X1)
 		yr = append(yr, o.Y0, o.Y1)
 	}
-	m := &mesh{
-		xs: gridLines(xkeys, xr, 0, length, size),
-		ys: gridLines(ykeys, yr, 0, height, size),
-	}
+	return gridLines(xkeys, xr, 0, length, size), gridLines(ykeys, yr, 0, height, size)
+}
+
+// meshOf builds the mesh on the grid lines xs, ys (which pass through every
+// opening edge inside the wall) and removes the cells inside openings.
+func meshOf(xs, ys []float64, openings []geometry.Rect) *mesh {
+	m := &mesh{xs: xs, ys: ys}
 	m.nx, m.ny = len(m.xs)-1, len(m.ys)-1
 	m.solid = make([]bool, m.nx*m.ny)
-	for j := 0; j < m.ny; j++ {
-		yc := (m.ys[j] + m.ys[j+1]) / 2
-		for i := 0; i < m.nx; i++ {
-			xc := (m.xs[i] + m.xs[i+1]) / 2
-			in := false
-			for _, o := range openings {
-				if xc > o.X0 && xc < o.X1 && yc > o.Y0 && yc < o.Y1 {
-					in = true
-					break
-				}
+	for k := range m.solid {
+		m.solid[k] = true
+	}
+	// Each opening clears the cells between its edge lines: work in
+	// proportion to the opening's cells, not to cells × openings.
+	first := func(lines []float64, v float64) int { return sort.SearchFloat64s(lines, v-snap) }
+	for _, o := range openings {
+		// Every opening edge inside the wall is on a line (meshLines).
+		i0, i1 := first(m.xs, o.X0), min(first(m.xs, o.X1), m.nx)
+		j0, j1 := first(m.ys, o.Y0), min(first(m.ys, o.Y1), m.ny)
+		for j := j0; j < j1; j++ {
+			for i := i0; i < i1; i++ {
+				m.solid[j*m.nx+i] = false
 			}
-			m.solid[j*m.nx+i] = !in
 		}
 	}
 	m.number()
@@ -198,10 +213,13 @@ func (m *mesh) number() {
 	// Elements in the same order as the nodes, so that assembly walks the
 	// band matrix forward instead of jumping across it.
 	m.elems, m.cellOf = m.elems[:0], m.cellOf[:0]
+	m.elemAt = make([]int, m.nx*m.ny)
 	addCell := func(i, j int) {
+		m.elemAt[j*m.nx+i] = -1
 		if !m.solid[j*m.nx+i] {
 			return
 		}
+		m.elemAt[j*m.nx+i] = len(m.elems)
 		m.elems = append(m.elems, [4]int{
 			m.node[j*px+i], m.node[j*px+i+1], m.node[(j+1)*px+i+1], m.node[(j+1)*px+i],
 		})
