@@ -125,13 +125,18 @@ func subdivide(lines []float64, a, b, size float64, ga, gb bool) []float64 {
 // through every opening edge and the extra key lines, no element larger than
 // size, and removes the cells inside openings.
 func newMesh(length, height float64, openings []geometry.Rect, xkeys, ykeys []float64, size float64) *mesh {
-	xs, ys := meshLines(length, height, openings, xkeys, ykeys, size)
+	xs, ys := meshLines(length, height, openings, xkeys, ykeys, size, true)
 	return meshOf(xs, ys, openings)
 }
 
 // meshLines returns the grid lines of newMesh: cheap to compute, so the
 // size of the model can be judged before anything large is allocated.
-func meshLines(length, height float64, openings []geometry.Rect, xkeys, ykeys []float64, size float64) (xs, ys []float64) {
+// Without graded, no line is refined (the keys must then hold the opening
+// edges).
+func meshLines(length, height float64, openings []geometry.Rect, xkeys, ykeys []float64, size float64, graded bool) (xs, ys []float64) {
+	if !graded {
+		return gridLines(xkeys, nil, 0, length, size), gridLines(ykeys, nil, 0, height, size)
+	}
 	// With openings, grade toward the wall's ends and base too: where a fixed
 	// base meets a free edge the stress is singular as well (for a solid wall
 	// it matters little: a uniform mesh is within 0.1 % of the converged
