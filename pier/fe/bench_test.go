@@ -20,9 +20,9 @@ func typicalWall(b *testing.B) testWall {
 }
 
 // BenchmarkSolve times Solve end to end (mesh, assembly, factorisation,
-// shares). Targets (issue 3): the default mesh on a typical wall under
-// 20 ms; the 20 ft × 10 ft wall meshed 160 × 80 (1.5 in, q4) is what
-// scripts/fe-vs-ccx.sh times against CalculiX.
+// three load cases, pier forces). Target: the default mesh on a typical
+// wall under 20 ms; the 20 ft × 10 ft wall meshed 160 × 80 (1.5 in, q4) is
+// what scripts/fe-vs-ccx.sh times against CalculiX.
 func BenchmarkSolve(b *testing.B) {
 	typ := typicalWall(b)
 	big := wallFt(20, 10, geometry.Cantilever)
@@ -49,4 +49,28 @@ func BenchmarkSolve(b *testing.B) {
 			b.ReportMetric(float64(res.DOFs), "dofs")
 		})
 	}
+}
+
+// BenchmarkKeyToResult is what the editor does on a key on the
+// finite-element basis: the classic decomposition (which gives the piers)
+// and the finite-element solve with every pier's forces under the lateral,
+// dead and live loads. Target: under 20 ms on the typical wall.
+func BenchmarkKeyToResult(b *testing.B) {
+	w := typicalWall(b).wall
+	w.Material = geometry.Material{Kind: geometry.ConcreteMasonry, Strength: 2000 * geometry.PSI}
+	w.Load.Shear = 30 * geometry.Kip
+	w.Gravity = geometry.Gravity{Dead: 15_000, Live: 6_000} // N/m
+	b.ReportAllocs()
+	var res *Result
+	for b.Loop() {
+		classic, err := pier.Solve(w)
+		if err != nil {
+			b.Fatal(err)
+		}
+		if res, err = Solve(w, classic, Options{}); err != nil {
+			b.Fatal(err)
+		}
+	}
+	b.ReportMetric(float64(res.Elements), "elements")
+	b.ReportMetric(float64(len(res.Forces)), "piers")
 }
