@@ -372,7 +372,11 @@ func inUnits(w *Text, wall *geometry.Wall, u Units, rigidity float64, loaded boo
 
 func feSection(w *Text, r *fe.Result, res *pier.Result, wall *geometry.Wall) {
 	w.KV("Model", fmt.Sprintf("plane stress, element %s, max size %s, %d elements, %d unknowns", r.Element, geometry.FormatLength(r.Mesh, wall.Units), r.Elements, r.DOFs))
-	w.KV("Supports", "base fixed; shear spread over the top edge; deflection = mean of the top nodes")
+	supports := "base fixed; shear spread over the top edge; deflection = load-weighted mean of the top nodes (Σ f·u / V)"
+	if r.Collector {
+		supports = "base fixed; top nodes tied horizontally (collector); deflection = the collector's"
+	}
+	w.KV("Supports", supports)
 	w.KV("Δ relative", fmt.Sprintf("%.4f /(E·t)", r.Deflection))
 	w.KV("R relative", fmt.Sprintf("%.4f E·t", r.Rigidity))
 	inUnits(w, wall, UnitsFor(wall.Units), r.RigidityAbs, r.HasLoad, r.DeflectionAbs, r.Drift)

@@ -313,6 +313,9 @@ func writeFETable(t *report.Text, s *solved) {
 	for _, warn := range f.Warnings {
 		t.Wrapped("  warning: ", warn)
 	}
+	if f.Collector && len(f.Notes) > 0 {
+		t.Wrapped("  note: ", f.Notes[0])
+	}
 }
 
 // JSON output (DESIGN §7). Lengths in the base unit (ft or m); forces,

@@ -78,7 +78,8 @@ type Result struct {
 	Warnings   []string // where the model's answer is not comparable with the classic one, and merged edges
 
 	// Notes say what the model assumed for this wall beyond docs/method.md
-	// §4's defaults: the top collector, the self weight and its source.
+	// §4's defaults: the top collector (first, when Collector), the self
+	// weight and its source.
 	Notes []string
 	// Collector is true when the top nodes' horizontal displacements are
 	// tied together (openings reach the top, and the wall's analysis
