@@ -86,8 +86,8 @@ func TestSnapEdgesCases(t *testing.T) {
 }
 
 // The 3 µm gap between two doors: after SnapEdges the classic method
-// solves the wall as one wide door (issue of the finite-element model
-// finding no load path through a 3 µm pier).
+// solves the wall as one wide door; the finite-element model used to find
+// no load path through the 3 µm pier between them.
 func TestSnapEdgesClassicSolves(t *testing.T) {
 	ft := geometry.Foot
 	w, _ := SnapEdges(snapWall(

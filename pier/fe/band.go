@@ -19,13 +19,14 @@ import (
 //     ab unchanged in between.
 //
 // The factorisation is right-looking with rank-4 updates of the trailing
-// window (which stays in cache). Measured against gonum's LAPACK
-// lapack64.Pbtrf/Pbtrs, the tests' reference, on the 160 × 80 mesh of a
-// 20 ft × 10 ft wall (25,760 equations, band 165; BenchmarkBandCholesky,
-// 6 runs each on this project's shared 2-core machine): 162–254 ms, median
-// 175 ms, against 205–234 ms, median 220 ms for Pbtrf/Pbtrs, about 20 %
-// faster; it also checks for cancellation as it goes, which Pbtrf cannot.
-// (mat.BandCholesky is not used: it always estimates the condition number.)
+// window (which stays in cache). It is kept over gonum's LAPACK
+// lapack64.Pbtrf/Pbtrs, the tests' reference, because it is faster here and
+// can be cancelled: on the 160 × 80 mesh of a 20 ft × 10 ft wall (25,760
+// equations, band 165), BenchmarkBandCholesky in two series of 6 and 8 runs
+// on this project's shared 2-core machine gave medians of 176 and 224 ms
+// against 220 and 272 ms for Pbtrf/Pbtrs: about 20 % faster (single runs
+// scatter widely under the machine's load). (mat.BandCholesky is not used:
+// it always estimates the condition number.)
 type band struct {
 	n, kd int
 	ab    []float64

@@ -37,7 +37,7 @@ import (
 // 2-D plane stress (measured: 0.1 % for a solid wall, 0.7–2.1 % with
 // openings, about the same at 1 ft, 6 in and 3 in elements). With ν = 0 the out-of-plane
 // direction decouples, and in plane strain it is held, so the first two
-// variants are the exact one-to-one comparison the issue asks for
+// variants are the exact one-to-one comparison
 // (deflections within 0.5 %, pier shares within 1 percentage point; they
 // agree to about 1e-6). The third is held to 2.5 %, the size of that
 // expansion effect, so that a change on either side still shows.
@@ -201,7 +201,7 @@ func compareCalculix(t *testing.T, ccx string, live, update bool, v ccxVariant, 
 			if err != nil {
 				t.Fatal(err)
 			}
-			// Issue 3: deflections within 0.5 % (see above for "cps4").
+			// Deflections within 0.5 % (see above for "cps4").
 			rel := math.Abs(ours.Deflection/rec.Deflection - 1)
 			if rel > v.tol {
 				t.Errorf("deflection: q4 %.6g, CalculiX %s %.6g (%.3f %% apart, want ≤ %.1f %%)", ours.Deflection, elem, rec.Deflection, 100*rel, 100*v.tol)
@@ -211,7 +211,7 @@ func compareCalculix(t *testing.T, ccx string, live, update bool, v ccxVariant, 
 			if math.Abs(rec.BaseFx+1) > 1e-5 {
 				t.Errorf("CalculiX base reaction %.6g, want −1", rec.BaseFx)
 			}
-			// Issue 3: pier shares within 1 percentage point.
+			// Pier shares within 1 percentage point.
 			worst := 0.0
 			for _, p := range ours.Piers {
 				worst = max(worst, math.Abs(p.Share-rec.Shares[p.Name]))

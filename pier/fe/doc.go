@@ -1,55 +1,60 @@
-// Package fe is the finite-element check of the classic pier method: a
-// plane-stress model of the same wall elevation, so the engineer sees how
-// far the hand method is from a continuum answer for this layout
-// (DESIGN §5, issue 3).
+// Package fe is the finite-element model of a wall elevation: a plane-stress
+// continuum of the same wall the classic pier method decomposes, which
+// gives the wall's deflection and rigidity, the share of the shear each
+// pier carries, and every pier's shear, axial force and moment at its
+// bottom, middle and top under the lateral load and under gravity
+// (docs/method.md §4).
 //
 // # What is computed
 //
-// Solve models the active opening layout of a wall and returns its top
-// deflection and rigidity, the share of the wall shear that crosses each
-// leaf pier of the classic result at its mid-height, the mesh size and the
-// element and equation counts, and the relative difference between the
-// classic and the FE rigidity.
+// Solve (and SolveContext, which can be cancelled) models the active
+// opening layout of a wall and returns:
+//   - its deflection and rigidity under V = 1 (relative), and in real units
+//     when the material and thickness are known, with the drift check;
+//   - for every pier of the classic result passed in, leaves and parents,
+//     its share of the wall shear and its section forces (pier.PierLoads)
+//     under the wall's shear, the dead load (line load along the top and
+//     self weight) and the live load, from one factorisation solved for
+//     three right-hand sides;
+//   - the mesh size, element and equation counts, the relative difference
+//     between the classic and the model's rigidity, warnings and notes.
 //
 // # Units
 //
-// Results are relative, like the classic method's (DESIGN §3): the model is
-// solved with E = 1, t = 1 and a shear V = 1, so Deflection is in units of
-// V/(E t) and Rigidity in units of E t. Multiply by the wall's E_m·t (or
-// V/(E_m·t)) for absolute values. Lengths are metres inside the package;
-// relative values do not depend on the length unit or on the wall's size.
+// The model is solved with E = 1 and t = 1: Deflection is in units of
+// V/(E t) and Rigidity in units of E t, like the classic method's
+// (docs/method.md §1). Forces do not depend on E or t: pier forces are in
+// newtons and newton-metres under the wall's own loads. Lengths are metres.
 // Shares are fractions of V (0–1).
 //
-// # The model
+// # The model (docs/method.md §4)
 //
-//   - Mesh: rectangles. Grid lines pass through every wall edge, every
-//     opening edge and every leaf pier's edges and mid-height; each interval
-//     is subdivided so that no element is larger than Options.Mesh
-//     (DefaultMesh, 6 in, when zero). When the wall has openings the mesh is
-//     graded toward opening edges, the wall's ends and its base (elements a
-//     quarter of the size there, growing by 1.5 per element), because the
-//     stress is singular at re-entrant opening corners and where the fixed
-//     base meets a free edge. Elements inside openings are removed.
-//   - Material: plane stress, ν = E/(2 E_v) − 1 from the wall's material
-//     (pier.MaterialModuliFor; 0.25 when the moduli are unknown, which is
-//     E_v = 0.4 E). A plane-stress model needs E_v > E/3 (ν < 0.5). The
-//     user's stiffness modifiers, when not 1, are applied as an orthotropic
-//     material: vertical modulus kf·E (the wall's bending is carried by its
-//     vertical fibres) and shear modulus kv·G, the roles kf and kv have in the
-//     classic formulas.
-//   - Supports: every base node is fixed in x and y. A "fixed" (fixed-fixed)
-//     wall also holds every top node vertically, which keeps the top from
-//     rotating.
-//   - Load: V = 1 along the top edge, shared among the top nodes in
-//     proportion to each node's tributary length of solid top edge.
-//   - Deflection: the plain average of the top nodes' horizontal
-//     displacements.
-//   - Pier share: the horizontal shear crossing the pier's mid-height line
-//     between its left and right edges, as the sum of the internal x-forces
-//     K_e u_e that the elements just below the line receive at their nodes on
-//     the line. For a pier whose sides are free edges this is exactly the
-//     shear in the pier (statics); where a pier's side is not free at its
-//     mid-height, it is the shear through that stretch of the section.
+//   - Mesh: rectangles, with lines through every wall and opening edge and
+//     every pier's edges, base, top and mid-height; no element larger than
+//     Options.Mesh (DefaultMesh, 6 in, when zero), graded toward opening
+//     edges, the wall's ends and base. Opening edges closer than
+//     pier.SnapTolerance merge first (pier.SnapEdges, with a warning). The
+//     model's size is judged from the mesh lines before anything large is
+//     allocated, and a model over 480 MB of band matrix is refused with its
+//     cause (too many opening edges, or too fine a mesh).
+//   - Material: plane stress, ν from the wall's moduli (0.25 when unknown);
+//     the stiffness modifiers make it orthotropic (vertical modulus kf·E,
+//     shear modulus kv·G).
+//   - Supports and ties: the base is fixed. When openings reach the top, the
+//     top nodes' horizontal displacements are tied together (a collector;
+//     off with the wall's Analysis.NoTopTie). A fixed-fixed wall ties the
+//     top nodes' vertical displacements, so its top cannot rotate but
+//     gravity still enters the wall. Ties are solved by a Schur complement
+//     outside the band; the CalculiX export writes them as *EQUATION.
+//   - Loads: V = 1 over the top by tributary length of solid top edge; a
+//     line load along the whole top (over an opening that reaches the top,
+//     half to each side); self weight as a consistent body force.
+//   - Deflection: the work-conjugate average Σ f_i u_i / V of the loaded
+//     nodes (with the collector, the collector's displacement), so that
+//     V/δ is the energy-consistent stiffness.
+//   - Section forces: the nodal forces K_e u_e − f_e that the pier's own
+//     elements receive along the section line, summed into V, N and M about
+//     the centroid of the section's solid length: exact for equilibrium.
 //
 // # Elements
 //
@@ -58,26 +63,20 @@
 //     can be compared one to one (calculix_test.go).
 //   - "qm6" (default): the bilinear quadrilateral with incompatible modes
 //     (1 − ξ²) and (1 − η²) in both displacement components, condensed out
-//     element by element: Wilson, Taylor, Doherty & Ghaboussi, "Incompatible
-//     displacement models", in Numerical and Computer Methods in Structural
-//     Mechanics, Academic Press, 1973, with the correction of Taylor,
-//     Beresford & Wilson, "A non-conforming element for stress analysis",
-//     Int. J. Numer. Meth. Engng 10 (1976) 1211–1219, that makes it pass the
-//     patch test on any quadrilateral (from memory). On the rectangles used
-//     here the correction changes nothing (the Jacobian is constant); the
-//     element represents pure bending exactly and so avoids the shear
-//     locking that makes q4 too stiff in slender piers on coarse meshes.
+//     element by element (Wilson, Taylor, Doherty & Ghaboussi 1973; Taylor,
+//     Beresford & Wilson 1976). It represents pure bending exactly and so
+//     avoids the shear locking that makes q4 too stiff in slender piers on
+//     coarse meshes.
 //
 // # Solver
 //
-// Nodes are numbered across the shorter direction of the grid, which gives
-// the smallest band for a rectilinear mesh, and the symmetric band stiffness
-// is factored by band Cholesky (band.go): a right-looking version with
-// rank-4 updates, measured about 12 % faster than gonum's LAPACK
-// lapack64.Pbtrf, which the tests keep as its reference. (mat.BandCholesky
-// is not used: it always estimates the condition number, which is slow on
-// large meshes.) A wall with no load path makes the matrix singular, and
-// Solve returns an error rather than a number.
+// Nodes are numbered across the shorter direction of the grid, and the
+// band stiffness is factored once by band Cholesky (the band type in
+// band.go, which states its preconditions, takes its workspace from the
+// caller and gives the figure that keeps its kernel), then solved for each
+// load case. The assembly and the factorisation check the context as they
+// go. A wall with no load path makes the matrix singular, and Solve
+// returns an error rather than a number. Solve is safe for concurrent use.
 //
 // # Reading the difference
 //
@@ -87,19 +86,14 @@
 // spandrel (or free at the top of the wall) and adds the strips and piers in
 // series and parallel, while the continuum lets spandrels bend, pier ends
 // rotate and the regions where piers and spandrels meet deform. The
-// difference can be negative for squat walls held fixed-fixed: holding every
-// top node vertically also keeps the top from warping and stretching, which
-// the beam formula does not assume (a solid wall measured −10 % at
-// h/L = 0.25 and −4 % at h/L = 1). Measured on
-// the example walls at the default mesh: a solid wall 0 %, a wall with two
-// small windows held fixed-fixed 23 %, a single door under a deep spandrel
-// 44 %, a row of three windows 112 %. The FE answer converges from below in
-// deflection (it is slightly too stiff); at the default mesh it is within
-// about 2 % of the converged value on the example walls, so differences of a
-// few percent mean nothing. Pier shares can move by several percentage points
-// either way (up to about 10 on the example walls), because the continuum
-// shares the shear by the stiffness of piers whose ends are not rigidly held.
-// WarnDifference is the threshold for the report's warning.
+// difference can be negative for squat walls held fixed-fixed: tying the
+// top keeps it from warping, which the beam formula does not assume. The FE
+// answer converges from the stiff side; halving the default element size
+// moves the deflection by less than 1 % on the test walls, so differences
+// of a few percent mean nothing. Pier shares can move by several
+// percentage points either way, because the continuum shares the shear by
+// the stiffness of piers whose ends are not rigidly held. WarnDifference is
+// the threshold for the report's warning.
 //
 // Both methods are linear-elastic and uncracked unless the modifiers say
 // otherwise; neither checks strength. The results support, and do not

@@ -8,7 +8,7 @@ import (
 	"pierwise/pier/fe"
 )
 
-// The nested-opening wall of the Masonry Chronicles example (DESIGN §3):
+// The nested-opening wall of the Masonry Chronicles example (docs/method.md §2):
 // 18 ft × 16 ft cantilever, a 4 ft × 8 ft door 4 ft from the left end and a
 // 4 ft × 4 ft window with its sill at 2 ft, 12 ft from the left end.
 func ExampleSolve() {

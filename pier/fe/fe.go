@@ -21,9 +21,11 @@ type Options struct {
 // DefaultMesh is the maximum element size when neither Options.Mesh nor the
 // wall's Check.Mesh is set: 6 in (152 mm). With qm6 and the grading toward
 // opening edges, halving it changes the deflection of the example walls by
-// less than 1 % (TestConvergence), and a 30 ft × 12 ft wall with a door and
-// two windows (2,294 elements, 4,832 equations) solves in about 10 ms
-// (BenchmarkSolve, on this project's busy 2-core machine; target 20 ms).
+// less than 1 % (TestConvergence, TestDeflectionMeshIndependent), and on a
+// 30 ft × 12 ft wall with a door and two windows (2,294 elements, 4,832
+// equations) the classic solve and this one with every pier's forces under
+// three load cases take 12–15 ms (BenchmarkKeyToResult, on this project's
+// 2-core machine at a load average of 8; target 20 ms).
 const DefaultMesh = 6 * geometry.Inch
 
 // maxDefaultElements bounds the default mesh of a very large wall: the
@@ -45,15 +47,15 @@ const maxBand = 60_000_000
 //     walls, and for a solid wall the plane-stress model and the classic
 //     (Timoshenko-beam) formula agree within 2.5 % for h/L 0.25 to 3
 //     (TestSolidWallTimoshenko), so a difference there says nothing;
-//   - the hand method overestimates nearly every wall with openings (DESIGN
-//     §5: often by tens of percent; measured 23–112 % on the example walls),
+//   - the hand method overestimates nearly every wall with openings (docs/method.md
+//     §4: often by tens of percent; measured 23–112 % on the example walls),
 //     so a threshold near zero would warn on every wall and be ignored. A
 //     quarter is of the order of the stiffness uncertainty engineers already
 //     accept: halving I_g (cracked-section modifiers 0.70 or 0.35, ACI 318-14
 //     Table 6.6.3.1.1(a)) lowers a cantilever's rigidity by 11 % at h/L = 0.25
-//     and by 40 % at h/L = 1 (DESIGN §3 formulas). Beyond it the layout, not
+//     and by 40 % at h/L = 1 (docs/method.md §2 formulas). Beyond it the layout, not
 //     the stiffness assumption, drives the error, and the wall's share of the
-//     storey shear, proportional to its rigidity (DESIGN §10), deserves a
+//     storey shear, proportional to its rigidity (docs/method.md §9), deserves a
 //     second look;
 //   - it separates the measured cases as an engineer would: a solid wall (0 %)
 //     and a wall with two small windows (23 %) pass, a door under a deep

@@ -14,7 +14,7 @@ import (
 )
 
 // TestSolidWallTimoshenko compares a solid cantilever wall with the
-// Timoshenko-beam deflection of DESIGN §4: d = 4r³ + 3r in units of V/(E t)
+// Timoshenko-beam deflection of docs/method.md §2: d = 4r³ + 3r in units of V/(E t)
 // (shear coefficient 5/6 for a rectangle, G = 0.4 E, i.e. ν = 0.25; Gere &
 // Timoshenko, Mechanics of Materials). The beam has free end sections; the
 // plane-stress wall has a fully fixed base, which makes it a little stiffer.
@@ -40,7 +40,7 @@ func TestSolidWallTimoshenko(t *testing.T) {
 	}
 }
 
-// TestSolidWallFixedSlender: fixed-fixed, beam d = r³ + 3r (DESIGN §4). The
+// TestSolidWallFixedSlender: fixed-fixed, beam d = r³ + 3r (docs/method.md §2). The
 // model's top nodes are all held vertically, which also keeps the top
 // section from warping and stretching; for squat walls this stiffens the
 // model well beyond the beam (about 10 % at h/L = 0.25, measured), so the
@@ -141,7 +141,7 @@ func TestEquilibrium(t *testing.T) {
 	}
 }
 
-// TestShareSums: every band of piers carries the whole shear (DESIGN §3),
+// TestShareSums: every band of piers carries the whole shear (docs/method.md §2),
 // so the piers that together are a wall's whole solid section at one height
 // have shares that sum to 1 (statics).
 func TestShareSums(t *testing.T) {
@@ -243,7 +243,7 @@ func TestOpeningNeverStiffens(t *testing.T) {
 }
 
 // TestConvergence: halving the default element size changes qm6's
-// deflection by less than 1 % on the example walls (issue 3).
+// deflection by less than 1 % on the example walls.
 func TestConvergence(t *testing.T) {
 	for _, c := range exampleWalls() {
 		a, err := Solve(c.wall, c.classic, Options{})
@@ -290,7 +290,7 @@ func TestErrors(t *testing.T) {
 }
 
 // TestWithClassic runs the FE check on the classic method's own result.
-// DESIGN §5: hand methods are known to overestimate the rigidity of walls
+// docs/method.md §4: hand methods are known to overestimate the rigidity of walls
 // with large openings, often by tens of percent; for a solid wall both are
 // the same plane-stress problem (within the 2.5 % of the Timoshenko check).
 func TestWithClassic(t *testing.T) {
@@ -328,7 +328,7 @@ func TestWithClassic(t *testing.T) {
 }
 
 // TestModifiers: with stiffness modifiers the solid wall still follows the
-// beam formula of DESIGN §3, d = 4r³/kf + 1.2 r/(g kv) with g = 0.4: the
+// beam formula of docs/method.md §2, d = 4r³/kf + 1.2 r/(g kv) with g = 0.4: the
 // modifiers scale the vertical modulus (bending) and the shear modulus.
 // Beam theory is Timoshenko's (Gere & Timoshenko, Mechanics of Materials);
 // same 2.5 % as TestSolidWallTimoshenko. (Squat walls with a softened shear
@@ -424,7 +424,7 @@ func TestConcurrent(t *testing.T) {
 	}
 }
 
-// TestConvergenceWallFiles: the same convergence check (issue 3) on the
+// TestConvergenceWallFiles: the same convergence check on the
 // example wall files of the project (testdata/walls).
 func TestConvergenceWallFiles(t *testing.T) {
 	files, err := filepath.Glob("../../testdata/walls/*.toml")

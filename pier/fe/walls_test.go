@@ -6,7 +6,7 @@ import (
 )
 
 // Test walls in feet. The leaf piers are written by hand from the classic
-// method's rules (DESIGN §3), so these tests do not depend on pier.Solve.
+// method's rules (docs/method.md §2), so these tests do not depend on pier.Solve.
 
 const ft = geometry.Foot
 
@@ -47,7 +47,8 @@ type testWall struct {
 	sections [][]string
 }
 
-// exampleWalls are the six kinds of wall the issue asks for.
+// exampleWalls are six kinds of wall: solid, a door, a band of windows,
+// nested openings, two storeys, and a fixed-fixed wall.
 func exampleWalls() []testWall {
 	return []testWall{
 		{name: "solid", wall: wallFt(20, 10, geometry.Cantilever)},
@@ -66,7 +67,7 @@ func exampleWalls() []testWall {
 			sections: [][]string{{"P1", "P2", "P3", "P4"}},
 		},
 		{
-			// Geometry of the Masonry Chronicles nested-opening example (DESIGN §3).
+			// Geometry of the Masonry Chronicles nested-opening example (docs/method.md §2).
 			name:      "nested",
 			wall:      wallFt(18, 16, geometry.Cantilever, opening("D1", 4, 0, 4, 8), opening("W1", 12, 2, 4, 4)),
 			classic:   classicOf(leaf("P1", 0, 0, 4, 8), leaf("P2.1", 8, 2, 12, 6), leaf("P2.2", 16, 2, 18, 6)),
