@@ -354,6 +354,9 @@ func buildModel(w *geometry.Wall, set setup) (*model, error) {
 	if len(m.elems) == 0 {
 		return nil, errors.New("the openings leave no solid wall to model")
 	}
+	if !m.connected() {
+		return nil, errSingular
+	}
 	md := newModel(m, set.kind, set.d)
 	top := m.ny
 	md.constrain(func(n, c int) bool {

@@ -262,3 +262,37 @@ func lineIndex(lines []float64, v float64) int {
 	}
 	return -1
 }
+
+// connected reports whether every solid cell is joined to the base through
+// cells that share an edge. A part that is not (cut off by openings, or
+// joined only at a corner, which is a hinge) is a mechanism: its stiffness
+// is singular, and rounding could otherwise give it a finite, meaningless
+// answer.
+func (m *mesh) connected() bool {
+	seen := make([]bool, m.nx*m.ny)
+	stack := make([]int, 0, m.nx)
+	for i := 0; i < m.nx; i++ {
+		if m.solid[i] {
+			seen[i] = true
+			stack = append(stack, i)
+		}
+	}
+	reached := len(stack)
+	for len(stack) > 0 {
+		c := stack[len(stack)-1]
+		stack = stack[:len(stack)-1]
+		i, j := c%m.nx, c/m.nx
+		for _, d := range [4][2]int{{1, 0}, {-1, 0}, {0, 1}, {0, -1}} {
+			a, b := i+d[0], j+d[1]
+			if a < 0 || a >= m.nx || b < 0 || b >= m.ny {
+				continue
+			}
+			if k := b*m.nx + a; m.solid[k] && !seen[k] {
+				seen[k] = true
+				reached++
+				stack = append(stack, k)
+			}
+		}
+	}
+	return reached == len(m.elems)
+}
