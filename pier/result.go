@@ -191,6 +191,7 @@ const (
 	WarnFixedPiers   = "fixed piers"
 	WarnFixedTop     = "fixed top"
 	WarnOnePier      = "one pier in its band"
+	WarnMergedEdges  = "merged opening edges" // SnapEdges
 )
 
 // LayoutWarning reports whether a warning kind comes from the layout of the

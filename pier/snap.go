@@ -20,13 +20,14 @@ import (
 const SnapTolerance = geometry.Inch / 32
 
 // SnapEdges returns w with the active layout's opening edges that lie closer
-// than SnapTolerance merged, and one warning per merge naming the two
-// openings (or the opening and the wall's edge). When nothing is merged it
+// than SnapTolerance merged, and one warning per merge (kind
+// WarnMergedEdges) naming the two openings (or the opening and the wall's
+// edge). When nothing is merged it
 // returns w itself and no warnings; otherwise a copy, and w is unchanged.
 // Both the classic method and the finite-element model call it, so both see
 // the same wall. An edge is never moved when that would leave its opening
 // without width or height.
-func SnapEdges(w *geometry.Wall) (*geometry.Wall, []string) {
+func SnapEdges(w *geometry.Wall) (*geometry.Wall, []Warning) {
 	if w == nil || w.Active < 0 || w.Active >= len(w.Layouts) || len(w.Layouts[w.Active].Openings) == 0 {
 		return w, nil
 	}
@@ -50,7 +51,7 @@ func SnapEdges(w *geometry.Wall) (*geometry.Wall, []string) {
 		}
 		return "#" + strconv.Itoa(i+1)
 	}
-	var warns []string
+	var warns []Warning
 	changed := false
 	// One direction at a time: x (0: left edges, 1: right) then y.
 	for dir := 0; dir < 2; dir++ {
@@ -113,8 +114,13 @@ func SnapEdges(w *geometry.Wall) (*geometry.Wall, []string) {
 				if anchor.op < 0 {
 					other = wallNames[anchor.which]
 				}
-				warns = append(warns, fmt.Sprintf("the edges of %s and %s are %s apart, closer than %s: they are taken as one line, moving %s's edge",
-					name(e.op), other, gapText(gap, w.Units), gapText(tol, w.Units), name(e.op)))
+				subject := name(e.op)
+				if anchor.op >= 0 {
+					subject = other + ", " + subject
+				}
+				warns = append(warns, Warning{Kind: WarnMergedEdges, Severity: SeverityInfo, Subject: subject,
+					Text: fmt.Sprintf("the edges of %s and %s are %s apart, closer than %s: they are taken as one line, moving %s's edge",
+						name(e.op), other, gapText(gap, w.Units), gapText(tol, w.Units), name(e.op))})
 				rects[e.op] = r
 				changed = true
 			}

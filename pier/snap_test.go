@@ -22,7 +22,7 @@ func TestSnapEdgesMergesNearEdges(t *testing.T) {
 		geometry.Opening{Name: "D2", X: 7*ft + 3e-6, Width: 3 * ft, Height: 7 * ft},
 	)
 	got, warns := SnapEdges(w)
-	if len(warns) != 1 || !strings.Contains(warns[0], "D1") || !strings.Contains(warns[0], "D2") {
+	if len(warns) != 1 || !strings.Contains(warns[0].Text, "D1") || !strings.Contains(warns[0].Text, "D2") || warns[0].Subject != "D1, D2" || warns[0].Kind != WarnMergedEdges {
 		t.Fatalf("warnings %q, want one naming D1 and D2", warns)
 	}
 	a, b := got.Openings()[0].Rect(), got.Openings()[1].Rect()
@@ -85,18 +85,20 @@ func TestSnapEdgesCases(t *testing.T) {
 	}
 }
 
-// The 3 µm gap between two doors: after SnapEdges the classic method
-// solves the wall as one wide door; the finite-element model used to find
+// The 3 µm gap between two doors: Solve merges the edges (SnapEdges),
+// solves the wall as one wide door and says so; the finite-element model used to find
 // no load path through the 3 µm pier between them.
 func TestSnapEdgesClassicSolves(t *testing.T) {
 	ft := geometry.Foot
-	w, _ := SnapEdges(snapWall(
+	res, err := Solve(snapWall(
 		geometry.Opening{Name: "D1", X: 4 * ft, Width: 3 * ft, Height: 7 * ft},
 		geometry.Opening{Name: "D2", X: 7*ft + 3e-6, Width: 3 * ft, Height: 7 * ft},
 	))
-	res, err := Solve(w)
 	if err != nil {
 		t.Fatal(err)
+	}
+	if len(res.Warnings) == 0 || res.Warnings[0].Kind != WarnMergedEdges {
+		t.Errorf("warnings %+v, want the merge first", res.Warnings)
 	}
 	for _, p := range res.Piers {
 		if p.L() < float64(SnapTolerance) {

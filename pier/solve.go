@@ -246,6 +246,7 @@ func Solve(w *geometry.Wall) (*Result, error) {
 	if w == nil {
 		return nil, errors.New("pier: no wall")
 	}
+	w, merged := SnapEdges(w) // the same wall the finite-element model sees
 	ops, err := checkWall(w)
 	if err != nil {
 		return nil, err
@@ -310,6 +311,7 @@ func Solve(w *geometry.Wall) (*Result, error) {
 		return nil, err
 	}
 	s.assumptions(w, ops)
+	r.Warnings = append(merged, r.Warnings...)
 	if err := r.checkFinite(); err != nil {
 		return nil, err
 	}

@@ -184,7 +184,7 @@ func SolveContext(ctx context.Context, w *geometry.Wall, classic *pier.Result, o
 	if classic != nil && classic.Rigidity > 0 && !math.IsInf(classic.Rigidity, 0) {
 		r.Difference = (classic.Rigidity - r.Rigidity) / r.Rigidity
 	}
-	r.Warnings = append(merged, topWarnings(w, set.collector)...)
+	r.Warnings = append(pier.Texts(merged), topWarnings(w, set.collector)...)
 	r.Notes = set.notes
 	if err := r.absolute(w); err != nil {
 		return nil, err

@@ -99,6 +99,13 @@ func TestPatch(t *testing.T) {
 			// Uniform stress: τxy = G (a2 + b1); the shear across a horizontal
 			// section of length l is τ l.
 			tau := d[2][2] * (a[2] + b[1])
+			// Every element's centre stress is the uniform stress.
+			sx := d[0][0]*a[1] + d[0][1]*b[2]
+			for e := range m.elems {
+				if s := md.centreStress(e, u); math.Abs(s[2]-tau) > 1e-12 || math.Abs(s[0]-sx) > 1e-12 {
+					t.Fatalf("%s: element %d centre stress %v, uniform σx %.15g τ %.15g", kind, e, s, sx, tau)
+				}
+			}
 			for _, below := range []bool{true, false} {
 				if got, want := md.section(u, 0, 0.9, 0.5, 1.4, below).v, tau*0.9; math.Abs(got-want) > 1e-12 {
 					t.Errorf("%s: section shear %.15g (below %v), uniform stress gives %.15g", kind, got, below, want)
