@@ -53,6 +53,10 @@ func SnapEdges(w *geometry.Wall) (*geometry.Wall, []Warning) {
 	}
 	var warns []Warning
 	changed := false
+	// Edges that differ by rounding only (sums of typed lengths) are one
+	// line already, as the classic method's own tolerance reads them: they
+	// are neither moved nor reported.
+	rounding := tolerance * math.Max(float64(w.Length), float64(w.Height))
 	// One direction at a time: x (0: left edges, 1: right) then y.
 	for dir := 0; dir < 2; dir++ {
 		type edge struct {
@@ -82,7 +86,7 @@ func SnapEdges(w *geometry.Wall) (*geometry.Wall, []Warning) {
 			}
 			group := edges[a:b]
 			a = b
-			if len(group) < 2 || group[len(group)-1].v == group[0].v {
+			if len(group) < 2 || group[len(group)-1].v-group[0].v <= rounding {
 				continue
 			}
 			// The line they merge onto: the wall's edge when one is in the
@@ -97,7 +101,7 @@ func SnapEdges(w *geometry.Wall) (*geometry.Wall, []Warning) {
 				}
 			}
 			for _, e := range group {
-				if e.op < 0 || e.v == anchor.v {
+				if e.op < 0 || math.Abs(e.v-anchor.v) <= rounding {
 					continue
 				}
 				r := rects[e.op]

@@ -60,6 +60,9 @@ func TestSnapEdgesCases(t *testing.T) {
 		{"apart by 1/16 in", []geometry.Opening{
 			{Name: "D1", X: 4 * ft, Width: 3 * ft, Height: 7 * ft},
 			{Name: "D2", X: 7*ft + in/16, Width: 3 * ft, Height: 7 * ft}}, 0, nil},
+		{"apart by rounding only", []geometry.Opening{
+			{Name: "D1", X: 4 * ft, Width: 3 * ft, Height: 7 * ft},
+			{Name: "D2", X: 7 * ft * (1 + 1e-15), Width: 3 * ft, Height: 7 * ft}}, 0, nil},
 		{"narrower than the tolerance", []geometry.Opening{{Name: "S1", X: 6 * ft, Sill: 3 * ft, Width: in / 64, Height: 2 * ft}}, 0, nil},
 	}
 	for _, c := range cases {
