@@ -35,7 +35,7 @@
 //     edges, the wall's ends and base. Opening edges closer than
 //     pier.SnapTolerance merge first (pier.SnapEdges, with a warning). The
 //     model's size is judged from the mesh lines before anything large is
-//     allocated, and a model over 480 MB of band matrix is refused with its
+//     allocated, and a model over 200 MB of band matrix is refused with its
 //     cause (too many opening edges, or too fine a mesh).
 //   - Material: plane stress, ν from the wall's moduli (0.25 when unknown);
 //     the stiffness modifiers make it orthotropic (vertical modulus kf·E,

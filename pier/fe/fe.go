@@ -33,11 +33,13 @@ const DefaultMesh = 6 * geometry.Inch
 const maxDefaultElements = 8000
 
 // maxBand bounds the band matrix (number of stored values, 8 bytes each:
-// 480 MB) so that a user's very fine mesh, or a layout with thousands of
-// opening edges, is refused instead of exhausting memory or taking minutes.
-// It is checked from the mesh lines alone, before the mesh is built
-// (checkSize). The 160 × 80 mesh of a 20 ft × 10 ft wall needs 4.3 million.
-const maxBand = 60_000_000
+// 200 MB) so that a user's very fine mesh, or a layout with thousands of
+// opening edges, is refused instead of exhausting memory or taking many
+// seconds (an editor may run one solve in the background at any time). It
+// is checked from the mesh lines alone, before the mesh is built
+// (checkSize). The 160 × 80 mesh of a 20 ft × 10 ft wall needs 4.3 million,
+// the default mesh of a 30 ft × 12 ft wall with three openings 0.5 million.
+const maxBand = 25_000_000
 
 // WarnDifference is the relative difference (classic − FE) / FE in rigidity
 // beyond which the report warns that the hand method is far from the
