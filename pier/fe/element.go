@@ -173,30 +173,3 @@ func invert4(m [4][4]float64) ([4][4]float64, bool) {
 	}
 	return inv, true
 }
-
-// centreStress returns the stress [σx σy τxy] at the centre of element e
-// under the nodal displacements u, for a thickness of 1 (multiply by the
-// load's scale and divide by the wall's thickness for real stresses). At
-// the centre the incompatible modes' strains vanish (their derivatives are
-// linear in ξ and η), so the value is the element's own for qm6 as well as
-// q4. It is the stress recovery a stress-field drawing samples.
-func (md *model) centreStress(e int, u []float64) [3]float64 {
-	c := md.m.cellOf[e]
-	w := md.m.xs[c[0]+1] - md.m.xs[c[0]]
-	h := md.m.ys[c[1]+1] - md.m.ys[c[1]]
-	var eps [3]float64 // εx, εy, γxy
-	for a, n := range md.m.elems[e] {
-		dx, dy := corner[a][0]/(2*w), corner[a][1]/(2*h) // ∂N_a/∂x, ∂N_a/∂y at ξ = η = 0
-		ux, uy := u[2*n], u[2*n+1]
-		eps[0] += dx * ux
-		eps[1] += dy * uy
-		eps[2] += dy*ux + dx*uy
-	}
-	var s [3]float64
-	for r := 0; r < 3; r++ {
-		for k := 0; k < 3; k++ {
-			s[r] += md.d[r][k] * eps[k]
-		}
-	}
-	return s
-}

@@ -101,8 +101,9 @@ func TestPatch(t *testing.T) {
 			tau := d[2][2] * (a[2] + b[1])
 			// Every element's centre stress is the uniform stress.
 			sx := d[0][0]*a[1] + d[0][1]*b[2]
-			for e := range m.elems {
-				if s := md.centreStress(e, u); math.Abs(s[2]-tau) > 1e-12 || math.Abs(s[0]-sx) > 1e-12 {
+			for e, c := range m.cellOf {
+				w, h := m.xs[c[0]+1]-m.xs[c[0]], m.ys[c[1]+1]-m.ys[c[1]]
+				if s := centreStress(&d, w, h, md.dofs(e), u); math.Abs(s.XY-tau) > 1e-12 || math.Abs(s.X-sx) > 1e-12 {
 					t.Fatalf("%s: element %d centre stress %v, uniform σx %.15g τ %.15g", kind, e, s, sx, tau)
 				}
 			}

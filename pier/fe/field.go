@@ -1,6 +1,7 @@
 package fe
 
 import (
+	"context"
 	"math"
 	"sort"
 
@@ -45,16 +46,17 @@ type Field struct {
 // StressField solves the model of w as Solve does and returns its stress
 // field under V = 1, t = 1.
 func StressField(w *geometry.Wall, classic *pier.Result, opt Options) (*Field, error) {
-	kind, size, d, leaves, err := prepare(w, classic, opt)
+	w, _ = pier.SnapEdges(w) // the wall Solve models
+	set, err := prepare(w, classic, opt)
 	if err != nil {
 		return nil, err
 	}
-	sol, err := solveWall(w, leaves, size, kind, d)
+	sol, err := solveWall(context.Background(), w, set)
 	if err != nil {
 		return nil, err
 	}
-	m := sol.md.m
-	f := &Field{Elem: kind, Mesh: geometry.Length(size), xs: m.xs, ys: m.ys}
+	m, d := sol.md.m, set.d
+	f := &Field{Elem: set.kind, Mesh: geometry.Length(set.size), xs: m.xs, ys: m.ys}
 	f.cell = make([]int, m.nx*m.ny)
 	for i := range f.cell {
 		f.cell[i] = -1
@@ -64,7 +66,7 @@ func StressField(w *geometry.Wall, classic *pier.Result, opt Options) (*Field, e
 	for e, c := range m.cellOf {
 		x0, x1 := m.xs[c[0]], m.xs[c[0]+1]
 		y0, y1 := m.ys[c[1]], m.ys[c[1]+1]
-		s := centreStress(&d, x1-x0, y1-y0, sol.md.dofs(e), sol.u)
+		s := centreStress(&d, x1-x0, y1-y0, sol.md.dofs(e), sol.lateral.u)
 		f.cell[c[1]*m.nx+c[0]] = len(f.Cells)
 		f.Cells = append(f.Cells, FieldCell{Rect: geometry.Rect{X0: x0, Y0: y0, X1: x1, Y1: y1}, Center: s})
 		for _, g := range [4][2]int{{0, 0}, {1, 0}, {1, 1}, {0, 1}} {
