@@ -4,8 +4,6 @@ import (
 	"errors"
 	"fmt"
 	"math"
-	"os"
-	"path/filepath"
 	"sort"
 	"strconv"
 	"strings"
@@ -88,7 +86,7 @@ func storeyFile(raw map[string]any, lines keyLines) *Error {
 // LoadFile reads and parses the wall file at path. (It cannot be called
 // Load: that name is the type of the wall's load.)
 func LoadFile(path string) (*Wall, error) {
-	data, err := os.ReadFile(path)
+	data, err := ReadUserFile(path)
 	if err != nil {
 		return nil, err
 	}
@@ -604,7 +602,7 @@ func Save(path string, w *Wall) error {
 	if err != nil {
 		return err
 	}
-	if old, err := os.ReadFile(path); err == nil {
+	if old, err := ReadUserFile(path); err == nil {
 		if kept, err := MarshalKeeping(old, w); err == nil {
 			data = kept
 		}
@@ -612,14 +610,9 @@ func Save(path string, w *Wall) error {
 	return writeAtomic(path, data)
 }
 
-// writeAtomic resolves a symbolic link so that the link keeps pointing at
-// the file it names, then writes through WriteFileAtomic.
-func writeAtomic(path string, data []byte) error {
-	if target, err := filepath.EvalSymlinks(path); err == nil {
-		path = target
-	}
-	return WriteFileAtomic(path, data)
-}
+// writeAtomic is WriteFileAtomic, which keeps a symbolic link pointing at
+// the file it names.
+func writeAtomic(path string, data []byte) error { return WriteFileAtomic(path, data) }
 
 // quote writes a TOML basic string.
 func quote(s string) string {

@@ -8,7 +8,7 @@ import (
 
 // File access, in one place.
 var (
-	readFile = os.ReadFile
+	readFile = geometry.ReadUserFile
 	statFile = os.Stat
 	loadWall = geometry.LoadFile
 )

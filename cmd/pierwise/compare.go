@@ -44,6 +44,9 @@ func runCompare(e *env, args []string) error {
 		return err
 	}
 	if *outPath != "" {
+		if err := checkOutput("compare: -o", *outPath); err != nil {
+			return err
+		}
 		for _, w := range walls {
 			if sameFile(*outPath, w.path) {
 				return usagef("compare: -o %s would overwrite the wall file %s; write the comparison to another file", *outPath, w.path)
@@ -97,7 +100,7 @@ func runCompare(e *env, args []string) error {
 			return err
 		}
 	} else {
-		if err := geometry.WriteFileAtomic(*outPath, buf.Bytes()); err != nil {
+		if err := writeOutput("compare: -o", *outPath, buf.Bytes()); err != nil {
 			return err
 		}
 		fmt.Fprintln(e.stderr, "comparison written to", *outPath)
@@ -153,7 +156,7 @@ func sameFile(a, b string) bool {
 func noAnswerLine(cw compareSide, err error) string {
 	var ce *pier.CutError
 	if errors.As(err, &ce) {
-		if data, rerr := os.ReadFile(cw.path); rerr == nil {
+		if data, rerr := geometry.ReadUserFile(cw.path); rerr == nil {
 			if key := geometry.OpeningKey(cw.wall, ce.Opening); key != "" {
 				return fmt.Sprintf("%s:%d: %s: %v (layout %q)", cw.path, geometry.KeyLine(data, key), key, err, cw.wall.Layouts[cw.wall.Active].Name)
 			}

@@ -1,7 +1,7 @@
 package main
 
 import (
-	"os"
+	"pierwise/geometry"
 
 	"pierwise/demo"
 	"pierwise/storey"
@@ -29,7 +29,7 @@ func runEdit(e *env, args []string) error {
 	if len(pos) != 1 {
 		return usagef("edit needs exactly one file")
 	}
-	if data, err := os.ReadFile(pos[0]); err == nil && storey.IsStoreyFile(data) {
+	if data, err := geometry.ReadUserFile(pos[0]); err == nil && storey.IsStoreyFile(data) {
 		return tui.EditStorey(pos[0])
 	}
 	return tui.EditFile(pos[0])

@@ -40,6 +40,9 @@ func runReport(e *env, args []string) error {
 		arg = files[0]
 	}
 	if *outPath != "" {
+		if err := checkOutput("-o", *outPath); err != nil {
+			return err
+		}
 		for _, in := range reportInputs(arg) {
 			if sameFile(*outPath, in) {
 				return usagef("-o %s would overwrite %s, which the report reads; write the report to another file", *outPath, in)
@@ -72,7 +75,7 @@ func runReport(e *env, args []string) error {
 			return err
 		}
 	} else {
-		if err := geometry.WriteFileAtomic(*outPath, buf.Bytes()); err != nil {
+		if err := writeOutput("-o", *outPath, buf.Bytes()); err != nil {
 			return err
 		}
 		fmt.Fprintln(e.stderr, "report written to", *outPath)
@@ -91,7 +94,7 @@ func reportInputs(arg string) []string {
 	}
 	path, _ := study.SplitArg(arg)
 	files := []string{path}
-	if data, err := os.ReadFile(path); err == nil && storey.IsStoreyFile(data) {
+	if data, err := geometry.ReadUserFile(path); err == nil && storey.IsStoreyFile(data) {
 		if s, err := storey.Parse(path, data); err == nil {
 			for _, w := range s.Walls {
 				files = append(files, w.Path)
@@ -106,7 +109,7 @@ func isStorey(arg string) bool {
 	if arg == "" || strings.Contains(arg, ":") && !fileExists(arg) {
 		return false
 	}
-	data, err := os.ReadFile(arg)
+	data, err := geometry.ReadUserFile(arg)
 	return err == nil && storey.IsStoreyFile(data)
 }
 

@@ -6,7 +6,6 @@ import (
 	"flag"
 	"fmt"
 	"io"
-	"os"
 	"slices"
 	"strconv"
 	"strings"
@@ -114,7 +113,7 @@ func locate(arg string, w *geometry.Wall, err error) error {
 		return err
 	}
 	path, _ := study.SplitArg(arg)
-	data, rerr := os.ReadFile(path)
+	data, rerr := geometry.ReadUserFile(path)
 	key := geometry.OpeningKey(w, ce.Opening)
 	if rerr != nil || key == "" {
 		return err
