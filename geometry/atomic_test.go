@@ -186,4 +186,3 @@ func TestCreateNewFileNeverReplaces(t *testing.T) {
 		}
 	}
 }
-
