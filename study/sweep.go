@@ -124,13 +124,20 @@ func Sweep(w *geometry.Wall, name string, axis Axis, step geometry.Length) ([]Po
 	}
 	// k runs over the grid cur + k·step inside [0, span]; a tolerance of a
 	// micrometre keeps the ends that floating-point rounding nudges out.
+	// The count is taken in floating point before any conversion to int: a
+	// tiny step (1e-18 in) makes a count beyond the range of int.
 	const tol = 1e-6
-	kmin := int(math.Ceil((-cur - tol) / s))
-	kmax := int(math.Floor((span - cur + tol) / s))
-	if kmax-kmin+1 > MaxPoints {
-		return nil, fmt.Errorf("a step of %s makes %d positions; use a larger step (at most %d positions)",
-			FormatStep(step, w.Units), kmax-kmin+1, MaxPoints)
+	fmin := math.Ceil((-cur - tol) / s)
+	fmax := math.Floor((span - cur + tol) / s)
+	if n := fmax - fmin + 1; !(n <= MaxPoints) {
+		count := strconv.FormatFloat(n, 'g', 3, 64)
+		if n < 1e9 {
+			count = strconv.Itoa(int(n))
+		}
+		return nil, fmt.Errorf("a step of %s makes %s positions; use a larger step (at most %d positions)",
+			FormatStep(step, w.Units), count, MaxPoints)
 	}
+	kmin, kmax := int(fmin), int(fmax)
 
 	// One private copy of the active layout's openings, edited in place.
 	work := *w

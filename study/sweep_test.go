@@ -280,3 +280,22 @@ func TestSweepFollowsPhysicalPier(t *testing.T) {
 		}
 	}
 }
+
+// A step so small that the number of positions overflows an int is refused
+// like any step that makes too many positions, never turned into a wrong
+// grid (regression: 1e-18 in printed one row, 1e-20 in said the opening
+// fits nowhere).
+func TestSweepTinyStepRefused(t *testing.T) {
+	w := &geometry.Wall{Length: 18 * geometry.Foot, Height: 16 * geometry.Foot, Thickness: 7.625 * geometry.Inch,
+		Support: geometry.Cantilever, Layouts: []geometry.Layout{{Name: "main", Openings: []geometry.Opening{
+			{Name: "D1", X: 4 * geometry.Foot, Width: 4 * geometry.Foot, Height: 8 * geometry.Foot}}}}}
+	for _, inches := range []float64{1e-15, 1e-18, 1e-20, 1e-300} {
+		_, err := Sweep(w, "D1", AlongX, geometry.Length(inches)*geometry.Inch)
+		if err == nil || !strings.Contains(err.Error(), "use a larger step") {
+			t.Errorf("step %g in: %v, want the too-many-positions refusal", inches, err)
+		}
+	}
+	if pts, err := Sweep(w, "D1", AlongX, geometry.Foot); err != nil || len(pts) != 15 {
+		t.Errorf("1 ft step: %d points, %v; want 15 (x = 0 … 14 ft)", len(pts), err)
+	}
+}

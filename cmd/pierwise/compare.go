@@ -74,6 +74,7 @@ func runCompare(e *env, args []string) error {
 	// A layout the classic method cannot solve (cut or staggered) is shown
 	// in the comparison and, as in solve, makes the exit status 1.
 	var noAnswer []string
+	var feFailures []string // a check asked for that failed: exit status 1 too
 	seen := map[string]bool{}
 	for i := 1; i < len(walls); i++ {
 		c, err := study.CompareWith(walls[0].wall, walls[i].wall, opt)
@@ -84,6 +85,9 @@ func runCompare(e *env, args []string) error {
 			if cw := walls[[]int{0, i}[k]]; side.Err != nil && !seen[cw.label] {
 				seen[cw.label] = true
 				noAnswer = append(noAnswer, noAnswerLine(cw, side.Err))
+			} else if side.Err == nil && side.FEErr != nil && !seen[cw.label] {
+				seen[cw.label] = true
+				feFailures = append(feFailures, cw.label+": "+side.FEErr.Error())
 			}
 		}
 		c.Before.Path, c.Before.Label = walls[0].path, walls[0].label
@@ -107,6 +111,9 @@ func runCompare(e *env, args []string) error {
 	}
 	if len(noAnswer) > 0 {
 		return fmt.Errorf("the classic method has no answer for %s", strings.Join(noAnswer, "; "))
+	}
+	if len(feFailures) > 0 {
+		return fmt.Errorf("the finite-element check failed for %s", strings.Join(feFailures, "; "))
 	}
 	return nil
 }

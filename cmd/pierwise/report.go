@@ -51,6 +51,7 @@ func runReport(e *env, args []string) error {
 	}
 	var buf bytes.Buffer
 	var classicErr error // the report is written, but the wall has no answer
+	var feErr error      // the report is written, but the check asked for failed
 	now := time.Now()
 	if isStorey(arg) {
 		if ff.on {
@@ -69,6 +70,9 @@ func runReport(e *env, args []string) error {
 			return err
 		}
 		classicErr = s.err
+		if classicErr == nil && s.feErr != nil {
+			feErr = feFailed(arg, s.feErr)
+		}
 	}
 	if *outPath == "" {
 		if _, err := e.stdout.Write(buf.Bytes()); err != nil {
@@ -83,7 +87,7 @@ func runReport(e *env, args []string) error {
 	if classicErr != nil {
 		return fmt.Errorf("%s: %w", displayName(arg), classicErr)
 	}
-	return nil
+	return feErr
 }
 
 // reportInputs lists the files a report of arg reads: the wall file, or a

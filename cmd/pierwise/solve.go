@@ -59,6 +59,18 @@ func (f *feFlags) options(w *geometry.Wall) (fe.Options, error) {
 		if m <= 0 {
 			return opt, usagef("--mesh: the element size must be positive")
 		}
+		// The same bounds as [check] mesh in the file: a size larger than
+		// the wall or too fine for it is refused in the file's words.
+		c := *w
+		c.Check.Mesh = m
+		var list geometry.ErrorList
+		if errors.As(c.Validate(), &list) {
+			for _, e := range list {
+				if e.Key == "check.mesh" {
+					return opt, usagef("--mesh %s %s", f.mesh, e.Msg)
+				}
+			}
+		}
 		opt.Mesh = m
 	}
 	if f.element != "" {
@@ -167,6 +179,14 @@ func runSolve(e *env, args []string) error {
 				fmt.Fprintln(e.stderr, "pierwise:", err)
 			}
 			failed = append(failed, err)
+		} else if s.feErr != nil {
+			// A check that was asked for and failed is a failure of the
+			// command: its cause is the wall or the mesh asked for.
+			err := feFailed(f, s.feErr)
+			if len(files) > 1 {
+				fmt.Fprintln(e.stderr, "pierwise:", err)
+			}
+			failed = append(failed, err)
 		}
 		all = append(all, s)
 	}
@@ -189,6 +209,12 @@ func runSolve(e *env, args []string) error {
 		return fmt.Errorf("%d of %d walls could not be solved", len(failed), len(files))
 	}
 	return nil
+}
+
+// feFailed is the error of a finite-element check that was asked for and
+// has no answer.
+func feFailed(arg string, err error) error {
+	return fmt.Errorf("%s: the finite-element check failed: %w", displayName(arg), err)
 }
 
 func displayName(arg string) string {

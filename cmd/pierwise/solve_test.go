@@ -224,3 +224,35 @@ func TestReportRefusesToOverwriteItsInput(t *testing.T) {
 		t.Errorf("report to another file: exit %d: %s", code, errs)
 	}
 }
+
+// A finite-element check that was asked for and fails because of the input
+// makes the exit status 1 with the message; a mesh size out of range on the
+// command line is refused with the words of [check] mesh.
+func TestFEFailureExitStatus(t *testing.T) {
+	dir := t.TempDir()
+	src, err := os.ReadFile("../../testdata/walls/nested.toml")
+	if err != nil {
+		t.Fatal(err)
+	}
+	p := filepath.Join(dir, "wall.toml")
+	if err := os.WriteFile(p, src, 0o644); err != nil {
+		t.Fatal(err)
+	}
+	for _, c := range []struct {
+		args []string
+		code int
+		want string
+	}{
+		{[]string{"solve", p, "--mesh", "1e308in"}, exitUsage, "larger than the wall"},
+		{[]string{"solve", p, "--mesh", "1e-300in"}, exitUsage, "too fine"},
+		{[]string{"solve", p, "--mesh", "0.25in"}, exitInput, "finite-element check failed"},
+		{[]string{"report", p, "--mesh", "0.25in"}, exitInput, "finite-element check failed"},
+		{[]string{"solve", p, "--mesh", "6in"}, exitOK, ""},
+	} {
+		var out, errb strings.Builder
+		code := run(&env{stdout: &out, stderr: &errb}, c.args)
+		if code != c.code || !strings.Contains(errb.String(), c.want) {
+			t.Errorf("%v: exit %d, stderr %q; want %d and %q", c.args, code, errb.String(), c.code, c.want)
+		}
+	}
+}
