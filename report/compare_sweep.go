@@ -21,7 +21,7 @@ import (
 func SweepTable(out io.Writer, w *geometry.Wall, name string, axis study.Axis, step geometry.Length, pts []study.Point) error {
 	u := UnitsFor(w.Units)
 	layout := w.Layouts[w.Active].Name
-	fmt.Fprintf(out, "Sweep of %s along %s in steps of %s: %s, layout %q\n", name, axis, study.FormatStep(step, w.Units), w.Title, layout)
+	fmt.Fprintf(out, "Sweep of %s along %s in steps of %s: %s, layout %q\n", geometry.Visible(name), axis, study.FormatStep(step, w.Units), geometry.Visible(w.Title), layout)
 	if len(pts) == 0 {
 		_, err := fmt.Fprintln(out, "The opening fits nowhere else along this axis.")
 		return err

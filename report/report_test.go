@@ -212,3 +212,22 @@ func TestGrouped(t *testing.T) {
 		}
 	}
 }
+
+// A title and an opening name holding escape sequences, BEL and NUL reach
+// the report escaped (regression: a title cleared the screen and set the
+// terminal's title).
+func TestReportShowsControlCharactersEscaped(t *testing.T) {
+	var b strings.Builder
+	tx := NewText(&b)
+	tx.KV("Title", "Hi\x1b]0;PWNED\a\x1b[2J\x00")
+	tx.Line("D\x1b[31m1")
+	out := b.String()
+	for _, c := range out {
+		if c < 0x20 && c != '\n' || c == 0x7f {
+			t.Fatalf("report holds control character %U: %q", c, out)
+		}
+	}
+	if !strings.Contains(out, `Hi\x1b]0;PWNED\a\x1b[2J\x00`) || !strings.Contains(out, `D\x1b[31m1`) {
+		t.Errorf("escapes not shown: %q", out)
+	}
+}

@@ -5,6 +5,8 @@ import (
 	"io"
 	"strings"
 	"unicode/utf8"
+
+	"pierwise/geometry"
 )
 
 // Width is the line width of the text reports.
@@ -24,12 +26,14 @@ func NewText(out io.Writer) *Text { return &Text{out: out} }
 // Err returns the first write error.
 func (w *Text) Err() error { return w.err }
 
-// Line writes one line without trailing blanks.
+// Line writes one line without trailing blanks. Control characters (from a
+// title or a name in a file) are shown escaped (geometry.Visible), so a
+// report never carries an escape sequence to a terminal or a printer.
 func (w *Text) Line(s string) {
 	if w.err != nil {
 		return
 	}
-	_, w.err = fmt.Fprintln(w.out, strings.TrimRight(s, " "))
+	_, w.err = fmt.Fprintln(w.out, geometry.Visible(strings.TrimRight(s, " ")))
 }
 
 // Blank writes an empty line.

@@ -15,6 +15,8 @@ import (
 	"os"
 	"sort"
 	"strings"
+
+	"pierwise/geometry"
 )
 
 // version is the program version printed in reports.
@@ -65,7 +67,7 @@ func usagef(format string, a ...any) error { return &usageError{fmt.Sprintf(form
 var defaultCommand func(env *env) error
 
 func main() {
-	os.Exit(run(&env{stdout: os.Stdout, stderr: os.Stderr, stdin: os.Stdin}, os.Args[1:]))
+	os.Exit(run(&env{stdout: visibleWriter{os.Stdout}, stderr: visibleWriter{os.Stderr}, stdin: os.Stdin}, os.Args[1:]))
 }
 
 // run executes one command line and returns the exit status.
@@ -109,11 +111,11 @@ func status(e *env, err error) int {
 	}
 	var ue *usageError
 	if errors.As(err, &ue) {
-		fmt.Fprintln(e.stderr, "pierwise:", ue.msg)
+		fmt.Fprintln(e.stderr, "pierwise:", geometry.VisibleLines(ue.msg))
 		fmt.Fprintln(e.stderr, "run 'pierwise help' for the commands")
 		return exitUsage
 	}
-	fmt.Fprintln(e.stderr, "pierwise:", strings.TrimRight(err.Error(), "\n"))
+	fmt.Fprintln(e.stderr, "pierwise:", geometry.VisibleLines(strings.TrimRight(err.Error(), "\n")))
 	return exitInput
 }
 

@@ -256,3 +256,18 @@ func TestFEFailureExitStatus(t *testing.T) {
 		}
 	}
 }
+
+// What a command prints never carries a raw control character from a file:
+// the title and a name holding ESC, BEL and NUL are shown escaped.
+func TestVisibleWriter(t *testing.T) {
+	var b strings.Builder
+	w := visibleWriter{&b}
+	in := "Hi\x1b]0;x\a\x00 ok\n\tpage\f"
+	n, err := w.Write([]byte(in))
+	if err != nil || n != len(in) {
+		t.Fatalf("wrote %d, %v", n, err)
+	}
+	if got, want := b.String(), `Hi\x1b]0;x\x07\x00 ok`+"\n\tpage\f"; got != want {
+		t.Errorf("got %q, want %q", got, want)
+	}
+}
