@@ -7,7 +7,6 @@ import (
 	"path/filepath"
 	"strconv"
 	"strings"
-	"time"
 
 	"github.com/charmbracelet/bubbles/help"
 	"github.com/charmbracelet/bubbles/key"
@@ -16,7 +15,6 @@ import (
 	"pierwise/drawing"
 	"pierwise/geometry"
 	"pierwise/pier"
-	"pierwise/pier/fe"
 	"pierwise/report"
 )
 
@@ -60,28 +58,6 @@ const (
 	modeHelp
 	modeForm
 	modeConfirmQuit
-)
-
-// feState is the finite-element check: on or off, and its latest answer.
-// id grows with every edit; answers tagged with an older id are dropped.
-type feState struct {
-	on      bool
-	id      int
-	running bool
-	res     *fe.Result
-	err     error
-}
-
-// feDelay lets a burst of key presses settle before the FE check starts.
-const feDelay = 250 * time.Millisecond
-
-type (
-	feStartMsg struct{ id int }
-	feDoneMsg  struct {
-		id  int
-		res *fe.Result
-		err error
-	}
 )
 
 type confirmKeys struct {
@@ -156,27 +132,7 @@ func (e *elevation) resolve() {
 	if e.sel < 0 && n > 0 {
 		e.sel = 0
 	}
-	e.fe.id++
-	e.fe.res, e.fe.err, e.fe.running = nil, nil, false
-}
-
-// scheduleFE starts the FE check after feDelay unless another edit comes.
-func (e *elevation) scheduleFE() tea.Cmd {
-	if !e.fe.on {
-		return nil
-	}
-	id := e.fe.id
-	e.fe.running = true
-	return e.c.tick(feDelay, func(time.Time) tea.Msg { return feStartMsg{id} })
-}
-
-// runFE solves the FE model in the background on the wall and classic
-// result of this moment (both are never mutated: edits replace them).
-func runFE(id int, w *geometry.Wall, classic *pier.Result) tea.Cmd {
-	return func() tea.Msg {
-		r, err := fe.Solve(w, classic, fe.Options{Mesh: w.Check.Mesh, Element: w.Check.Element})
-		return feDoneMsg{id: id, res: r, err: err}
-	}
+	e.supersede()
 }
 
 func (e *elevation) say(format string, a ...any) {
@@ -189,17 +145,9 @@ func (e *elevation) refuse(format string, a ...any) {
 
 func (e *elevation) update(msg tea.Msg) (screen, tea.Cmd) {
 	switch msg := msg.(type) {
-	case feStartMsg:
-		if msg.id != e.fe.id || !e.fe.on {
-			return e, nil
-		}
-		return e, runFE(msg.id, e.wall(), e.res)
-	case feDoneMsg:
-		if msg.id != e.fe.id {
-			return e, nil // an answer for a wall that has changed since
-		}
-		e.fe.res, e.fe.err, e.fe.running = msg.res, msg.err, false
-		return e, nil
+	case feStartMsg, feDoneMsg:
+		cmd, _ := e.feMessage(msg)
+		return e, cmd
 	case resumeMsg:
 		if e.version != e.c.doc.version {
 			e.resolve()
@@ -361,14 +309,7 @@ func (e *elevation) key(msg tea.KeyMsg) tea.Cmd {
 	case key.Matches(msg, k.DelLayout):
 		e.deleteLayout()
 	case key.Matches(msg, k.FE):
-		e.fe.on = !e.fe.on
-		e.fe.id++
-		e.fe.res, e.fe.err, e.fe.running = nil, nil, false
-		if e.fe.on {
-			e.say("finite-element check on")
-			return e.scheduleFE()
-		}
-		e.say("finite-element check off")
+		return e.toggleFE()
 	case key.Matches(msg, k.Snapshot):
 		return e.snapshot()
 	default:
@@ -608,7 +549,7 @@ func (e *elevation) deleteLayout() {
 func (e *elevation) snapshot() tea.Cmd {
 	d := e.c.doc
 	in := report.Input{Path: d.path, Wall: d.wall, Result: e.res, Err: e.solveErr, Now: e.c.now(), Version: ProgramVersion}
-	if e.fe.on && !e.fe.running {
+	if e.fe.on && !e.fe.running && !e.fe.stale() {
 		in.FE, in.FEErr = e.fe.res, e.fe.err
 	}
 	draw := drawing.WallInput{Path: d.path, Wall: d.wall, Basis: "classic strip method", Piers: drawing.LeafPiers(e.res),

@@ -359,9 +359,17 @@ func (e *elevation) feLines(l elevLayout) []string {
 	st := e.c.styles
 	head := st.heading.Render("FE check") + st.dim.Render(" (plane stress)")
 	f := e.fe
+	stale := f.stale() && (f.res != nil || f.err != nil)
+	if stale {
+		// The numbers of the wall before the last edit, until the new
+		// check answers: said, so that nobody copies them.
+		head = st.heading.Render("FE check") + st.note.Render(" updating...")
+	}
 	switch {
 	case !f.on:
 		return []string{head, st.dim.Render("off: f turns it on")}
+	case f.err != nil && stale:
+		return []string{head, st.dim.Render("previous wall had no answer")}
 	case f.err != nil:
 		return append([]string{head, st.errText.Render("No answer:")}, wrap(f.err.Error(), l.sumW)...)
 	case f.res == nil:
@@ -369,6 +377,12 @@ func (e *elevation) feLines(l elevLayout) []string {
 	}
 	r := f.res
 	lines := []string{head}
+	if stale {
+		kv := func(k, v string) { lines = append(lines, l.kv(k, st.dim.Render(v))...) }
+		kv("was", num(r.Rigidity)+" x E t")
+		kv("mesh", fmt.Sprintf("%s %s, %d el.", geometry.FormatLength(r.Mesh, e.wall().Units), r.Element, r.Elements))
+		return lines
+	}
 	kv := func(k, v string) { lines = append(lines, l.kv(k, v)...) }
 	kv("relative", num(r.Rigidity)+" x E t")
 	if e.res != nil && r.Rigidity > 0 {
@@ -405,7 +419,7 @@ func (e *elevation) tableView(l elevLayout) string {
 	head := []string{"pier", "h", "L", "h/L", "support", "share", "V " + u.Force, "M " + u.Moment, "bend/shear", "FE share"}
 	left := []bool{true, false, false, false, true, true, false, false, false, false}
 	feShare := map[string]float64{}
-	if f := e.fe.res; e.fe.on && f != nil {
+	if f := e.fe.res; e.fe.on && f != nil && !e.fe.stale() {
 		for _, p := range f.Piers {
 			feShare[p.Name] = p.Share
 		}

@@ -15,6 +15,9 @@ import (
 type root struct {
 	c     *common
 	stack []screen
+
+	smallQuit bool // ctrl+c was pressed once below the smallest size, with unsaved changes
+	smallHelp bool // ? was pressed below the smallest size: the notice lists the keys
 }
 
 func newRoot(c *common, first screen) *root {
@@ -34,6 +37,7 @@ func (m *root) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
 	switch msg := msg.(type) {
 	case tea.WindowSizeMsg:
 		m.c.width, m.c.height = msg.Width, msg.Height
+		m.smallQuit, m.smallHelp = false, false
 		for _, s := range m.stack {
 			s.setSize(msg.Width, msg.Height)
 		}
@@ -48,7 +52,14 @@ func (m *root) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
 			return m.route(resumeMsg{})
 		}
 		return m, nil
+	case tea.MouseMsg:
+		if m.small() {
+			return m, nil // nothing shows where the mouse points
+		}
 	case tea.KeyMsg:
+		if m.small() {
+			return m.smallKey(msg)
+		}
 		if keys, ok := splitRunes(msg); ok {
 			cmds := make([]tea.Cmd, len(keys))
 			for i, k := range keys {
@@ -65,6 +76,31 @@ func (m *root) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
 		}
 	}
 	return m.route(msg)
+}
+
+// small reports whether the window is below the editor's size, where the
+// root draws a notice instead of the screen (before the first size is
+// known nothing is drawn and keys go through).
+func (m *root) small() bool {
+	w, h := m.c.width, m.c.height
+	return (w != 0 || h != 0) && (w < minWidth || h < minHeight)
+}
+
+// smallKey is a key pressed while the "window too small" notice shows:
+// only quit and help act, since nothing else can be seen. Quit asks by a
+// second press when there are unsaved changes (the recovery copy stays).
+func (m *root) smallKey(msg tea.KeyMsg) (tea.Model, tea.Cmd) {
+	switch {
+	case key.Matches(msg, m.c.keys.Quit):
+		if !m.unsaved() || m.smallQuit {
+			return m, tea.Quit
+		}
+		m.smallQuit = true
+		return m, nil
+	case key.Matches(msg, m.c.keys.Help):
+		m.smallHelp = !m.smallHelp
+	}
+	return m, nil
 }
 
 // splitRunes splits a key message that holds several typed runes (a fast
@@ -112,17 +148,23 @@ func (m *root) View() string {
 		return "" // no size yet
 	}
 	if w < minWidth || h < minHeight {
-		return tooSmall(w, h)
+		return tooSmall(w, h, m.smallQuit, m.smallHelp)
 	}
 	return m.top().view()
 }
 
 // tooSmall is the notice drawn instead of a screen in a small window.
-func tooSmall(w, h int) string {
+func tooSmall(w, h int, quitAsked, help bool) string {
 	lines := []string{
 		"Window too small:",
 		fmt.Sprintf("%d×%d, pierwise needs %d×%d.", w, h, minWidth, minHeight),
 		"ctrl+c quits.",
+	}
+	if help {
+		lines = append(lines, "Only ctrl+c and ? act here;", "enlarge the window to edit.")
+	}
+	if quitAsked {
+		lines[2] = "Unsaved changes: ctrl+c again quits without saving."
 	}
 	for i, l := range lines {
 		if lipgloss.Width(l) > w {
@@ -137,5 +179,5 @@ func tooSmall(w, h int) string {
 
 // newCommon builds the shared part of the screens.
 func newCommon(doc *document, r *lipgloss.Renderer) *common {
-	return &common{styles: newStyles(r), keys: newCommonKeys(), doc: doc, now: time.Now, tick: tea.Tick}
+	return &common{styles: newStyles(r), keys: newCommonKeys(), doc: doc, now: time.Now, tick: tea.Tick, fe: &feGate{}}
 }

@@ -64,6 +64,7 @@ type common struct {
 	keys          commonKeys
 	doc           *document
 	now           func() time.Time // the clock; fixed in tests
+	fe            *feGate          // the one finite-element check in flight
 
 	// tick is tea.Tick; tests that run commands replace it so that a timer
 	// (the FE check's delay) is never mistaken for work, however slow the
