@@ -20,6 +20,11 @@ type document struct {
 
 	undo, redo []snapshot
 
+	// sum is the content hash of the file as read or last saved, to notice
+	// a change made by another program before saving over it; nil when
+	// unknown.
+	sum *geometry.Sum
+
 	// own is the layout the file itself names active, when the wall was
 	// opened with another one active (a storey file's layout = "..."); save
 	// writes own back so that the file's active key does not change.

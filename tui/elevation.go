@@ -47,8 +47,10 @@ type elevation struct {
 
 	fe feState
 
-	confirm confirmKeys
-	drag    drag
+	ask    *choice // the open question (modeAsk)
+	page   *helpPage
+	saving bool // a save command is under way
+	drag   drag
 }
 
 type elevationMode int
@@ -57,21 +59,13 @@ const (
 	modeNormal elevationMode = iota
 	modeHelp
 	modeForm
-	modeConfirmQuit
+	modeAsk // a question in the status line (choice)
 )
-
-type confirmKeys struct {
-	SaveQuit, Quit, Stay key.Binding
-}
 
 func newElevation(c *common) *elevation {
 	e := &elevation{c: c, keys: newKeyMap(), help: help.New(), sel: -1}
 	e.help.ShortSeparator = "  "
-	e.confirm = confirmKeys{
-		SaveQuit: key.NewBinding(key.WithKeys("s"), key.WithHelp("s", "save and quit")),
-		Quit:     key.NewBinding(key.WithKeys("y"), key.WithHelp("y", "quit without saving")),
-		Stay:     key.NewBinding(key.WithKeys("n", "esc"), key.WithHelp("n", "stay")),
-	}
+	e.page = &helpPage{keys: e.keys, close: []key.Binding{e.keys.Help, c.keys.Back, e.keys.Quit}}
 	e.fe.on = true
 	e.step = defaultStep(c.doc.wall.Units)
 	if len(c.doc.wall.Openings()) > 0 {
@@ -135,12 +129,14 @@ func (e *elevation) resolve() {
 	e.supersede()
 }
 
+// say and refuse set the status line; what they show is made visible
+// (geometry.Visible): names and errors may quote a file.
 func (e *elevation) say(format string, a ...any) {
-	e.msg, e.msgBad = fmt.Sprintf(format, a...), false
+	e.msg, e.msgBad = geometry.Visible(fmt.Sprintf(format, a...)), false
 }
 
 func (e *elevation) refuse(format string, a ...any) {
-	e.msg, e.msgBad = fmt.Sprintf(format, a...), true
+	e.msg, e.msgBad = geometry.Visible(fmt.Sprintf(format, a...)), true
 }
 
 func (e *elevation) update(msg tea.Msg) (screen, tea.Cmd) {
@@ -163,8 +159,34 @@ func (e *elevation) update(msg tea.Msg) (screen, tea.Cmd) {
 		}
 		return e, nil
 	case quitRequestMsg:
-		e.mode = modeConfirmQuit
+		e.askQuit()
 		return e, nil
+	case savedMsg:
+		return e, e.saved(msg)
+	case reloadedMsg:
+		return e, e.reloaded(msg)
+	case recoveryTickMsg:
+		return e, e.recoveryTick(msg)
+	case recoveryMsg:
+		if msg.err != nil {
+			e.refuse("no recovery copy: %v", msg.err)
+		}
+		return e, nil
+	case chosenMsg:
+		e.mode, e.ask = modeNormal, nil
+		if msg.ask == askQuit {
+			return e, e.quitAnswer(msg.what)
+		}
+		return e, e.answered(msg)
+	case cancelledMsg:
+		e.mode, e.ask = modeNormal, nil
+		e.say("not saved")
+		return e, nil
+	case helpClosedMsg:
+		e.mode = modeNormal
+		return e, nil
+	case saveAsMsg:
+		return e, e.requestSave(msg.path, msg.quit)
 	case tea.MouseMsg:
 		if e.mode == modeNormal {
 			return e, e.mouse(msg)
@@ -173,10 +195,7 @@ func (e *elevation) update(msg tea.Msg) (screen, tea.Cmd) {
 	case tea.KeyMsg:
 		switch e.mode {
 		case modeHelp:
-			if key.Matches(msg, e.keys.Help, e.c.keys.Back, e.keys.Quit) {
-				e.mode = modeNormal
-			}
-			return e, nil
+			return e, e.page.update(msg)
 		case modeForm:
 			done, cmd := e.form.update(msg)
 			if done {
@@ -184,8 +203,8 @@ func (e *elevation) update(msg tea.Msg) (screen, tea.Cmd) {
 				return e, tea.Batch(cmd, e.afterEdit())
 			}
 			return e, cmd
-		case modeConfirmQuit:
-			return e, e.confirmQuit(msg)
+		case modeAsk:
+			return e, e.ask.update(msg)
 		}
 		return e, e.key(msg)
 	}
@@ -202,45 +221,100 @@ func (e *elevation) afterEdit() tea.Cmd {
 		return nil
 	}
 	e.resolve()
-	return e.scheduleFE()
+	return tea.Batch(e.scheduleFE(), e.scheduleRecovery())
 }
 
-func (e *elevation) confirmQuit(msg tea.KeyMsg) tea.Cmd {
-	switch {
-	case key.Matches(msg, e.confirm.SaveQuit):
-		if e.c.doc.path == "" {
-			e.mode = modeNormal
-			e.openSaveAs(true)
-			return nil
-		}
-		if err := e.c.doc.save(""); err != nil {
-			e.mode = modeNormal
-			e.refuse("not saved: %v", err)
-			return nil
+// askQuit asks what to do with unsaved changes before quitting.
+func (e *elevation) askQuit() {
+	e.openChoice(newChoice(askQuit, "Unsaved changes.",
+		ans("s", "save and quit", "save"), ans("y", "quit without saving", "quit"), ans("n,esc", "stay", "stay")), saveRequest{})
+}
+
+// quitAnswer applies the answer to askQuit.
+func (e *elevation) quitAnswer(what string) tea.Cmd {
+	switch what {
+	case "save":
+		return e.requestSave("", true)
+	case "quit":
+		// The user chose to lose the changes: no recovery copy either.
+		if e.c.doc.path != "" {
+			return tea.Sequence(clearRecovery(e.c.doc.path), tea.Quit)
 		}
 		return tea.Quit
-	case key.Matches(msg, e.confirm.Quit):
-		return tea.Quit
-	case key.Matches(msg, e.confirm.Stay):
-		e.mode = modeNormal
-		e.msg = ""
+	}
+	e.msg = ""
+	return nil
+}
+
+// openChoice shows a question in the status line; req is the save it is
+// about, handed back with the answer.
+func (e *elevation) openChoice(c *choice, req saveRequest) {
+	c.req = req
+	e.ask, e.mode = c, modeAsk
+}
+
+// saveAsMsg is the save-as form's file name, sent when it closes.
+type saveAsMsg struct {
+	path string
+	quit bool
+}
+
+// key handles a key press in the normal mode: it tries each group of keys
+// in turn (the program's, the opening's, the wall's and its layouts', then
+// the screens other files register) and re-solves after an edit.
+func (e *elevation) key(msg tea.KeyMsg) tea.Cmd {
+	e.msg = ""
+	for _, group := range []func(tea.KeyMsg) (tea.Cmd, bool){e.programKey, e.openingKey, e.wallKey, e.screenKey} {
+		if cmd, ok := group(msg); ok {
+			return tea.Batch(cmd, e.afterEdit())
+		}
 	}
 	return nil
 }
 
-// key handles a key press in the normal mode.
-func (e *elevation) key(msg tea.KeyMsg) tea.Cmd {
+// programKey: quit, help, undo and redo, save, the FE check, the snapshot.
+func (e *elevation) programKey(msg tea.KeyMsg) (tea.Cmd, bool) {
 	k := e.keys
-	e.msg = ""
-	d := e.stepLength()
 	switch {
 	case key.Matches(msg, k.Quit):
 		if !e.c.doc.dirty() {
-			return tea.Quit
+			return tea.Quit, true
 		}
-		e.mode = modeConfirmQuit
+		e.askQuit()
 	case key.Matches(msg, k.Help):
 		e.mode = modeHelp
+	case key.Matches(msg, k.Undo):
+		if !e.c.doc.undoChange() {
+			e.refuse("nothing to undo")
+		} else {
+			e.say("undone")
+		}
+	case key.Matches(msg, k.Redo):
+		if !e.c.doc.redoChange() {
+			e.refuse("nothing to redo")
+		} else {
+			e.say("redone")
+		}
+	case key.Matches(msg, k.Save):
+		return e.requestSave("", false), true
+	case key.Matches(msg, k.SaveAs):
+		e.openSaveAs(false)
+	case key.Matches(msg, k.FE):
+		return e.toggleFE(), true
+	case key.Matches(msg, k.Snapshot):
+		return e.snapshot(), true
+	default:
+		return nil, false
+	}
+	return nil, true
+}
+
+// openingKey: select, move, resize, add, copy, delete and edit openings,
+// and the step they move by.
+func (e *elevation) openingKey(msg tea.KeyMsg) (tea.Cmd, bool) {
+	k := e.keys
+	d := e.stepLength()
+	switch {
 	case key.Matches(msg, k.Next):
 		e.selectBy(1)
 	case key.Matches(msg, k.Prev):
@@ -274,30 +348,18 @@ func (e *elevation) key(msg tea.KeyMsg) tea.Cmd {
 		e.deleteOpening()
 	case key.Matches(msg, k.EditOpening):
 		e.openOpeningForm()
+	default:
+		return nil, false
+	}
+	return nil, true
+}
+
+// wallKey: the wall form and the layouts.
+func (e *elevation) wallKey(msg tea.KeyMsg) (tea.Cmd, bool) {
+	k := e.keys
+	switch {
 	case key.Matches(msg, k.EditWall):
 		e.openWallForm()
-	case key.Matches(msg, k.Undo):
-		if !e.c.doc.undoChange() {
-			e.refuse("nothing to undo")
-		} else {
-			e.say("undone")
-		}
-	case key.Matches(msg, k.Redo):
-		if !e.c.doc.redoChange() {
-			e.refuse("nothing to redo")
-		} else {
-			e.say("redone")
-		}
-	case key.Matches(msg, k.Save):
-		if e.c.doc.path == "" {
-			e.openSaveAs(false)
-		} else if err := e.c.doc.save(""); err != nil {
-			e.refuse("not saved: %v", err)
-		} else {
-			e.say("saved %s", e.c.doc.path)
-		}
-	case key.Matches(msg, k.SaveAs):
-		e.openSaveAs(false)
 	case key.Matches(msg, k.NextLayout):
 		e.switchLayout(1)
 	case key.Matches(msg, k.PrevLayout):
@@ -308,24 +370,26 @@ func (e *elevation) key(msg tea.KeyMsg) tea.Cmd {
 		e.openRenameForm()
 	case key.Matches(msg, k.DelLayout):
 		e.deleteLayout()
-	case key.Matches(msg, k.FE):
-		return e.toggleFE()
-	case key.Matches(msg, k.Snapshot):
-		return e.snapshot()
 	default:
-		for _, s := range screenEntries {
-			if key.Matches(msg, s.key) {
-				next, cmd := s.open(e.c)
-				if next == nil {
-					return cmd
-				}
-				// In sequence: the screen must be on top before the
-				// answer of its first background command arrives.
-				return tea.Sequence(pushScreen(next), cmd)
+		return nil, false
+	}
+	return nil, true
+}
+
+// screenKey opens a screen another file registered (registerScreen).
+func (e *elevation) screenKey(msg tea.KeyMsg) (tea.Cmd, bool) {
+	for _, s := range screenEntries {
+		if key.Matches(msg, s.key) {
+			next, cmd := s.open(e.c)
+			if next == nil {
+				return cmd, true
 			}
+			// In sequence: the screen must be on top before the
+			// answer of its first background command arrives.
+			return tea.Sequence(pushScreen(next), cmd), true
 		}
 	}
-	return e.afterEdit()
+	return nil, false
 }
 
 func (e *elevation) selectBy(d int) {
@@ -499,7 +563,7 @@ func (e *elevation) switchLayout(d int) {
 	next := ((w.Active+d)%n + n) % n
 	_ = e.c.doc.change(func(w *geometry.Wall) error { w.Active = next; return nil })
 	e.sel = 0
-	e.say("layout %q", e.wall().Layouts[next].Name)
+	e.say("layout %s", quoteVisible(e.wall().Layouts[next].Name))
 }
 
 func (e *elevation) newLayout() {

@@ -306,14 +306,7 @@ func (e *elevation) openSaveAs(quit bool) {
 		if filepath.Ext(p) == "" {
 			p += ".toml"
 		}
-		if err := e.c.doc.save(p); err != nil {
-			r.err = err.Error()
-			return r
-		}
-		e.say("saved %s", p)
-		if quit {
-			r.cmd = tea.Quit
-		}
+		r.cmd = func() tea.Msg { return saveAsMsg{p, quit} } // the parent saves, in a command
 		return r
 	}))
 }

@@ -58,6 +58,17 @@ func (ed *editor) press(msgs ...tea.Msg) tea.Cmd {
 	return cmd
 }
 
+// do sends messages and runs the commands they return, and the commands
+// those answers return, as the program would (timers are left out: the FE
+// check and the recovery copy wait for one).
+func (ed *editor) do(msgs ...tea.Msg) {
+	ed.m.c.tick = func(time.Duration, func(time.Time) tea.Msg) tea.Cmd { return nil }
+	for _, msg := range msgs {
+		_, cmd := ed.m.Update(msg)
+		cmpDrain(ed.m, cmd)
+	}
+}
+
 func (ed *editor) view() string { return ansi.Strip(ed.m.View()) }
 
 func (ed *editor) elev() *elevation { return ed.m.stack[0].(*elevation) }
@@ -566,12 +577,16 @@ func TestQuitAsks(t *testing.T) {
 	if !strings.Contains(ed.view(), "Unsaved changes") {
 		t.Fatal("no question")
 	}
-	ed.press(runes("n"))
+	ed.do(runes("n")) // the question sends its answer; the screen applies it
 	if ed.elev().mode != modeNormal {
 		t.Fatal("n did not stay")
 	}
 	ed.press(tea.KeyMsg{Type: tea.KeyCtrlC})
-	if cmd := ed.press(runes("y")); cmd == nil || !isQuit(cmd) {
+	answer := ed.press(runes("y"))
+	if answer == nil {
+		t.Fatal("y gave no answer")
+	}
+	if cmd := ed.press(answer()); cmd == nil || !isQuit(cmd) {
 		t.Fatal("y did not quit")
 	}
 }
@@ -617,7 +632,7 @@ func TestSaveAndLayouts(t *testing.T) {
 		t.Fatal("save without a file did not ask for one")
 	}
 	ed.typeText(path)
-	ed.press(keyEnter)
+	ed.do(keyEnter) // the form sends the name; the save runs in a command
 	if ed.m.c.doc.dirty() || ed.m.c.doc.path != path {
 		t.Fatalf("not saved: %q, dirty %v; %s", ed.m.c.doc.path, ed.m.c.doc.dirty(), ed.elev().msg)
 	}

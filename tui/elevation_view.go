@@ -108,16 +108,16 @@ func (e *elevation) titleView() string {
 	d := e.c.doc
 	file := "no file yet"
 	if d.path != "" {
-		file = filepath.Base(d.path)
+		file = geometry.Visible(filepath.Base(d.path))
 	}
 	if d.dirty() {
 		file += " [modified]"
 	}
-	title := w.Title
+	title := geometry.Visible(w.Title)
 	if title == "" {
 		title = "untitled wall"
 	}
-	lay := fmt.Sprintf("layout %d/%d %q", w.Active+1, len(w.Layouts), w.Layouts[w.Active].Name)
+	lay := fmt.Sprintf("layout %d/%d %s", w.Active+1, len(w.Layouts), quoteVisible(w.Layouts[w.Active].Name))
 	step := "step " + geometry.FormatLength(e.stepLength(), w.Units)
 	s := " " + file + " | " + lay + " | " + step + " | " + title + " | pierwise "
 	return e.c.styles.title.Render(padRight(truncate(s, e.width), e.width))
@@ -511,8 +511,8 @@ func (e *elevation) tableView(l elevLayout) string {
 
 func (e *elevation) statusView() string {
 	st := e.c.styles
-	if e.mode == modeConfirmQuit {
-		return st.errText.Render("Unsaved changes.") + " " + keyHint(st, e.confirm.SaveQuit, e.confirm.Quit, e.confirm.Stay)
+	if e.mode == modeAsk {
+		return e.ask.view(st)
 	}
 	if e.msg != "" {
 		if e.msgBad {
@@ -526,7 +526,7 @@ func (e *elevation) statusView() string {
 	}
 	o := w.Openings()[e.sel]
 	fl := func(l geometry.Length) string { return geometry.FormatLength(l, w.Units) }
-	return st.key.Render(o.Name) + fmt.Sprintf(" %s: x %s, sill %s, %s wide, %s high (%d of %d)",
+	return st.key.Render(geometry.Visible(o.Name)) + fmt.Sprintf(" %s: x %s, sill %s, %s wide, %s high (%d of %d)",
 		kindName(o.IsDoor()), fl(o.X), fl(o.Sill), fl(o.Width), fl(o.Height), e.sel+1, len(w.Openings()))
 }
 

@@ -39,7 +39,7 @@ func copyWall(t *testing.T, name string) string {
 // else changed.
 func TestFlowMoveUndoSave(t *testing.T) {
 	path := copyWall(t, "door.toml")
-	w, _, err := openFile(path)
+	w, _, _, err := openFile(path)
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -103,7 +103,7 @@ func wallsNear(a, b *geometry.Wall) bool {
 func TestFlowQuitAsks(t *testing.T) {
 	path := copyWall(t, "door.toml")
 	before, _ := os.ReadFile(path)
-	w, _, _ := openFile(path)
+	w, _, _, _ := openFile(path)
 	tm := teatest.NewTestModel(t, newModel(w, Options{Path: path, OnDisk: true}), teatest.WithInitialTermSize(80, 24))
 	waitText(t, tm, "Results")
 	tm.Type("w")
@@ -135,7 +135,7 @@ func TestFlowResize(t *testing.T) {
 // reads back valid.
 func TestOpenFileCreates(t *testing.T) {
 	path := filepath.Join(t.TempDir(), "new.toml")
-	w, msg, err := openFile(path)
+	w, _, msg, err := openFile(path)
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -149,7 +149,7 @@ func TestOpenFileCreates(t *testing.T) {
 	if !wallsNear(got, w) {
 		t.Errorf("created file reads back as %+v, want %+v", got, w)
 	}
-	if _, _, err := openFile(filepath.Join(t.TempDir(), "no", "dir", "x.toml")); err == nil {
+	if _, _, _, err := openFile(filepath.Join(t.TempDir(), "no", "dir", "x.toml")); err == nil {
 		t.Error("a file in a missing directory was created")
 	}
 }

@@ -15,21 +15,48 @@ type Options struct {
 	Path    string // the wall's file; "" for a wall without one (the demo)
 	OnDisk  bool   // the wall is what the file holds (not modified yet)
 	Message string // shown in the status line at the start
+	Content []byte // the file's bytes as read, to notice a change by another program before saving
 
 	Program []tea.ProgramOption // extra bubbletea options (tests: input, output)
 }
 
 // Edit runs the editor on w until the user quits.
+//
+// On a crash (a panic anywhere in the editor) bubbletea restores the
+// terminal; Edit then writes the unsaved wall to its recovery file beside
+// the wall file (recoveryPath) and says where. While editing, the recovery
+// file is kept up to date a second after each edit, so even a crash the
+// program cannot catch (out of memory, a kill) loses nothing; a save or a
+// deliberate quit without saving removes it.
 func Edit(w *geometry.Wall, opt Options) error {
 	m := newModel(w, opt)
 	opts := append([]tea.ProgramOption{tea.WithAltScreen(), tea.WithMouseCellMotion()}, opt.Program...)
 	_, err := tea.NewProgram(m, opts...).Run()
+	if err != nil && errors.Is(err, tea.ErrProgramPanic) {
+		return crashed(err, m.c.doc)
+	}
 	return err
+}
+
+// crashed writes the unsaved wall of a crashed editor to its recovery file.
+func crashed(err error, d *document) error {
+	if d == nil || !d.dirty() {
+		return fmt.Errorf("the editor crashed (%w); there were no unsaved changes", err)
+	}
+	if werr := writeRecovery(d.path, d.onDisk()); werr != nil {
+		return fmt.Errorf("the editor crashed (%w) and the unsaved wall could not be kept: %v", err, werr)
+	}
+	return fmt.Errorf("the editor crashed (%w); the unsaved wall is in %s", err, geometry.Visible(recoveryPath(d.path)))
 }
 
 // newModel builds the root model with the elevation screen on w.
 func newModel(w *geometry.Wall, opt Options) *root {
-	c := newCommon(newDocument(w, opt.Path, opt.OnDisk), nil)
+	d := newDocument(w, opt.Path, opt.OnDisk)
+	if opt.Content != nil {
+		sum := geometry.SumOf(opt.Content)
+		d.sum = &sum
+	}
+	c := newCommon(d, nil)
 	e := newElevation(c)
 	if opt.Message != "" {
 		e.say("%s", opt.Message)
@@ -40,28 +67,40 @@ func newModel(w *geometry.Wall, opt Options) *root {
 // EditFile opens the wall file at path in the editor; a missing file is
 // created first with NewWall.
 func EditFile(path string, opts ...tea.ProgramOption) error {
-	w, msg, err := openFile(path)
+	w, data, msg, err := openFile(path)
 	if err != nil {
 		return err
 	}
-	return Edit(w, Options{Path: path, OnDisk: true, Message: msg, Program: opts})
+	if n := recoveryNotice(path); n != "" {
+		msg = n
+	}
+	return Edit(w, Options{Path: path, OnDisk: true, Message: msg, Content: data, Program: opts})
 }
 
-// openFile reads the wall at path, or writes a new plain wall there when
-// there is no file; msg says when it did.
-func openFile(path string) (w *geometry.Wall, msg string, err error) {
-	w, err = geometry.LoadFile(path)
+// openFile reads the wall at path (geometry.ReadUserFile: a regular file of
+// bounded size), or writes a new plain wall there when there is no file;
+// msg says when it did. data is what the file holds.
+func openFile(path string) (w *geometry.Wall, data []byte, msg string, err error) {
+	data, err = geometry.ReadUserFile(path)
 	switch {
 	case errors.Is(err, fs.ErrNotExist):
 		w = NewWall(geometry.US)
 		if err := geometry.Save(path, w); err != nil {
-			return nil, "", err
+			return nil, nil, "", err
 		}
-		return w, fmt.Sprintf("created %s with a plain wall: w adds a window, d a door, E edits the wall", path), nil
+		data, err = geometry.ReadUserFile(path)
+		if err != nil {
+			return nil, nil, "", err
+		}
+		return w, data, fmt.Sprintf("created %s with a plain wall: w adds a window, d a door, E edits the wall", geometry.Visible(path)), nil
 	case err != nil:
-		return nil, "", err
+		return nil, nil, "", err
 	}
-	return w, "", nil
+	w, err = geometry.Parse(path, data)
+	if err != nil {
+		return nil, nil, "", err
+	}
+	return w, data, "", nil
 }
 
 // NewWall is the wall a new file starts with: a plain 24 ft × 12 ft
