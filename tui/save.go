@@ -285,7 +285,6 @@ func recoveryNotice(path string) string {
 		geometry.Visible(p), fi.ModTime().Format("2006-01-02 15:04"), geometry.Visible(p))
 }
 
-
 // recoveryDelay lets a burst of edits settle before the recovery copy is
 // written.
 const recoveryDelay = time.Second
