@@ -222,7 +222,7 @@ func (g *Grid) line(c, r int, ch rune, kind CellKind, opening int) {
 // beside the box (labelBeside) or nowhere: a name anywhere else (above the
 // box, say) reads as a label of the solid wall around it.
 func (g *Grid) labelOpening(i int, o geometry.Opening) bool {
-	name := o.Name
+	name := geometry.Visible(o.Name) // a name from a file may hold control characters
 	c0, c1, r0, r1 := g.box(o.Rect())
 	n := utf8.RuneCountInString(name)
 	free := func(k CellKind) func(Cell) bool {
@@ -241,7 +241,7 @@ func (g *Grid) labelOpening(i int, o geometry.Opening) bool {
 // there is room, else touching it; never touching another outline. It
 // reports whether the name found room.
 func (g *Grid) labelBeside(i int, o geometry.Opening) bool {
-	name := o.Name
+	name := geometry.Visible(o.Name) // a name from a file may hold control characters
 	c0, c1, r0, r1 := g.box(o.Rect())
 	n := utf8.RuneCountInString(name)
 	solid := func(c Cell) bool { return c.Kind == Solid || c.Kind == PierFill }

@@ -226,7 +226,7 @@ func (s *compareScreen) view() string {
 	st := s.c.styles
 	w := s.c.doc.wall
 	var lines []string
-	title := " pierwise | compare layouts | " + w.Title + " "
+	title := " pierwise | compare layouts | " + geometry.Visible(w.Title) + " "
 	lines = append(lines, st.title.Render(padRight(truncate(title, s.width), s.width)))
 	if s.showHelp {
 		lines = append(lines, "", st.heading.Render("Compare layouts"), "")

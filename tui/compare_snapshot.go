@@ -1,14 +1,16 @@
 package tui
 
 import (
+	"bytes"
 	"errors"
 	"fmt"
 	"io"
 	"io/fs"
-	"os"
 	"path/filepath"
 	"strings"
 	"time"
+
+	"pierwise/geometry"
 )
 
 // ProgramVersion is the version printed in snapshots; cmd/pierwise sets it.
@@ -42,25 +44,21 @@ func snapshotKind(kind string) string {
 	}, kind)
 }
 
-// writeSnapshot writes a new snapshot file (never over an existing one) and
-// returns its path. It runs in a tea.Cmd.
+// writeSnapshot writes a new snapshot file (never over an existing file,
+// link or device: geometry.CreateNewFile, written whole before it appears)
+// and returns its path. It runs in a tea.Cmd.
 func writeSnapshot(wallPath, kind string, now time.Time, write func(io.Writer) error) (string, error) {
+	var buf bytes.Buffer
+	if err := write(&buf); err != nil {
+		return "", err
+	}
 	for n := 1; n < 100; n++ {
 		path := snapshotPath(wallPath, kind, now, n)
-		f, err := os.OpenFile(path, os.O_WRONLY|os.O_CREATE|os.O_EXCL, 0o644)
+		err := geometry.CreateNewFile(path, buf.Bytes())
 		if errors.Is(err, fs.ErrExist) {
 			continue
 		}
 		if err != nil {
-			return "", err
-		}
-		if err := write(f); err != nil {
-			f.Close()
-			os.Remove(path)
-			return "", err
-		}
-		if err := f.Close(); err != nil {
-			os.Remove(path)
 			return "", err
 		}
 		return path, nil

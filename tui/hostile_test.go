@@ -226,7 +226,8 @@ func TestFEOneInFlight(t *testing.T) {
 	ctx, cancel := context.WithCancel(context.Background())
 	done := make(chan struct{})
 	g.cancel, g.done = cancel, done
-	go func() { <-ctx.Done(); close(done) }()
+	release := make(chan struct{}) // the old check returns only when the test says
+	go func() { <-ctx.Done(); <-release; close(done) }()
 	ed.press(feDoneMsg{id: e.fe.id, res: &fakeFE})
 	ed.press(runes("l"))
 	if !strings.Contains(ed.view(), "updating...") {
@@ -238,6 +239,15 @@ func TestFEOneInFlight(t *testing.T) {
 	}
 	got := make(chan tea.Msg, 1)
 	go func() { got <- cmd() }()
+	select {
+	case m := <-got:
+		t.Fatalf("a second check started while the first computed: %#v", m)
+	case <-time.After(100 * time.Millisecond):
+	}
+	if ctx.Err() == nil {
+		t.Error("the superseded check's context is not cancelled")
+	}
+	close(release)
 	select {
 	case m := <-got:
 		if s, ok := m.(feStartMsg); !ok || s.id != e.fe.id {

@@ -168,6 +168,15 @@ func (s *storeyScreen) update(msg tea.Msg) (screen, tea.Cmd) {
 		s.showHelp = false
 		s.confirmQuit = true
 		return s, nil
+	case storeySavedMsg:
+		return s, s.saved(msg)
+	case storeyReportMsg:
+		if msg.err != nil {
+			s.refuse("no report: %v", msg.err)
+		} else {
+			s.say("wrote %s", msg.path)
+		}
+		return s, nil
 	case resumeMsg:
 		if s.stale() {
 			s.analyse()
@@ -206,9 +215,9 @@ func (s *storeyScreen) update(msg tea.Msg) (screen, tea.Cmd) {
 			}
 			return s, s.open(s.sel)
 		case key.Matches(msg, s.keys.Save):
-			s.saveAll()
+			return s, s.saveAll(false)
 		case key.Matches(msg, s.keys.Report):
-			s.writeReport()
+			return s, s.writeReport()
 		}
 	}
 	return s, nil
@@ -217,10 +226,8 @@ func (s *storeyScreen) update(msg tea.Msg) (screen, tea.Cmd) {
 func (s *storeyScreen) answerQuit(msg tea.KeyMsg) tea.Cmd {
 	switch msg.String() {
 	case "s":
-		if s.saveAll() {
-			return tea.Quit
-		}
 		s.confirmQuit = false
+		return s.saveAll(true)
 	case "y":
 		return tea.Quit
 	case "n", "esc":
@@ -246,45 +253,85 @@ func (s *storeyScreen) open(i int) tea.Cmd {
 	return tea.Sequence(pushScreen(&storeyWall{e: e}), e.init())
 }
 
-// saveAll saves every changed wall; it reports whether all were saved.
-func (s *storeyScreen) saveAll() bool {
-	var saved []string
+// saveAll saves every changed wall in a command (no file is written inside
+// update); quit closes the program when all were saved.
+func (s *storeyScreen) saveAll(quit bool) tea.Cmd {
+	var jobs []storeySave
 	for i, d := range s.docs {
-		if !d.dirty() {
-			continue
+		if d.dirty() {
+			jobs = append(jobs, storeySave{i: i, path: d.path, wall: d.onDisk(), version: d.version})
 		}
-		if err := d.save(""); err != nil {
-			s.refuse("not saved: %s: %v", s.st.Walls[i].File, err)
-			return false
-		}
-		saved = append(saved, s.st.Walls[i].File)
 	}
-	if len(saved) == 0 {
+	if len(jobs) == 0 {
 		s.say("no wall has unsaved changes")
-	} else {
-		s.say("saved %s", strings.Join(saved, ", "))
+		if quit {
+			return tea.Quit
+		}
+		return nil
 	}
-	return true
+	return func() tea.Msg {
+		for k := range jobs {
+			if jobs[k].err = geometry.Save(jobs[k].path, jobs[k].wall); jobs[k].err != nil {
+				break
+			}
+		}
+		return storeySavedMsg{jobs: jobs, quit: quit}
+	}
+}
+
+// storeySave is one wall file to save, and how it went.
+type storeySave struct {
+	i       int
+	path    string
+	wall    *geometry.Wall
+	version int
+	err     error
+	done    bool
+}
+
+type storeySavedMsg struct {
+	jobs []storeySave
+	quit bool
+}
+
+// saved applies the answer of saveAll.
+func (s *storeyScreen) saved(msg storeySavedMsg) tea.Cmd {
+	var names []string
+	for _, j := range msg.jobs {
+		if j.err != nil {
+			s.refuse("not saved: %s: %v", s.st.Walls[j.i].File, j.err)
+			return nil
+		}
+		s.docs[j.i].saved = j.version
+		names = append(names, s.st.Walls[j.i].File)
+	}
+	s.say("saved %s", strings.Join(names, ", "))
+	if msg.quit {
+		return tea.Quit
+	}
+	return nil
 }
 
 // writeReport writes the storey report of the walls as edited beside the
-// storey file.
-func (s *storeyScreen) writeReport() {
+// storey file, in a command.
+func (s *storeyScreen) writeReport() tea.Cmd {
 	if s.err != nil {
 		s.refuse("no report: %v", s.err)
-		return
+		return nil
 	}
 	path := strings.TrimSuffix(s.st.Path, filepath.Ext(s.st.Path)) + ".report.txt"
 	var b strings.Builder
 	if err := storey.Report(&b, s.an, s.c.now()); err != nil {
 		s.refuse("no report: %v", err)
-		return
+		return nil
 	}
-	if err := geometry.WriteFileAtomic(path, []byte(b.String())); err != nil {
-		s.refuse("no report: %v", err)
-		return
-	}
-	s.say("wrote %s", path)
+	text := []byte(b.String())
+	return func() tea.Msg { return storeyReportMsg{path, geometry.WriteFileAtomic(path, text)} }
+}
+
+type storeyReportMsg struct {
+	path string
+	err  error
 }
 
 func (s *storeyScreen) say(format string, a ...any) {
@@ -321,7 +368,7 @@ func (w *storeyWall) update(msg tea.Msg) (screen, tea.Cmd) {
 func (s *storeyScreen) view() string {
 	st := s.c.styles
 	W, H := s.width, s.height
-	title := fmt.Sprintf(" Storey: %s — %s  [%s, %s]", orText(s.st.Title, "untitled"), filepath.Base(s.st.Path), s.st.Diaphragm, s.st.Basis)
+	title := fmt.Sprintf(" Storey: %s — %s  [%s, %s]", orText(geometry.Visible(s.st.Title), "untitled"), geometry.Visible(filepath.Base(s.st.Path)), s.st.Diaphragm, s.st.Basis)
 	if n := len(s.dirty()); n > 0 {
 		title += fmt.Sprintf("  [%d wall(s) changed]", n)
 	}
@@ -396,7 +443,7 @@ func (s *storeyScreen) tableView(w, h int) string {
 	lines = append(lines, st.heading.Render("Walls")+st.dim.Render(fmt.Sprintf("  V = %s; shares of V", geometry.FormatForce(s.st.Shear, s.st.Units))))
 	nameW := 4
 	for _, wl := range a.Walls {
-		nameW = max(nameW, len([]rune(wl.Name)))
+		nameW = max(nameW, len([]rune(geometry.Visible(wl.Name))))
 	}
 	nameW = min(nameW, max(w-38, 8))
 	head := fmt.Sprintf("  %-*s %s %7s %8s %6s %-8s", nameW, "wall", "d", "R rel", "design", "of V", "case")
@@ -417,7 +464,7 @@ func (s *storeyScreen) tableView(w, h int) string {
 		case wl.Unit != nil:
 			rel = fmt.Sprintf("%7.4f", wl.Unit.Rigidity)
 		}
-		row := fmt.Sprintf("%c%s%-*s %s %s %8.2f %5.1f%% %-8s", storey.WallKey(i), mark, nameW, truncate(wl.Name, nameW), dir,
+		row := fmt.Sprintf("%c%s%-*s %s %s %8.2f %5.1f%% %-8s", storey.WallKey(i), mark, nameW, truncate(geometry.Visible(wl.Name), nameW), dir,
 			rel, u.ForceOf(geometry.Force(wl.Design.Shear)),
 			100*wl.Design.Shear/float64(s.st.Shear), storey.CaseName(d, wl.Design.Case))
 		row = truncate(row, w)
@@ -459,7 +506,7 @@ func (s *storeyScreen) tableView(w, h int) string {
 	}
 	lines = append(lines, "")
 	sel := a.Walls[s.sel]
-	lines = append(lines, st.heading.Render(truncate(sel.Name, w)))
+	lines = append(lines, st.heading.Render(truncate(geometry.Visible(sel.Name), w)))
 	lines = append(lines, truncate(fmt.Sprintf("direct %.2f, design %.2f %s (%s)", u.ForceOf(geometry.Force(sel.Design.Direct)),
 		u.ForceOf(geometry.Force(sel.Design.Shear)), u.Force, storey.CaseName(d, sel.Design.Case)), w))
 	if sel.Drift.Checked {

@@ -76,7 +76,7 @@ func (d *storeyDriver) run(cmd tea.Cmd) {
 		for _, c := range msg {
 			d.run(c)
 		}
-	case pushScreenMsg, popScreenMsg:
+	case pushScreenMsg, popScreenMsg, storeySavedMsg, storeyReportMsg:
 		_, next := d.m.Update(msg)
 		d.run(next)
 	default:
