@@ -137,7 +137,7 @@ func (e *elevation) saved(msg savedMsg) tea.Cmd {
 			ans("y", "replace", "replace"), ans("n", "keep it", "cancel")), r)
 		return nil
 	case msg.ask == askChanged:
-		e.openChoice(newChoice(askChanged, name+" changed on disk since it was read.",
+		e.openChoice(newChoice(askChanged, name+" changed on disk.",
 			ans("r", "reload", "reload"), ans("o", "overwrite", "overwrite"), ans("S", "save elsewhere", "elsewhere")), r)
 		return nil
 	case msg.ask == askComments:
@@ -281,8 +281,8 @@ func recoveryNotice(path string) string {
 	if err != nil || !fi.Mode().IsRegular() {
 		return ""
 	}
-	return fmt.Sprintf("unsaved work of an earlier session is in %s (%s): pierwise edit %s",
-		geometry.Visible(p), fi.ModTime().Format("2006-01-02 15:04"), geometry.Visible(p))
+	return fmt.Sprintf("%s holds unsaved work from %s; pierwise edit opens it",
+		geometry.Visible(filepath.Base(p)), fi.ModTime().Format("Jan 2 15:04"))
 }
 
 // recoveryDelay lets a burst of edits settle before the recovery copy is
