@@ -10,9 +10,10 @@ import (
 	"path/filepath"
 )
 
-// MaxFileSize is the largest wall or storey file pierwise reads. A wall file
-// is a few kilobytes; the limit keeps /dev/zero, a log file or a disk image
-// handed over by mistake from filling the memory.
+// MaxFileSize is the largest wall or storey file pierwise reads
+// (docs/method.md §11). A wall file is a few kilobytes; the limit keeps
+// /dev/zero, a log file or a disk image handed over by mistake from filling
+// the memory.
 const MaxFileSize = 1 << 20
 
 // A RefusedPathError is a path pierwise will not read or write: a device,

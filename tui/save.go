@@ -43,7 +43,8 @@ type savedMsg struct {
 // comments kept where practical). Before writing it stops with a question
 // when the path holds a file the user has not agreed to replace, a file
 // changed on disk since it was read (by content), or a file whose comments
-// the save would drop. A storey file is never replaced by a wall.
+// the save would drop. A storey file is never replaced by a wall
+// (docs/method.md §11).
 func saveCmd(req saveRequest) tea.Cmd {
 	return func() tea.Msg { return save(req) }
 }
