@@ -3,8 +3,12 @@ package tui
 import (
 	"strings"
 
+	"github.com/charmbracelet/lipgloss"
+
 	"github.com/charmbracelet/bubbles/key"
 	tea "github.com/charmbracelet/bubbletea"
+
+	"pierwise/geometry"
 )
 
 // A question is what a dialog asks; the parent reads the answer by it.
@@ -94,4 +98,37 @@ func (h *helpPage) update(msg tea.KeyMsg) tea.Cmd {
 		return func() tea.Msg { return helpClosedMsg{} }
 	}
 	return nil
+}
+
+// view lists every key in as many columns as fit.
+func (h *helpPage) view(st *styles, width int, units geometry.System) string {
+	var items []key.Binding
+	for _, g := range h.keys.FullHelp() {
+		items = append(items, g...)
+	}
+	kw, dw := 0, 0
+	for _, b := range items {
+		kw = max(kw, lipgloss.Width(b.Help().Key))
+		dw = max(dw, lipgloss.Width(b.Help().Desc))
+	}
+	colW := kw + 1 + dw + 3
+	ncol := max(1, width/colW)
+	nrow := (len(items) + ncol - 1) / ncol
+	lines := []string{st.heading.Render("Keys") + st.dim.Render("  (? or esc closes)"), ""}
+	for r := 0; r < nrow; r++ {
+		var b strings.Builder
+		for c := 0; c < ncol; c++ {
+			i := c*nrow + r
+			if i >= len(items) {
+				break
+			}
+			h := items[i].Help()
+			b.WriteString(st.key.Render(padRight(h.Key, kw)) + " " + padRight(h.Desc, dw) + "   ")
+		}
+		lines = append(lines, b.String())
+	}
+	lines = append(lines, "")
+	lines = append(lines, wrap("Elevation: piers are shaded by their share of the wall shear "+tintLegend(st)+
+		". The selected opening is drawn with doubled lines (= and #), highlighted. Mouse: a click selects an opening, a drag moves it by the step. Pier table: b/s is the bending/shear split of a pier's own deflection in %, FE the share in the finite-element model. Lengths in "+unitName(units)+".", width)...)
+	return strings.Join(lines, "\n")
 }

@@ -83,7 +83,7 @@ func (e *elevation) view() string {
 	var body string
 	switch e.mode {
 	case modeHelp:
-		body = e.helpView(l)
+		body = e.page.view(e.c.styles, e.width, e.wall().Units)
 	case modeForm:
 		body = e.form.view(st, e.width, l.bodyH)
 	default:
@@ -548,40 +548,6 @@ func keyHint(st *styles, bs ...key.Binding) string {
 		parts = append(parts, st.key.Render(h.Key)+" "+h.Desc)
 	}
 	return strings.Join(parts, "  ")
-}
-
-// helpView lists every key in as many columns as fit.
-func (e *elevation) helpView(l elevLayout) string {
-	st := e.c.styles
-	var items []key.Binding
-	for _, g := range e.keys.FullHelp() {
-		items = append(items, g...)
-	}
-	kw, dw := 0, 0
-	for _, b := range items {
-		kw = max(kw, lipgloss.Width(b.Help().Key))
-		dw = max(dw, lipgloss.Width(b.Help().Desc))
-	}
-	colW := kw + 1 + dw + 3
-	ncol := max(1, e.width/colW)
-	nrow := (len(items) + ncol - 1) / ncol
-	lines := []string{st.heading.Render("Keys") + st.dim.Render("  (? or esc closes)"), ""}
-	for r := 0; r < nrow; r++ {
-		var b strings.Builder
-		for c := 0; c < ncol; c++ {
-			i := c*nrow + r
-			if i >= len(items) {
-				break
-			}
-			h := items[i].Help()
-			b.WriteString(st.key.Render(padRight(h.Key, kw)) + " " + padRight(h.Desc, dw) + "   ")
-		}
-		lines = append(lines, b.String())
-	}
-	lines = append(lines, "")
-	lines = append(lines, wrap("Elevation: piers are shaded by their share of the wall shear "+tintLegend(st)+
-		". The selected opening is drawn with doubled lines (= and #), highlighted. Mouse: a click selects an opening, a drag moves it by the step. Pier table: b/s is the bending/shear split of a pier's own deflection in %, FE the share in the finite-element model. Lengths in "+unitName(e.wall().Units)+".", e.width)...)
-	return strings.Join(lines, "\n")
 }
 
 func tintLegend(st *styles) string {
