@@ -10,6 +10,7 @@ import (
 	"strings"
 
 	"pierwise/drawing"
+	"pierwise/geometry"
 	"pierwise/report"
 )
 
@@ -58,21 +59,12 @@ func writeReportAndDrawing(in report.Input, draw drawing.WallInput) (txt, svgPat
 	return "", "", errors.New("too many snapshots in the same second")
 }
 
-// createNew writes a file that must not exist yet; on an error it leaves
-// nothing behind.
+// createNew writes a file that must not exist yet (geometry.CreateNewFile:
+// written whole, then linked into place; nothing is left on an error).
 func createNew(path string, write func(io.Writer) error) error {
-	f, err := os.OpenFile(path, os.O_WRONLY|os.O_CREATE|os.O_EXCL, 0o644)
-	if err != nil {
+	var buf bytes.Buffer
+	if err := write(&buf); err != nil {
 		return err
 	}
-	if err := write(f); err != nil {
-		f.Close()
-		os.Remove(path)
-		return err
-	}
-	if err := f.Close(); err != nil {
-		os.Remove(path)
-		return err
-	}
-	return nil
+	return geometry.CreateNewFile(path, buf.Bytes())
 }

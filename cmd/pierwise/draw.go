@@ -6,7 +6,6 @@ import (
 	"time"
 
 	"pierwise/drawing"
-	"pierwise/geometry"
 	"pierwise/pier"
 	"pierwise/pier/fe"
 	"pierwise/storey"
@@ -45,6 +44,9 @@ func runDraw(e *env, args []string) error {
 	}
 	arg := files[0]
 	if *outPath != "" {
+		if err := checkOutput("-o", *outPath); err != nil {
+			return err
+		}
 		for _, in := range reportInputs(arg) {
 			if sameFile(*outPath, in) {
 				return usagef("-o %s would overwrite %s, which the drawing reads; write the SVG to another file", *outPath, in)
@@ -128,7 +130,7 @@ func runDraw(e *env, args []string) error {
 			return err
 		}
 	} else {
-		if err := geometry.WriteFileAtomic(*outPath, svg); err != nil {
+		if err := writeOutput("-o", *outPath, svg); err != nil {
 			return err
 		}
 		fmt.Fprintln(e.stderr, "drawing written to", *outPath)

@@ -129,7 +129,7 @@ func TestInputPathRules(t *testing.T) {
 	for _, in := range inputs {
 		for _, cmd := range [][]string{{"solve", in}, {"report", in}, {"compare", in, wall}, {"sweep", in, "--opening", "D1"}, {"storey", in}} {
 			code, msg := runQuick(t, cmd...)
-			if code != exitInput || !strings.Contains(msg, "reads only regular files") {
+			if code != exitInput || !strings.Contains(msg, "regular file") {
 				t.Errorf("%v: exit %d %q", cmd, code, msg)
 			}
 		}
@@ -137,7 +137,7 @@ func TestInputPathRules(t *testing.T) {
 	if code, msg := runQuick(t, "solve", big); code != exitInput || !strings.Contains(msg, "1024 KiB") {
 		t.Errorf("big file: exit %d %q", code, msg)
 	}
-	if code, msg := runQuick(t, "storey", storeyFile); code != exitInput || !strings.Contains(msg, "reads only regular files") {
+	if code, msg := runQuick(t, "storey", storeyFile); code != exitInput || !strings.Contains(msg, "regular file") {
 		t.Errorf("storey pointing at /dev/zero: exit %d %q", code, msg)
 	}
 }
