@@ -1,10 +1,6 @@
 package tui
 
-import (
-	"errors"
-
-	"pierwise/geometry"
-)
+import "pierwise/geometry"
 
 // document is the wall being edited, with its file and its history. Every
 // change goes through change, which keeps a snapshot for undo; undo and redo
@@ -104,22 +100,6 @@ func (d *document) travel(from, to *[]snapshot) bool {
 	*to = append(*to, snapshot{d.wall, d.version})
 	d.wall, d.version = s.wall, s.version
 	return true
-}
-
-// save writes the wall to path (atomically) and makes it the document's
-// file; an empty path means the current file.
-func (d *document) save(path string) error {
-	if path == "" {
-		path = d.path
-	}
-	if path == "" {
-		return errors.New("no file name yet: use save as")
-	}
-	if err := geometry.Save(path, d.onDisk()); err != nil {
-		return err
-	}
-	d.path, d.saved = path, d.version
-	return nil
 }
 
 // onDisk is the wall as it is written: the wall itself, or a copy with the

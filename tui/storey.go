@@ -286,7 +286,6 @@ type storeySave struct {
 	wall    *geometry.Wall
 	version int
 	err     error
-	done    bool
 }
 
 type storeySavedMsg struct {
