@@ -10,7 +10,9 @@
 // metres for lengths, kip or kN for forces, psi or MPa for stresses.
 // ParseLength accepts in, ft, mm, cm, m and feet-inches (12'-6", 12'6",
 // 12' 6 1/2", 6", 12ft 6in); ParseForce lb, kip, N, kN; ParseStress psi, ksi, Pa,
-// kPa, MPa, GPa. The conversion factors are exact by definition (1 in =
+// kPa, MPa, GPa; ParseLineLoad (force per length, N/m) plf, lb/ft, klf,
+// kip/ft, N/m, kN/m, bare kip/ft or kN/m; ParseAreaLoad (force per area, Pa)
+// psf, ksf, psi, Pa, kPa, N/m2, kN/m2, bare psf or kPa. The conversion factors are exact by definition (1 in =
 // 25.4 mm, 1 lbf = 4.448 221 615 260 5 N; NIST SP 811, Appendix B).
 // FormatLength, FormatForce and FormatStress round for people; they are not
 // meant to be read back. Marshal writes values that read back exactly.
@@ -50,7 +52,14 @@
 //
 // # The wall file
 //
-// TOML, as in DESIGN.md §6, plus:
+// TOML. Every setting (a key with one value, such as length or
+// [material] strength) is described once in Settings: its key, kind of
+// value, default, plausible range, help text and where it shows. Parse,
+// Marshal, MarshalKeeping and Validate are driven by that table, and so are
+// the editor's wall form, the report's inputs and the JSON of pierwise
+// solve; unknown keys are the ones the TOML decoder reports as not decoded.
+// Besides the basic keys (title, units, length, height, thickness, support,
+// [material], [load] shear, [[opening]]):
 //
 //	layout = "as drawn"      # name of the top-level [[opening]] layout; default "main"
 //	active = "door moved"    # the layout to solve; default the top-level one
@@ -67,6 +76,16 @@
 //	[check]                  # finite-element check
 //	mesh = "6in"             # largest element size; default chosen by the solver
 //	element = "q4"           # "qm6" (default) or "q4"
+//
+//	[analysis]
+//	basis = "fe"             # "classic" (default) or "fe": the model results come from
+//	top_tie = false          # default true: the FE model ties the top nodes' sway
+//
+//	[gravity]                # line loads along the top (LineLoad, N/m)
+//	dead = "1.2kip/ft"       # plf, lb/ft, klf, kip/ft, N/m, kN/m; bare kip/ft or kN/m
+//	live = "800lb/ft"
+//	self_weight = "60psf"    # per face area: psf, ksf, psi, Pa, kPa, N/m2, kN/m2;
+//	                         # bare psf or kPa; 0 = none (NoSelf); left out = default
 //
 //	[[variant]]              # another layout of the same wall
 //	name = "door moved"

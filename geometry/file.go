@@ -4,6 +4,8 @@ import (
 	"errors"
 	"fmt"
 	"math"
+	"reflect"
+	"slices"
 	"sort"
 	"strconv"
 	"strings"
@@ -14,18 +16,15 @@ import (
 // DefaultLayout is the name of the top-level layout when the file gives none.
 const DefaultLayout = "main"
 
-// Parse reads a wall file (TOML, DESIGN §6 plus layouts, stiffness, drift
-// and check settings; see doc.go) and validates the wall. filename is only
-// used in messages. On failure the error is an ErrorList naming the file,
-// line and key of every problem found, and the wall is nil.
-func Parse(filename string, data []byte) (w *Wall, err error) {
-	defer func() {
-		if r := recover(); r != nil {
-			w, err = nil, ErrorList{{File: filename, Msg: fmt.Sprint("cannot read the file: ", r)}}
-		}
-	}()
-	var raw map[string]any
-	if _, err := toml.Decode(string(data), &raw); err != nil {
+// Parse reads a wall file (TOML; see doc.go and Settings) and validates the
+// wall. filename is only used in messages. On failure the error is an
+// ErrorList naming the file, line and key of every problem found, and the
+// wall is nil.
+func Parse(filename string, data []byte) (*Wall, error) {
+	sc := schemaOf()
+	top := reflect.New(sc.top.typ)
+	md, err := toml.Decode(string(data), top.Interface())
+	if err != nil {
 		var pe toml.ParseError
 		if errors.As(err, &pe) {
 			msg := pe.Message
@@ -36,12 +35,13 @@ func Parse(filename string, data []byte) (w *Wall, err error) {
 		}
 		return nil, ErrorList{{File: filename, Msg: "not valid TOML: " + err.Error()}}
 	}
-	p := &fileParser{file: filename, lines: scanKeyLines(string(data)), bad: map[string]bool{}}
-	if e := storeyFile(raw, p.lines); e != nil {
+	p := &fileParser{file: filename, lines: scanKeyLines(string(data)), bad: map[string]bool{}, md: &md, sc: sc}
+	if e := storeyFile(&md, p.lines); e != nil {
 		e.File = filename
 		return nil, ErrorList{e}
 	}
-	w = p.wall(raw)
+	w := p.wall(sc.top.fields(top))
+	p.unknownKeys()
 	for _, e := range errorList(w.Validate()) {
 		if !p.hidden(e.Key) {
 			p.errs = append(p.errs, e)
@@ -60,18 +60,17 @@ func Parse(filename string, data []byte) (w *Wall, err error) {
 	return w, nil
 }
 
-// storeyFile recognises a storey file (DESIGN §10: a [storey] table or
-// [[wall]] entries, and none of a wall's sizes) handed over as a wall file,
-// and returns one error that says so instead of a list of unknown and
-// missing keys.
-func storeyFile(raw map[string]any, lines keyLines) *Error {
-	_, st := raw["storey"]
-	_, wl := raw["wall"]
+// storeyFile recognises a storey file (a [storey] table or [[wall]]
+// entries, and none of a wall's sizes) handed over as a wall file, and
+// returns one error that says so instead of a list of unknown and missing
+// keys.
+func storeyFile(md *toml.MetaData, lines keyLines) *Error {
+	st, wl := md.IsDefined("storey"), md.IsDefined("wall")
 	if !st && !wl {
 		return nil
 	}
 	for _, k := range []string{"length", "height", "opening"} {
-		if _, ok := raw[k]; ok {
+		if md.IsDefined(k) {
 			return nil // a wall file with a stray key: report it as such
 		}
 	}
@@ -104,12 +103,112 @@ func errorList(err error) ErrorList {
 	return nil
 }
 
+// node is one table of the file's shape: the keys it may hold and, for each,
+// whether it is a value, a table or a list of tables.
+type node struct {
+	keys  []string
+	sub   map[string]*node // tables and lists of tables
+	list  map[string]bool  // lists of tables ([[opening]])
+	typ   reflect.Type     // a struct of one *toml.Primitive per key
+	known string           // the keys for messages: "kind, strength, ..."
+}
+
+func newNode(keys ...string) *node {
+	return &node{keys: keys, sub: map[string]*node{}, list: map[string]bool{}}
+}
+
+func (n *node) add(key string) {
+	for _, k := range n.keys {
+		if k == key {
+			return
+		}
+	}
+	n.keys = append(n.keys, key)
+}
+
+// finish builds the struct the decoder fills: decoding into it marks the
+// known keys as decoded, so that toml.MetaData.Undecoded lists the others.
+func (n *node) finish() {
+	prim := reflect.TypeOf((*toml.Primitive)(nil))
+	fields := make([]reflect.StructField, len(n.keys))
+	for i, k := range n.keys {
+		fields[i] = reflect.StructField{Name: "F" + strconv.Itoa(i), Type: prim, Tag: reflect.StructTag(`toml:"` + k + `"`)}
+	}
+	n.typ = reflect.StructOf(fields)
+	n.known = strings.Join(n.keys, ", ")
+	for _, s := range n.sub {
+		s.finish()
+	}
+}
+
+// fields returns the keys the file gave, from a decoded struct of n.typ.
+func (n *node) fields(v reflect.Value) map[string]*toml.Primitive {
+	m := map[string]*toml.Primitive{}
+	v = reflect.Indirect(v)
+	for i, k := range n.keys {
+		if p := v.Field(i).Interface().(*toml.Primitive); p != nil {
+			m[k] = p
+		}
+	}
+	return m
+}
+
+// lookup returns the node of a key path without indices ("variant.opening").
+func (n *node) lookup(path []string) *node {
+	for _, k := range path {
+		s, ok := n.sub[k]
+		if !ok {
+			return nil
+		}
+		n = s
+	}
+	return n
+}
+
+// schema is the shape of a wall file, made from Settings.
+type schema struct {
+	top, opening, variant *node
+}
+
+var openingKeys = []string{"name", "x", "sill", "width", "height"}
+
+func schemaOf() *schema {
+	sc := &schema{top: newNode(), opening: newNode(openingKeys...), variant: newNode("name", "opening")}
+	for i := range Settings {
+		s := &Settings[i]
+		table, name := s.split()
+		if table == "" {
+			sc.top.add(name)
+			continue
+		}
+		t, ok := sc.top.sub[table]
+		if !ok {
+			t = newNode()
+			sc.top.sub[table] = t
+		}
+		t.add(name)
+	}
+	sc.top.add("layout")
+	sc.top.add("active")
+	for _, t := range settingTables() {
+		sc.top.add(t)
+	}
+	sc.top.add("opening")
+	sc.top.add("variant")
+	sc.top.sub["opening"], sc.top.list["opening"] = sc.opening, true
+	sc.top.sub["variant"], sc.top.list["variant"] = sc.variant, true
+	sc.variant.sub["opening"], sc.variant.list["opening"] = sc.opening, true
+	sc.top.finish()
+	return sc
+}
+
 type fileParser struct {
 	file  string
 	lines keyLines
 	errs  ErrorList
 	bad   map[string]bool // keys that could not be read; validation stays quiet about them
-	sys   System
+	md    *toml.MetaData
+	sc    *schema
 }
 
 func (p *fileParser) fail(key, msg string) {
@@ -131,29 +230,73 @@ func (p *fileParser) hidden(key string) bool {
 	return false
 }
 
-// table checks that every key of m is one of allowed and reports the others.
-func (p *fileParser) table(m map[string]any, prefix string, allowed ...string) {
-	var unknown []string
-	for k := range m {
-		found := false
-		for _, a := range allowed {
-			if k == a {
-				found = true
-				break
+// badAbove reports whether key or a table or key it lies in could not be
+// read (a value given as an inline table has keys of its own).
+func (p *fileParser) badAbove(key string) bool {
+	for key != "" {
+		if p.bad[key] {
+			return true
+		}
+		i := strings.LastIndexAny(key, ".[")
+		if i < 0 {
+			return false
+		}
+		key = key[:i]
+	}
+	return false
+}
+
+// unknownKeys reports the keys the decoder met and the parser did not ask
+// for (toml.MetaData.Undecoded), and keys that match a known one only when
+// case is ignored (the decoder takes those as the known key). Tables of an
+// array are numbered in the order of the file, as keyLines numbers them.
+func (p *fileParser) unknownKeys() {
+	undecoded := map[string]bool{}
+	for _, k := range p.md.Undecoded() {
+		undecoded[k.String()] = true
+	}
+	count := map[string]int{}
+	for _, k := range p.md.Keys() {
+		ks := k.String()
+		if p.md.Type(k...) == "ArrayHash" {
+			count[ks]++
+			for c := range count {
+				if strings.HasPrefix(c, ks+".") {
+					delete(count, c)
+				}
 			}
 		}
-		if !found {
-			unknown = append(unknown, k)
+		name := k[len(k)-1]
+		parent := p.sc.top.lookup(k[:len(k)-1])
+		unknown := undecoded[ks]
+		if !unknown && parent != nil && !slices.Contains(parent.keys, name) {
+			unknown = true // matched a known key only ignoring case
 		}
-	}
-	sort.Strings(unknown)
-	for _, k := range unknown {
-		full := joinKey(prefix, k)
+		if !unknown {
+			continue
+		}
+		// The key path with indices, as errors name it.
+		full, prefix := "", ""
+		for i, seg := range k {
+			full = joinKey(full, seg)
+			prefix = joinKey(prefix, seg)
+			if n := count[prefix]; n > 0 && i < len(k)-1 {
+				full += "[" + strconv.Itoa(n) + "]"
+			}
+		}
+		if p.badAbove(full) || (len(k) > 1 && undecoded[k[:len(k)-1].String()]) {
+			continue // inside something already reported
+		}
+		table := strings.TrimSuffix(full, "."+name)
 		where := "here"
-		if prefix != "" {
-			where = "in " + tableName(prefix)
+		if len(k) > 1 {
+			where = "in " + tableName(table)
 		}
-		p.fail(full, "unknown key "+strconv.Quote(k)+" "+where+" (known keys: "+strings.Join(allowed, ", ")+")")
+		known := ""
+		if parent != nil {
+			known = " (known keys: " + parent.known + ")"
+		}
+		p.fail(full, "unknown key "+strconv.Quote(name)+" "+where+known)
 	}
 }
 
@@ -180,60 +323,62 @@ func stripIndices(k string) string {
 	return b.String()
 }
 
-func (p *fileParser) subTable(m map[string]any, key string) map[string]any {
-	v, ok := m[key]
-	if !ok {
-		return nil
-	}
-	t, ok := v.(map[string]any)
-	if !ok {
-		p.fail(key, "must be a table: ["+key+"] followed by its keys")
-		return nil
-	}
-	return t
+// value decodes one value as the TOML library gives it (string, int64,
+// float64, bool, a table, a list, a date).
+func (p *fileParser) value(prim *toml.Primitive) any {
+	var v any
+	_ = p.md.PrimitiveDecode(*prim, &v) // decoding into any cannot fail
+	return v
 }
 
-func (p *fileParser) tables(m map[string]any, key, full string) []map[string]any {
-	v, ok := m[key]
+// table decodes the table at key (full is its path with indices).
+func (p *fileParser) table(m map[string]*toml.Primitive, key, full string, n *node) map[string]*toml.Primitive {
+	prim, ok := m[key]
 	if !ok {
 		return nil
 	}
-	t, ok := v.([]map[string]any)
+	v := reflect.New(n.typ)
+	if err := p.md.PrimitiveDecode(*prim, v.Interface()); err != nil {
+		p.fail(full, "must be a table: ["+full+"] followed by its keys")
+		return nil
+	}
+	return n.fields(v)
+}
+
+// tables decodes the list of tables at key.
+func (p *fileParser) tables(m map[string]*toml.Primitive, key, full string, n *node) []map[string]*toml.Primitive {
+	prim, ok := m[key]
 	if !ok {
+		return nil
+	}
+	var list []toml.Primitive
+	err := p.md.PrimitiveDecode(*prim, &list)
+	out := make([]map[string]*toml.Primitive, len(list))
+	for i := 0; err == nil && i < len(list); i++ {
+		v := reflect.New(n.typ)
+		if err = p.md.PrimitiveDecode(list[i], v.Interface()); err == nil {
+			out[i] = n.fields(v)
+		}
+	}
+	if err != nil {
 		p.fail(full, "must be a list of tables, each starting with [["+stripIndices(full)+"]]")
 		return nil
 	}
-	return t
+	return out
 }
 
-func (p *fileParser) str(m map[string]any, key, full string) (string, bool) {
-	v, ok := m[key]
+func (p *fileParser) str(m map[string]*toml.Primitive, key, full string) (string, bool) {
+	prim, ok := m[key]
 	if !ok {
 		return "", false
 	}
+	v := p.value(prim)
 	s, ok := v.(string)
 	if !ok {
 		p.fail(full, "must be text in quotes, not "+describe(v))
 		return "", false
 	}
 	return s, true
-}
-
-func (p *fileParser) number(m map[string]any, key, full string, def float64) float64 {
-	v, ok := m[key]
-	if !ok {
-		return def
-	}
-	f, ok := toFloat(v)
-	if !ok {
-		p.fail(full, "must be a number, not "+describe(v))
-		return def
-	}
-	if !finite(f) {
-		p.fail(full, "must be a finite number")
-		return def
-	}
-	return f
 }
 
 func toFloat(v any) (float64, bool) {
@@ -264,121 +409,194 @@ func describe(v any) string {
 	return "a date or time"
 }
 
-// quantity reads a length, force or stress given as text with a unit or as
-// a bare number in the base unit.
-func quantity[T ~float64](p *fileParser, m map[string]any, key, full string, parse func(string, System) (T, error), base T, example string) (T, bool) {
-	v, ok := m[key]
+// length reads a length given as text with a unit or as a bare number in
+// the base unit.
+func (p *fileParser) length(m map[string]*toml.Primitive, key, full string, sys System) (Length, bool) {
+	prim, ok := m[key]
 	if !ok {
 		return 0, false
 	}
-	switch x := v.(type) {
+	ex := `"12ft"`
+	if sys == SI {
+		ex = `"3.6m"`
+	}
+	switch x := p.value(prim).(type) {
 	case string:
-		q, err := parse(x, p.sys)
+		l, err := ParseLength(x, sys)
 		if err != nil {
 			p.fail(full, err.Error())
 			return 0, false
 		}
-		return q, true
+		return l, true
 	case int64, float64:
 		f, _ := toFloat(x)
-		q := T(f) * base
-		if !finite(float64(q)) {
+		l := Length(f) * sys.BaseLength()
+		if !finite(float64(l)) {
 			p.fail(full, "must be a finite number")
 			return 0, false
 		}
-		return q, true
+		return l, true
+	default:
+		p.fail(full, "must be a value such as "+ex+", not "+describe(x))
 	}
-	p.fail(full, "must be a value such as "+example+", not "+describe(v))
 	return 0, false
 }
 
-func (p *fileParser) length(m map[string]any, key, full string) (Length, bool) {
-	ex := `"12ft"`
-	if p.sys == SI {
-		ex = `"3.6m"`
-	}
-	return quantity(p, m, key, full, ParseLength, p.sys.BaseLength(), ex)
-}
-
-func (p *fileParser) requiredLength(m map[string]any, key, full string) Length {
-	l, ok := p.length(m, key, full)
+func (p *fileParser) requiredLength(m map[string]*toml.Primitive, key, full string, sys System) Length {
+	l, ok := p.length(m, key, full, sys)
 	if !ok && !p.bad[full] {
-		examples := map[string][2]string{
-			"length": {`"36ft"`, `"9.6m"`}, "height": {`"14ft"`, `"3.6m"`}, "thickness": {`"7.625in"`, `"190mm"`},
-			"x": {`"4ft"`, `"1.2m"`}, "width": {`"3ft"`, `"900mm"`},
-		}
+		examples := map[string][2]string{"x": {`"4ft"`, `"1.2m"`}, "width": {`"3ft"`, `"900mm"`}, "height": {`"14ft"`, `"3.6m"`}}
 		ex := examples[key][0]
-		if p.sys == SI {
+		if sys == SI {
 			ex = examples[key][1]
-		}
-		if ex == "" {
-			ex = `"4ft"`
 		}
 		p.fail(full, "missing; add "+key+" = "+ex)
 	}
 	return l
 }
 
-func (p *fileParser) wall(raw map[string]any) *Wall {
-	w := &Wall{
-		Stiffness: Stiffness{Flexure: 1, Shear: 1},
-		Drift:     Drift{Cd: 1, Ie: 1},
-	}
-	p.table(raw, "", "title", "units", "length", "height", "thickness", "support",
-		"layout", "active", "material", "load", "stiffness", "drift", "check", "opening", "variant")
-	w.Title, _ = p.str(raw, "title", "title")
-	if u, ok := p.str(raw, "units", "units"); ok {
-		if w.Units, ok = ParseSystem(u); !ok {
-			p.fail("units", "unknown unit system "+strconv.Quote(u)+` (use "us" or "si")`)
-		}
-	}
-	p.sys = w.Units
-	w.Length = p.requiredLength(raw, "length", "length")
-	w.Height = p.requiredLength(raw, "height", "height")
-	w.Thickness = p.requiredLength(raw, "thickness", "thickness")
-	if s, ok := p.str(raw, "support", "support"); ok {
-		if w.Support, ok = ParseSupport(s); !ok {
-			p.fail("support", "unknown support "+strconv.Quote(s)+` (use "cantilever" or "fixed")`)
-		}
-	}
-	p.material(w, p.subTable(raw, "material"))
-	if t := p.subTable(raw, "load"); t != nil {
-		p.table(t, "load", "shear")
-		w.Load.Shear, _ = quantity(p, t, "shear", "load.shear", ParseForce, p.sys.BaseForce(), `"40kip"`)
-	}
-	if t := p.subTable(raw, "stiffness"); t != nil {
-		p.table(t, "stiffness", "flexure", "shear")
-		w.Stiffness.Flexure = p.number(t, "flexure", "stiffness.flexure", 1)
-		w.Stiffness.Shear = p.number(t, "shear", "stiffness.shear", 1)
-	}
-	if t := p.subTable(raw, "drift"); t != nil {
-		p.drift(w, t)
-	}
-	if t := p.subTable(raw, "check"); t != nil {
-		p.table(t, "check", "mesh", "element")
-		if m, ok := p.length(t, "mesh", "check.mesh"); ok {
-			if m <= 0 {
-				p.fail("check.mesh", "must be greater than zero (leave it out for the default size)")
+// setting reads one setting from its table (nil when the file has no such
+// table) into w.
+func (p *fileParser) setting(s *Setting, t map[string]*toml.Primitive, tablePresent bool, w *Wall) {
+	table, name := s.split()
+	key := s.Key
+	prim, given := t[name]
+	if !given {
+		if s.Required != nil && s.Required(w) && !p.bad[key] && (s.Needs == "" || !p.bad[s.Needs]) {
+			msg := "missing; add " + name + " = " + s.example(w.Units)
+			if s.Missing != "" {
+				msg = s.Missing + s.example(w.Units)
 			}
-			w.Check.Mesh = m
+			errKey := key
+			if !tablePresent && table != "" && !p.bad[table] {
+				errKey = table
+			}
+			p.fail(errKey, msg)
+			p.bad[key] = true
 		}
-		w.Check.Element, _ = p.str(t, "element", "check.element")
+		return
+	}
+	v, msg := s.fromFile(p.value(prim), w.Units)
+	if msg == "" && s.InFile != nil {
+		msg = s.InFile(v)
+	}
+	if msg != "" {
+		p.fail(key, msg)
+		return
+	}
+	s.Set(w, v)
+}
+
+// fromFile reads a setting's value as the TOML library decoded it.
+func (s *Setting) fromFile(raw any, sys System) (Value, string) {
+	switch s.Kind {
+	case KindText, KindChoice:
+		t, ok := raw.(string)
+		if !ok {
+			return Value{}, "must be text in quotes, not " + describe(raw)
+		}
+		if s.Kind == KindChoice {
+			c, ok := s.choice(t)
+			if !ok {
+				return Value{}, s.unknownChoice(t)
+			}
+			t = c
+		}
+		return Value{Text: t}, ""
+	case KindBool:
+		b, ok := raw.(bool)
+		if !ok {
+			return Value{}, "must be true or false (without quotes), not " + describe(raw)
+		}
+		return Value{Bool: b}, ""
+	case KindNumber:
+		f, ok := toFloat(raw)
+		if !ok {
+			return Value{}, "must be a number, not " + describe(raw)
+		}
+		if !finite(f) {
+			return Value{}, "must be a finite number"
+		}
+		return Value{Num: f}, ""
+	case KindDriftLimit:
+		return driftLimitFromFile(raw)
+	}
+	switch x := raw.(type) {
+	case string:
+		f, err := s.parseQuantity(x, sys)
+		if err != nil {
+			return Value{}, err.Error()
+		}
+		return Value{Num: f}, ""
+	case int64, float64:
+		f, _ := toFloat(x)
+		f *= s.base(sys)
+		if !finite(f) {
+			return Value{}, "must be a finite number"
+		}
+		return Value{Num: f}, ""
+	}
+	return Value{}, "must be a value such as " + s.example(sys) + ", not " + describe(raw)
+}
+
+func driftLimitFromFile(v any) (Value, string) {
+	limit, isNum := toFloat(v)
+	if s, isStr := v.(string); isStr {
+		if pr, found := FindDriftPreset(s); found {
+			return Value{Num: pr.Limit, Text: pr.Name}, ""
+		}
+		f, msg := parseNumber(strings.TrimSpace(s))
+		if msg != "" {
+			return Value{}, "unknown preset " + strconv.Quote(s) + " (use " + driftPresetNames() + ", or a number such as 0.01)"
+		}
+		limit, isNum = f, true
+	}
+	if !isNum {
+		return Value{}, "must be a preset name or a number such as 0.01, not " + describe(v)
+	}
+	if !finite(limit) || limit <= 0 || limit > 0.1 {
+		return Value{}, "must be a fraction of the height greater than 0 and at most 0.1, such as 0.01 (is " + strconv.FormatFloat(limit, 'g', -1, 64) + "); leave it out for no drift check"
+	}
+	return Value{Num: limit}, ""
+}
+
+// newDefaultWall returns a wall with every setting at its default and no
+// size, material or layout: what Parse starts from.
+func newDefaultWall() *Wall {
+	w := &Wall{}
+	for i := range Settings {
+		Settings[i].Set(w, Settings[i].Default)
+	}
+	return w
+}
+
+func (p *fileParser) wall(raw map[string]*toml.Primitive) *Wall {
+	w := newDefaultWall()
+	tables := map[string]map[string]*toml.Primitive{"": raw}
+	for i := range Settings {
+		s := &Settings[i]
+		table := s.Table()
+		t, seen := tables[table]
+		if !seen {
+			t = p.table(raw, table, table, p.sc.top.sub[table])
+			tables[table] = t
+		}
+		p.setting(s, t, t != nil, w)
 	}
 	name := DefaultLayout
 	if s, ok := p.str(raw, "layout", "layout"); ok {
 		name = s
 	}
-	w.Layouts = []Layout{{Name: name, Openings: p.openings(raw, "")}}
-	for k, v := range p.tables(raw, "variant", "variant") {
+	w.Layouts = []Layout{{Name: name, Openings: p.openings(raw, "", w.Units)}}
+	for k, v := range p.tables(raw, "variant", "variant", p.sc.variant) {
 		key := "variant[" + strconv.Itoa(k+1) + "]"
-		p.table(v, key, "name", "opening")
 		lay := Layout{}
 		if s, ok := p.str(v, "name", key+".name"); ok {
 			lay.Name = s
 		} else if !p.bad[key+".name"] {
 			p.fail(key+".name", `missing; every [[variant]] needs a name = "..."`)
 		}
-		lay.Openings = p.openings(v, key)
+		lay.Openings = p.openings(v, key, w.Units)
 		w.Layouts = append(w.Layouts, lay)
 	}
 	if s, ok := p.str(raw, "active", "active"); ok {
@@ -397,83 +615,23 @@ func (p *fileParser) wall(raw map[string]any) *Wall {
 	return w
 }
 
-func (p *fileParser) material(w *Wall, t map[string]any) {
-	p.table(t, "material", "kind", "strength", "modulus", "shear_modulus", "poisson")
-	if s, ok := p.str(t, "kind", "material.kind"); ok {
-		if w.Material.Kind, ok = ParseMaterialKind(s); !ok {
-			p.fail("material.kind", "unknown material "+strconv.Quote(s)+" (use concrete-masonry, clay-masonry, concrete or custom)")
-		}
-	}
-	ex := `"2000psi"`
-	if p.sys == SI {
-		ex = `"13.8MPa"`
-	}
-	var ok bool
-	w.Material.Strength, ok = quantity(p, t, "strength", "material.strength", ParseStress, p.sys.BaseStress(), ex)
-	if !ok && !p.bad["material.strength"] && !p.bad["material.kind"] && w.Material.Kind != Custom {
-		key := "material.strength"
-		if t == nil && !p.bad["material"] {
-			key = "material"
-		}
-		p.fail(key, "missing strength (f'm for masonry, f'c for concrete); add [material] strength = "+ex)
-		p.bad["material.strength"] = true
-	}
-	w.Material.Modulus, _ = quantity(p, t, "modulus", "material.modulus", ParseStress, p.sys.BaseStress(), ex)
-	w.Material.ShearModulus, _ = quantity(p, t, "shear_modulus", "material.shear_modulus", ParseStress, p.sys.BaseStress(), ex)
-	w.Material.Poisson = p.number(t, "poisson", "material.poisson", 0)
-}
-
-func (p *fileParser) drift(w *Wall, t map[string]any) {
-	p.table(t, "drift", "cd", "ie", "limit")
-	w.Drift.Cd = p.number(t, "cd", "drift.cd", 1)
-	w.Drift.Ie = p.number(t, "ie", "drift.ie", 1)
-	v, ok := t["limit"]
-	if !ok {
-		return
-	}
-	const key = "drift.limit"
-	limit, isNum := toFloat(v)
-	if s, isStr := v.(string); isStr {
-		if pr, found := FindDriftPreset(s); found {
-			w.Drift.Preset, w.Drift.Limit = pr.Name, pr.Limit
-			return
-		}
-		f, msg := parseNumber(strings.TrimSpace(s))
-		if msg != "" {
-			p.fail(key, "unknown preset "+strconv.Quote(s)+" (use "+driftPresetNames()+", or a number such as 0.01)")
-			return
-		}
-		limit, isNum = f, true
-	}
-	if !isNum {
-		p.fail(key, "must be a preset name or a number such as 0.01, not "+describe(v))
-		return
-	}
-	if !finite(limit) || limit <= 0 || limit > 0.1 {
-		p.fail(key, "must be a fraction of the height greater than 0 and at most 0.1, such as 0.01 (is "+strconv.FormatFloat(limit, 'g', -1, 64)+"); leave it out for no drift check")
-		return
-	}
-	w.Drift.Limit = limit
-}
-
 // openings reads the [[opening]] tables of the layout at prefix ("" for the
 // top level) and names the unnamed ones D1, D2… (doors) and W1, W2…
 // (windows) after the names already taken.
-func (p *fileParser) openings(m map[string]any, prefix string) []Opening {
-	list := p.tables(m, "opening", joinKey(prefix, "opening"))
+func (p *fileParser) openings(m map[string]*toml.Primitive, prefix string, sys System) []Opening {
+	list := p.tables(m, "opening", joinKey(prefix, "opening"), p.sc.opening)
 	if len(list) == 0 {
 		return nil
 	}
 	ops := make([]Opening, len(list))
 	for i, t := range list {
 		key := joinKey(prefix, "opening["+strconv.Itoa(i+1)+"]")
-		p.table(t, key, "name", "x", "sill", "width", "height")
 		o := &ops[i]
 		o.Name, _ = p.str(t, "name", key+".name")
-		o.X = p.requiredLength(t, "x", key+".x")
-		o.Sill, _ = p.length(t, "sill", key+".sill")
-		o.Width = p.requiredLength(t, "width", key+".width")
-		o.Height = p.requiredLength(t, "height", key+".height")
+		o.X = p.requiredLength(t, "x", key+".x", sys)
+		o.Sill, _ = p.length(t, "sill", key+".sill", sys)
+		o.Width = p.requiredLength(t, "width", key+".width", sys)
+		o.Height = p.requiredLength(t, "height", key+".height", sys)
 	}
 	for i := range ops {
 		if _, named := list[i]["name"]; !named {
@@ -496,62 +654,34 @@ func Marshal(w *Wall) ([]byte, error) {
 	var b strings.Builder
 	sys := w.Units
 	kv := func(k, v string) { b.WriteString(k + " = " + v + "\n") }
-	if w.Title != "" {
-		kv("title", quote(w.Title))
+	for i := range Settings {
+		if s := &Settings[i]; s.Table() == "" && s.written(w) {
+			kv(s.Name(), s.fileText(w))
+		}
 	}
-	kv("units", quote(sys.String()))
-	kv("length", quote(exactLength(w.Length, sys)))
-	kv("height", quote(exactLength(w.Height, sys)))
-	kv("thickness", quote(exactLength(w.Thickness, sys)))
-	kv("support", quote(w.Support.String()))
 	if name := w.Layouts[0].Name; name != DefaultLayout {
 		kv("layout", quote(name))
 	}
 	if w.Active != 0 {
 		kv("active", quote(w.Layouts[w.Active].Name))
 	}
-	m := w.Material
-	b.WriteString("\n[material]\n")
-	kv("kind", quote(m.Kind.String()))
-	if m.Strength != 0 {
-		kv("strength", quote(exactStress(m.Strength, sys)))
-	}
-	if m.Modulus != 0 {
-		kv("modulus", quote(exactStress(m.Modulus, sys)))
-	}
-	if m.ShearModulus != 0 {
-		kv("shear_modulus", quote(exactStress(m.ShearModulus, sys)))
-	}
-	if m.Poisson != 0 {
-		kv("poisson", strconv.FormatFloat(m.Poisson, 'g', -1, 64))
-	}
-	if w.Load.Shear != 0 {
-		b.WriteString("\n[load]\n")
-		kv("shear", quote(exactForce(w.Load.Shear, sys)))
-	}
-	if w.Stiffness.Flexure != 1 || w.Stiffness.Shear != 1 {
-		b.WriteString("\n[stiffness]\n")
-		kv("flexure", tomlFloat(w.Stiffness.Flexure))
-		kv("shear", tomlFloat(w.Stiffness.Shear))
-	}
-	d := w.Drift
-	if d.Cd != 1 || d.Ie != 1 || d.Limit != 0 || d.Preset != "" {
-		b.WriteString("\n[drift]\n")
-		kv("cd", tomlFloat(d.Cd))
-		kv("ie", tomlFloat(d.Ie))
-		if d.Preset != "" {
-			kv("limit", quote(d.Preset))
-		} else if d.Limit != 0 {
-			kv("limit", tomlFloat(d.Limit))
+	for _, t := range settingTables() {
+		var in []*Setting
+		write := false
+		for i := range Settings {
+			if s := &Settings[i]; s.Table() == t {
+				in = append(in, s)
+				write = write || s.Write == WriteAlways || !s.IsDefault(w)
+			}
 		}
-	}
-	if w.Check.Mesh != 0 || w.Check.Element != "" {
-		b.WriteString("\n[check]\n")
-		if w.Check.Mesh != 0 {
-			kv("mesh", quote(exactLength(w.Check.Mesh, sys)))
+		if !write {
+			continue
 		}
-		if w.Check.Element != "" {
-			kv("element", quote(w.Check.Element))
+		b.WriteString("\n[" + t + "]\n")
+		for _, s := range in {
+			if s.Write != WriteChanged || !s.IsDefault(w) {
+				kv(s.Name(), s.fileText(w))
+			}
 		}
 	}
 	for k, lay := range w.Layouts {

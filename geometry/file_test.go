@@ -3,7 +3,7 @@ package geometry
 import (
 	"errors"
 	"math"
-	"math/rand"
+	"math/rand/v2"
 	"os"
 	"path/filepath"
 	"reflect"
@@ -106,7 +106,7 @@ func normal(w *Wall) *Wall {
 }
 
 func TestRoundTripRandomWalls(t *testing.T) {
-	rng := rand.New(rand.NewSource(20261201))
+	rng := rand.New(rand.NewPCG(uint64(20261201), 0))
 	for n := 0; n < 500; n++ {
 		w := randomWall(rng)
 		if err := w.Validate(); err != nil {
@@ -119,65 +119,65 @@ func TestRoundTripRandomWalls(t *testing.T) {
 // randomWall makes a valid wall with values on a building grid or
 // arbitrary floats, openings in columns that cannot overlap, and variants.
 func randomWall(rng *rand.Rand) *Wall {
-	sys := System(rng.Intn(2))
+	sys := System(rng.IntN(2))
 	grid := float64(Inch)
 	if sys == SI {
 		grid = float64(Millimetre)
 	}
 	val := func(lo, hi float64) float64 {
 		v := lo + rng.Float64()*(hi-lo)
-		if rng.Intn(3) > 0 {
+		if rng.IntN(3) > 0 {
 			v = math.Max(grid, math.Round(v/grid)*grid)
 		}
 		return v
 	}
 	titles := []string{"", "Wall A", `quote " and \ backslash`, "tab\tand\nnewline", "ünïcödé — 12'-6\"", "#not a comment", "\x7f\x01"}
 	w := &Wall{
-		Title:     titles[rng.Intn(len(titles))],
+		Title:     titles[rng.IntN(len(titles))],
 		Units:     sys,
 		Length:    Length(val(2, 40)),
 		Height:    Length(val(2, 15)),
 		Thickness: Length(val(0.1, 0.4)),
-		Support:   Support(rng.Intn(2)),
+		Support:   Support(rng.IntN(2)),
 		Material: Material{
-			Kind:     MaterialKind(rng.Intn(4)),
+			Kind:     MaterialKind(rng.IntN(4)),
 			Strength: Stress(val(5e6, 4e7)),
 		},
 		Stiffness: Stiffness{Flexure: 1, Shear: 1},
 		Drift:     Drift{Cd: 1, Ie: 1},
 	}
-	if w.Material.Kind == Custom || rng.Intn(4) == 0 {
+	if w.Material.Kind == Custom || rng.IntN(4) == 0 {
 		w.Material.Modulus = Stress(val(5e9, 3e10))
 	}
-	if rng.Intn(3) == 0 {
+	if rng.IntN(3) == 0 {
 		w.Material.ShearModulus = Stress(val(2e9, 1e10))
 	}
-	if rng.Intn(5) > 0 {
+	if rng.IntN(5) > 0 {
 		w.Load.Shear = Force(val(1e3, 1e6))
 	}
-	if rng.Intn(2) == 0 {
+	if rng.IntN(2) == 0 {
 		w.Stiffness = Stiffness{Flexure: rng.Float64() + 0.01, Shear: 0.35}
 	}
-	switch rng.Intn(3) {
+	switch rng.IntN(3) {
 	case 0:
-		p := DriftPresets[rng.Intn(len(DriftPresets))]
+		p := DriftPresets[rng.IntN(len(DriftPresets))]
 		w.Drift = Drift{Cd: 1 + rng.Float64()*5, Ie: 1.25, Preset: p.Name, Limit: p.Limit}
 	case 1:
 		w.Drift = Drift{Cd: 4, Ie: 1, Limit: 0.001 + rng.Float64()*0.099}
 	}
-	if rng.Intn(3) == 0 {
-		w.Check = Check{Mesh: Length(val(0.05, 0.5)), Element: Elements[rng.Intn(len(Elements))]}
+	if rng.IntN(3) == 0 {
+		w.Check = Check{Mesh: Length(val(0.05, 0.5)), Element: Elements[rng.IntN(len(Elements))]}
 	}
-	nl := 1 + rng.Intn(3)
+	nl := 1 + rng.IntN(3)
 	for k := 0; k < nl; k++ {
-		lay := Layout{Name: []string{"main", "as drawn", "door moved", "v" + strconv.Itoa(k)}[rng.Intn(4)]}
-		if k > 0 || rng.Intn(2) == 0 {
+		lay := Layout{Name: []string{"main", "as drawn", "door moved", "v" + strconv.Itoa(k)}[rng.IntN(4)]}
+		if k > 0 || rng.IntN(2) == 0 {
 			lay.Name += " " + strconv.Itoa(k)
 		}
-		cols := rng.Intn(6)
+		cols := rng.IntN(6)
 		cw := float64(w.Length) / float64(max(cols, 1))
 		for c := 0; c < cols; c++ {
-			if rng.Intn(4) == 0 {
+			if rng.IntN(4) == 0 {
 				continue
 			}
 			x0 := float64(c) * cw
@@ -187,7 +187,7 @@ func randomWall(rng *rand.Rand) *Wall {
 			if o.X < Length(x0) {
 				o.X = Length(x0)
 			}
-			if rng.Intn(2) == 0 {
+			if rng.IntN(2) == 0 {
 				o.Sill = 0
 			} else {
 				o.Sill = Length(rng.Float64() * 0.5 * float64(w.Height))
@@ -200,7 +200,7 @@ func randomWall(rng *rand.Rand) *Wall {
 		}
 		w.Layouts = append(w.Layouts, lay)
 	}
-	w.Active = rng.Intn(len(w.Layouts))
+	w.Active = rng.IntN(len(w.Layouts))
 	return w
 }
 

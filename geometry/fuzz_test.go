@@ -62,6 +62,8 @@ func FuzzParse(f *testing.F) {
 	f.Add([]byte(wallText))
 	f.Add([]byte(wallText + "\n[drift]\nlimit = \"masonry-cantilever\"\ncd = 4\n[stiffness]\nflexure = 0.35\n[check]\nmesh = 6\nelement = \"q4\"\n"))
 	f.Add([]byte(strings.Replace(wallText, `x = "10ft"`, `x = "5ft"`, 1)))
+	f.Add([]byte(wallText + "\n[analysis]\nbasis = \"fe\"\ntop_tie = false\n[gravity]\ndead = \"1.2kip/ft\"\nlive = 800\nself_weight = 0\n"))
+	f.Add([]byte("LENGTH = 1\nlength = 2\nheight = 1\nthickness = 1\n[Material]\nstrength = 1\n"))
 	f.Add([]byte("length = 1\nheight = 1\nthickness = 1\n[material]\nstrength = 1\n[[opening]]\nx = 0\nwidth = 1\nheight = 1\n"))
 	f.Add([]byte("units = \"si\"\nlength = 1e300\nheight = 1e-300\nthickness = \"1mm\"\n[material]\nkind = \"custom\"\nmodulus = 1\n"))
 	f.Add([]byte("a = \"\"\"\nb = 1\n\"\"\"\n[[x.y]]\n[[x]]\n"))

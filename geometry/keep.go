@@ -1,6 +1,7 @@
 package geometry
 
 import (
+	"slices"
 	"strconv"
 	"strings"
 )
@@ -149,8 +150,7 @@ func headerPath(t string, arrays map[string]int) (string, bool) {
 // blockID names a table by its content so that the same opening is found
 // in two versions of a file even when other openings came or went.
 func blockID(path string, w *Wall) (string, bool) {
-	switch path {
-	case "material", "load", "stiffness", "drift", "check":
+	if slices.Contains(settingTables(), path) {
 		return path, true
 	}
 	index := func(s, prefix string) (int, string, bool) {

@@ -42,105 +42,10 @@ func (w *Wall) Validate() error {
 }
 
 func (w *Wall) validate(l *ErrorList) {
-	if !utf8.ValidString(w.Title) {
-		l.add("title", "is not valid UTF-8 text")
-	}
-	if w.Units != US && w.Units != SI {
-		l.add("units", "unknown unit system "+w.Units.String()+` (use "us" or "si")`)
-	}
-	sys := w.Units
-	positiveLength(l, "length", w.Length, sys)
-	positiveLength(l, "height", w.Height, sys)
-	if positiveLength(l, "thickness", w.Thickness, sys) && (w.Thickness < minThickness || w.Thickness > maxThickness) {
-		// Masonry and concrete shear walls are 4 in to 2 ft thick or so;
-		// thickness = 8 in a US file is 8 ft, a unit left out.
-		bare := "feet"
-		if sys == SI {
-			bare = "metres"
-		}
-		l.add("thickness", "is implausible for a wall ("+FormatLength(w.Thickness, sys)+"); thicknesses run from 2 in to 5 ft (50 mm to 1.5 m): check the unit (a bare number is in "+bare+")")
-	}
-	if w.Support != Cantilever && w.Support != Fixed {
-		l.add("support", "unknown support "+w.Support.String()+` (use "cantilever" or "fixed")`)
-	}
-	w.validateMaterial(l)
-	if s := float64(w.Load.Shear); !finite(s) {
-		l.add("load.shear", "is not a finite number")
-	} else if s > float64(maxForce) {
-		l.add("load.shear", "is implausibly large ("+FormatForce(w.Load.Shear, sys)+"); check the unit")
-	} else if s < 0 {
-		l.add("load.shear", "must not be negative (is "+FormatForce(w.Load.Shear, sys)+"); the sign of the shear does not change rigidity or shares")
-	}
-	numberIn(l, "stiffness.flexure", w.Stiffness.Flexure, minModifier, maxModifier)
-	numberIn(l, "stiffness.shear", w.Stiffness.Shear, minModifier, maxModifier)
-	numberIn(l, "drift.cd", w.Drift.Cd, 0, maxFactor)
-	numberIn(l, "drift.ie", w.Drift.Ie, 0, maxFactor)
-	w.validateDriftLimit(l)
-	if m := float64(w.Check.Mesh); !finite(m) {
-		l.add("check.mesh", "is not a finite number")
-	} else if m < 0 {
-		l.add("check.mesh", "must be positive (or left out for the default size)")
-	} else if big := math.Max(float64(w.Length), float64(w.Height)); m > 0 && finite(big) && big > 0 {
-		if m > big {
-			l.add("check.mesh", "is larger than the wall ("+FormatLength(w.Check.Mesh, sys)+")")
-		} else if m*maxMeshCells < big {
-			l.add("check.mesh", "is too fine: more than "+strconv.Itoa(maxMeshCells)+" elements along the wall (at least "+FormatLength(Length(big/maxMeshCells), sys)+")")
-		}
-	}
-	if w.Check.Element != "" && !knownElement(w.Check.Element) {
-		l.add("check.element", "unknown element "+strconv.Quote(w.Check.Element)+" (use qm6 or q4)")
+	for i := range Settings {
+		Settings[i].check(w, l)
 	}
 	w.validateLayouts(l)
-}
-
-func (w *Wall) validateMaterial(l *ErrorList) {
-	m := w.Material
-	sys := w.Units
-	if m.Kind < ConcreteMasonry || m.Kind > Custom {
-		l.add("material.kind", "unknown material "+m.Kind.String()+" (use concrete-masonry, clay-masonry, concrete or custom)")
-	}
-	if s := float64(m.Strength); !finite(s) {
-		l.add("material.strength", "is not a finite number")
-	} else if s < 0 || (s == 0 && m.Kind != Custom) {
-		l.add("material.strength", "must be greater than zero (is "+FormatStress(m.Strength, sys)+")")
-	} else if s > float64(maxStress) {
-		l.add("material.strength", tooLargeStress(m.Strength, sys))
-	} else if s > 0 && (m.Strength < minStrength || m.Strength > maxStrength) {
-		// f'm and f'c of real walls lie within a few MPa to about 100 MPa;
-		// far outside that, a unit was most likely left out or mistyped
-		// (strength = 2000 in an SI file is 2000 MPa, not psi).
-		l.add("material.strength", "is implausible for f'm or f'c ("+FormatStress(m.Strength, sys)+"); strengths run from 1 MPa to 250 MPa (145 psi to 36 ksi): check the unit")
-	}
-	if e := float64(m.Modulus); !finite(e) {
-		l.add("material.modulus", "is not a finite number")
-	} else if e < 0 {
-		l.add("material.modulus", "must be greater than zero (is "+FormatStress(m.Modulus, sys)+")")
-	} else if e > float64(maxStress) {
-		l.add("material.modulus", tooLargeStress(m.Modulus, sys))
-	} else if e == 0 && m.Kind == Custom {
-		l.add("material.modulus", `is required for kind = "custom"`)
-	} else if e > 0 && (m.Modulus < minModulus || m.Modulus > maxModulus) {
-		// modulus = 1500 in a US file is 1500 psi, a thousand times too soft.
-		l.add("material.modulus", "is implausible for E ("+FormatStress(m.Modulus, sys)+"); moduli run from 0.5 GPa to 500 GPa (73 ksi to 72,500 ksi): check the unit")
-	}
-	if g := float64(m.ShearModulus); !finite(g) {
-		l.add("material.shear_modulus", "is not a finite number")
-	} else if g < 0 {
-		l.add("material.shear_modulus", "must be greater than zero (is "+FormatStress(m.ShearModulus, sys)+")")
-	} else if g > float64(maxStress) {
-		l.add("material.shear_modulus", tooLargeStress(m.ShearModulus, sys))
-	} else if g > 0 && (m.ShearModulus < minModulus/5 || m.ShearModulus > maxModulus/2) {
-		l.add("material.shear_modulus", "is implausible for E_v ("+FormatStress(m.ShearModulus, sys)+"); shear moduli run from 0.1 GPa to 250 GPa (15 ksi to 36,000 ksi): check the unit")
-	}
-	// ν of an isotropic material in plane stress lies below 0.5 (E_v = E/(2(1+ν))
-	// above E/3); zero means "not given", so it is a ratio above 0.
-	if nu := m.Poisson; !finite(nu) {
-		l.add("material.poisson", "is not a finite number")
-	} else if nu < 0 || nu >= 0.5 {
-		l.add("material.poisson", "must be a Poisson's ratio from above 0 to below 0.5, such as 0.2 for concrete (is "+strconv.FormatFloat(nu, 'g', -1, 64)+")")
-	} else if nu > 0 && m.ShearModulus != 0 {
-		l.add("material.poisson", "give either shear_modulus or poisson, not both (E_v = E/(2(1+ν)))")
-	}
 }
 
 func (w *Wall) validateDriftLimit(l *ErrorList) {

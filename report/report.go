@@ -12,6 +12,7 @@ import (
 	"strconv"
 	"strings"
 	"time"
+	"unicode"
 	"unicode/utf8"
 
 	"pierwise/geometry"
@@ -138,6 +139,11 @@ func inputs(w *Text, wall *geometry.Wall, res *pier.Result) {
 	w.KV("Drift", drift)
 	if source != "" {
 		w.KV("", source)
+	}
+	for i := range geometry.Settings {
+		if s := &geometry.Settings[i]; s.Report && !s.IsDefault(wall) {
+			w.KV(upperFirst(s.Label), s.Format(s.Get(wall), sys))
+		}
 	}
 	ops := wall.Openings()
 	if len(ops) == 0 {
@@ -558,4 +564,10 @@ func Number(x float64) string {
 	default:
 		return fmt.Sprintf("%.4g", x)
 	}
+}
+
+// upperFirst capitalises a setting's label for a report line.
+func upperFirst(s string) string {
+	r, n := utf8.DecodeRuneInString(s)
+	return string(unicode.ToUpper(r)) + s[n:]
 }

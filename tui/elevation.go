@@ -29,6 +29,7 @@ type elevation struct {
 	width, height int
 	mode          elevationMode
 	form          *form
+	formApply     func(formSubmitted) formResult // answers the open form's submissions
 
 	sel  int // selected opening of the active layout, -1 for none
 	step int // index into steps()
@@ -197,10 +198,11 @@ func (e *elevation) update(msg tea.Msg) (screen, tea.Cmd) {
 		case modeHelp:
 			return e, e.page.update(msg)
 		case modeForm:
-			done, cmd := e.form.update(msg)
+			ev, cmd := e.form.update(msg)
+			done, applied := e.formEvent(ev)
 			if done {
-				e.mode, e.form = modeNormal, nil
-				return e, tea.Batch(cmd, e.afterEdit())
+				e.mode, e.form, e.formApply = modeNormal, nil, nil
+				return e, tea.Batch(cmd, applied, e.afterEdit())
 			}
 			return e, cmd
 		case modeAsk:

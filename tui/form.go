@@ -1,6 +1,7 @@
 package tui
 
 import (
+	"strconv"
 	"strings"
 
 	"github.com/charmbracelet/bubbles/key"
@@ -10,9 +11,12 @@ import (
 )
 
 // form is a small dialog of text fields (bubbles textinput) used to type
-// exact values: an opening, the wall, a file name, a layout name. submit
-// gets the typed values; when it reports errors they are shown beside the
-// fields (or under them) and the form stays open.
+// exact values: an opening, the wall, a file name, a layout name. It is a
+// part of the screen that opened it: its update answers formSubmitted (the
+// typed values) or formCancelled, which the screen applies; errors the
+// screen finds go back to the form with showErrors, beside the fields (or
+// under them), and the form stays open. When the fields do not fit the
+// height, the form scrolls with the focus.
 type form struct {
 	title  string
 	fields []formField
@@ -20,9 +24,17 @@ type form struct {
 	err    string // an error that belongs to no single field
 	keys   formKeys
 	width  int
-
-	submit func(vals []string, changed []bool) formResult
 }
+
+// formSubmitted is the form's answer to enter: every field's value
+// (trimmed) and whether it differs from the value the form opened with.
+type formSubmitted struct {
+	vals    []string
+	changed []bool
+}
+
+// formCancelled is the form's answer to esc.
+type formCancelled struct{}
 
 type formField struct {
 	label string
@@ -61,8 +73,8 @@ func (k formKeys) FullHelp() [][]key.Binding { return [][]key.Binding{k.ShortHel
 // fieldSpec describes a field when a form is made.
 type fieldSpec struct{ label, value, hint string }
 
-func newForm(title string, specs []fieldSpec, submit func(vals []string, changed []bool) formResult) *form {
-	f := &form{title: title, keys: newFormKeys(), submit: submit}
+func newForm(title string, specs []fieldSpec) *form {
+	f := &form{title: title, keys: newFormKeys()}
 	for _, s := range specs {
 		in := textinput.New()
 		in.Prompt = ""
@@ -96,48 +108,59 @@ func (f *form) labelWidth() int {
 	return n
 }
 
+// window returns the fields shown in rows lines: all of them when they
+// fit, otherwise the first ones, scrolled just enough to show the focus.
+func (f *form) window(rows int) (first, last int) {
+	n := len(f.fields)
+	if rows >= n || rows < 1 {
+		return 0, n
+	}
+	first = max(0, min(f.focus-rows+1, n-rows))
+	return first, first + rows
+}
+
 func (f *form) inputWidth() int { return max(12, min(30, f.width/3)) }
 
-// update handles a message; done reports that the form closed (applied or
-// cancelled).
-func (f *form) update(msg tea.Msg) (done bool, cmd tea.Cmd) {
+// update handles a message; the event is formSubmitted, formCancelled or
+// nil.
+func (f *form) update(msg tea.Msg) (event tea.Msg, cmd tea.Cmd) {
 	if k, ok := msg.(tea.KeyMsg); ok {
 		switch {
 		case key.Matches(k, f.keys.Cancel):
-			return true, nil
+			return formCancelled{}, nil
 		case key.Matches(k, f.keys.Next):
 			f.setFocus((f.focus + 1) % len(f.fields))
-			return false, nil
+			return nil, nil
 		case key.Matches(k, f.keys.Prev):
 			f.setFocus((f.focus - 1 + len(f.fields)) % len(f.fields))
-			return false, nil
+			return nil, nil
 		case key.Matches(k, f.keys.Apply):
-			vals := make([]string, len(f.fields))
-			changed := make([]bool, len(f.fields))
+			s := formSubmitted{vals: make([]string, len(f.fields)), changed: make([]bool, len(f.fields))}
 			for i, fl := range f.fields {
-				vals[i] = strings.TrimSpace(fl.input.Value())
-				changed[i] = vals[i] != strings.TrimSpace(fl.first)
+				s.vals[i] = strings.TrimSpace(fl.input.Value())
+				s.changed[i] = s.vals[i] != strings.TrimSpace(fl.first)
 			}
-			r := f.submit(vals, changed)
-			for i := range f.fields {
-				f.fields[i].err = r.fields[i]
-			}
-			f.err = r.err
-			if r.ok() {
-				return true, r.cmd
-			}
-			for i := range f.fields {
-				if f.fields[i].err != "" {
-					f.setFocus(i)
-					break
-				}
-			}
-			return false, nil
+			return s, nil
 		}
 	}
 	var c tea.Cmd
 	f.fields[f.focus].input, c = f.fields[f.focus].input.Update(msg)
-	return false, c
+	return nil, c
+}
+
+// showErrors puts the screen's answer to a submission on the form and
+// moves the focus to the first field in error.
+func (f *form) showErrors(r formResult) {
+	for i := range f.fields {
+		f.fields[i].err = r.fields[i]
+	}
+	f.err = r.err
+	for i := range f.fields {
+		if f.fields[i].err != "" {
+			f.setFocus(i)
+			break
+		}
+	}
 }
 
 // view draws the form in w × h cells.
@@ -147,7 +170,19 @@ func (f *form) view(st *styles, w, h int) string {
 	b.WriteString("\n\n")
 	lw := f.labelWidth()
 	iw := f.inputWidth()
-	for i, fl := range f.fields {
+	rows := h - 4 // title, blank line, then a line for "more" and the help line
+	if f.err != "" {
+		rows -= 1 + len(f.err)/max(1, w)
+	}
+	first, last := f.window(rows)
+	if first > 0 {
+		b.Reset()
+		b.WriteString(st.heading.Render(f.title))
+		b.WriteString(st.dim.Render("  ↑ " + strconv.Itoa(first) + " more above"))
+		b.WriteString("\n\n")
+	}
+	for i := first; i < last; i++ {
+		fl := f.fields[i]
 		mark := "  "
 		label := padRight(fl.label, lw)
 		if i == f.focus {
@@ -175,6 +210,9 @@ func (f *form) view(st *styles, w, h int) string {
 		}
 		b.WriteString(line)
 		b.WriteString("\n")
+	}
+	if n := len(f.fields) - last; n > 0 {
+		b.WriteString(st.dim.Render("  ↓ " + strconv.Itoa(n) + " more below (tab)"))
 	}
 	b.WriteString("\n")
 	if f.err != "" {

@@ -350,6 +350,7 @@ type jsonWall struct {
 	Title              string     `json:"title"`
 	Layout             string     `json:"layout"`
 	Units              jsonUnits  `json:"units"`
+	Inputs             jsonInputs `json:"inputs"`
 	Error              string     `json:"error,omitempty"`
 	DeflectionRelative *float64   `json:"deflection_relative,omitempty"`
 	RigidityRelative   *float64   `json:"rigidity_relative,omitempty"`
@@ -362,6 +363,27 @@ type jsonWall struct {
 	Piers              []jsonPier `json:"piers"`
 	Warnings           []string   `json:"warnings"`
 	FE                 *jsonFE    `json:"fe,omitempty"`
+}
+
+// jsonInputs are the wall's settings keyed as in the wall file
+// ("material.strength"), one entry per geometry.Settings entry: text,
+// true/false, or a number, quantities in SI base units (m, N, Pa, N/m) to
+// 12 significant digits.
+type jsonInputs map[string]any
+
+func inputsJSON(w *geometry.Wall) jsonInputs {
+	in := jsonInputs{}
+	for i := range geometry.Settings {
+		s := &geometry.Settings[i]
+		switch v := s.JSONValue(w).(type) {
+		case nil:
+		case float64:
+			in[s.Key] = tidy(v)
+		default:
+			in[s.Key] = v
+		}
+	}
+	return in
 }
 
 type jsonUnits struct {
@@ -464,6 +486,7 @@ func toJSON(s *solved) jsonWall {
 	j := jsonWall{
 		File: s.arg, Title: w.Title, Layout: w.Layouts[w.Active].Name,
 		Units:    jsonUnits{Length: u.Coord, Force: u.Force, Deflection: u.Deflection, Rigidity: u.Rigidity, Moment: u.Moment},
+		Inputs:   inputsJSON(w),
 		Piers:    []jsonPier{},
 		Warnings: []string{},
 	}
