@@ -36,7 +36,7 @@ func Parse(filename string, data []byte) (*Wall, error) {
 		return nil, ErrorList{{File: filename, Msg: "not valid TOML: " + err.Error()}}
 	}
 	p := &fileParser{file: filename, lines: scanKeyLines(string(data)), bad: map[string]bool{}, md: &md, sc: sc}
-	if e := storeyFile(&md, p.lines); e != nil {
+	if e := storeyFile(data, p.lines); e != nil {
 		e.File = filename
 		return nil, ErrorList{e}
 	}
@@ -60,22 +60,14 @@ func Parse(filename string, data []byte) (*Wall, error) {
 	return w, nil
 }
 
-// storeyFile recognises a storey file (a [storey] table or [[wall]]
-// entries, and none of a wall's sizes) handed over as a wall file, and
-// returns one error that says so instead of a list of unknown and missing
-// keys.
-func storeyFile(md *toml.MetaData, lines keyLines) *Error {
-	st, wl := md.IsDefined("storey"), md.IsDefined("wall")
-	if !st && !wl {
+// storeyFile returns one error that says a storey file (IsStoreyFile) was
+// handed over as a wall file, instead of a list of unknown and missing keys.
+func storeyFile(src []byte, lines keyLines) *Error {
+	if !IsStoreyFile(src) {
 		return nil
 	}
-	for _, k := range []string{"length", "height", "opening"} {
-		if md.IsDefined(k) {
-			return nil // a wall file with a stray key: report it as such
-		}
-	}
 	key := "storey"
-	if !st {
+	if lines.find(key) == 0 {
 		key = "wall"
 	}
 	return &Error{Line: lines.find(key), Key: key,

@@ -7,6 +7,8 @@ import (
 	"reflect"
 	"strings"
 	"testing"
+
+	"github.com/BurntSushi/toml"
 )
 
 // FuzzParseLength: any text either reads as a finite length or gives a
@@ -111,6 +113,79 @@ func FuzzParse(f *testing.F) {
 		}
 		if !reflect.DeepEqual(normal(w), normal(back)) {
 			t.Fatalf("round trip changed the wall\n%+v\n%+v\n%s", w, back, out)
+		}
+	})
+}
+
+// FuzzScanTOML: the one line scanner behind the wall and storey files'
+// line numbers, MarshalKeeping and IsStoreyFile gives one entry per line
+// and, on any text the TOML decoder accepts, agrees with the decoder about
+// which keys exist: every top-level key and every key of a table opened by
+// a header has a line, and IsStoreyFile sees the top-level names the
+// decoder sees.
+func FuzzScanTOML(f *testing.F) {
+	for _, name := range wallFiles(f) {
+		data, err := os.ReadFile(name)
+		if err != nil {
+			f.Fatal(err)
+		}
+		f.Add(string(data))
+	}
+	for _, s := range []string{wallText, "a = \"\"\"\n[storey]\n\"\"\"\nb = [\n 1, # ]\n 2]\n[[wall]]\nfile = 'x'\n",
+		"[storey]\nshear = 1\n[[wall]]\nfile = \"a.toml\"\n", "\"quoted.key\" = 1\ndotted.key = 2\n[t . 'u']\nk = { a = 1 }\n",
+		"[[o]]\n[[o.p]]\nk = 2\n[[o]]\n[[o.p]]\nk = 3 # c\n", "x = '''\n'''\ny = \"\\\"#\" # c\n"} {
+		f.Add(s)
+	}
+	f.Fuzz(func(t *testing.T, src string) {
+		lines := ScanTOML(src)
+		raw := strings.Split(src, "\n")
+		if len(lines) != len(raw) {
+			t.Fatalf("%d lines scanned, %d in the text", len(lines), len(raw))
+		}
+		headers := map[string]bool{}
+		for i, l := range lines {
+			if l.Num != i+1 || l.Text != raw[i] {
+				t.Fatalf("line %d: %+v", i+1, l)
+			}
+			switch l.Kind {
+			case LineKey:
+				want := l.Table
+				for _, s := range l.Segs {
+					want = joinKey(want, s)
+				}
+				if len(l.Segs) == 0 || l.Path != want {
+					t.Fatalf("line %d: key %+v", i+1, l)
+				}
+			case LineTable, LineArray:
+				headers[stripIndices(l.Path)] = true
+			}
+		}
+		var m map[string]any
+		md, err := toml.Decode(src, &m)
+		if err != nil {
+			return
+		}
+		kl := KeyLines([]byte(src))
+		plain := map[string]bool{}
+		for k := range kl {
+			plain[stripIndices(k)] = true
+		}
+		for _, k := range md.Keys() {
+			parent := strings.Join(k[:len(k)-1], ".")
+			if len(k) > 1 && !headers[parent] {
+				continue // inside an inline table or below an implicit table
+			}
+			if !plain[strings.Join(k, ".")] && !strings.ContainsAny(strings.Join(k, ""), ".[]") {
+				t.Fatalf("key %q has no line\n%s", k, src)
+			}
+		}
+		_, st := m["storey"]
+		_, wl := m["wall"]
+		_, ln := m["length"]
+		_, ht := m["height"]
+		_, op := m["opening"]
+		if want := (st || wl) && !ln && !ht && !op; IsStoreyFile([]byte(src)) != want {
+			t.Fatalf("IsStoreyFile = %v, the decoder says %v\n%s", !want, want, src)
 		}
 	})
 }

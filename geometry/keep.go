@@ -60,24 +60,19 @@ func newBlock(id string) *textBlock {
 	return &textBlock{id: id, keyLine: map[int]string{}, vals: map[string]string{}}
 }
 
-// splitBlocks cuts a wall file (that parsed as w) into its tables and names
-// each one by what it holds: "material", an opening by its layout and name.
+// splitBlocks cuts a wall file (that parsed as w) into its tables
+// (ScanTOML) and names each one by what it holds: "material", an opening by
+// its layout and name. It fails on forms the merge does not follow: dotted
+// keys, values that may span lines or hold tables.
 func splitBlocks(text string, w *Wall) ([]*textBlock, bool) {
-	lines := strings.Split(strings.TrimSuffix(text, "\n"), "\n")
-	arrays := map[string]int{}
 	cur := newBlock("")
 	blocks := []*textBlock{cur}
-	for _, line := range lines {
-		t := strings.TrimSpace(line)
-		switch {
-		case t == "" || t[0] == '#':
-			cur.lines = append(cur.lines, line)
-		case t[0] == '[':
-			path, ok := headerPath(t, arrays)
-			if !ok {
-				return nil, false
-			}
-			id, ok := blockID(path, w)
+	for _, l := range ScanTOML(strings.TrimSuffix(text, "\n")) {
+		switch l.Kind {
+		case LineBlank:
+			cur.lines = append(cur.lines, l.Text)
+		case LineTable, LineArray:
+			id, ok := blockID(l.Path, w)
 			if !ok {
 				return nil, false
 			}
@@ -88,63 +83,24 @@ func splitBlocks(text string, w *Wall) ([]*textBlock, bool) {
 			}
 			nb.lines = append(nb.lines, cur.lines[k:]...)
 			cur.lines = cur.lines[:k]
-			nb.lines = append(nb.lines, line)
+			nb.lines = append(nb.lines, l.Text)
 			nb.headerEnd = len(nb.lines)
 			cur = nb
 			blocks = append(blocks, nb)
+		case LineKey:
+			if len(l.Segs) != 1 || l.Open || l.Value == "" || strings.ContainsAny(l.Value[:1], "[{") ||
+				strings.HasPrefix(l.Value, `"""`) || strings.HasPrefix(l.Value, "'''") {
+				return nil, false
+			}
+			cur.keyLine[len(cur.lines)] = l.Segs[0]
+			cur.vals[l.Segs[0]] = l.Value
+			cur.order = append(cur.order, l.Segs[0])
+			cur.lines = append(cur.lines, l.Text)
 		default:
-			eq := keyEnd(t)
-			if eq < 0 {
-				return nil, false
-			}
-			segs := splitKey(t[:eq])
-			if len(segs) != 1 {
-				return nil, false
-			}
-			v, _, ok := valueAndComment(t[eq+1:])
-			if !ok {
-				return nil, false
-			}
-			cur.keyLine[len(cur.lines)] = segs[0]
-			cur.vals[segs[0]] = v
-			cur.order = append(cur.order, segs[0])
-			cur.lines = append(cur.lines, line)
+			return nil, false
 		}
 	}
 	return blocks, true
-}
-
-// headerPath resolves a [table] or [[array]] header to a key path with
-// 1-based indices, as scanKeyLines does.
-func headerPath(t string, arrays map[string]int) (string, bool) {
-	resolve := func(segs []string) string {
-		path := ""
-		for _, s := range segs {
-			path = joinKey(path, s)
-			if n, ok := arrays[path]; ok {
-				path += "[" + strconv.Itoa(n) + "]"
-			}
-		}
-		return path
-	}
-	if strings.HasPrefix(t, "[[") {
-		end := strings.Index(t, "]]")
-		if end < 0 {
-			return "", false
-		}
-		segs := splitKey(t[2:end])
-		if len(segs) == 0 {
-			return "", false
-		}
-		name := joinKey(resolve(segs[:len(segs)-1]), segs[len(segs)-1])
-		arrays[name]++
-		return name + "[" + strconv.Itoa(arrays[name]) + "]", true
-	}
-	end := strings.IndexByte(t, ']')
-	if end < 0 {
-		return "", false
-	}
-	return resolve(splitKey(t[1:end])), true
 }
 
 // blockID names a table by its content so that the same opening is found

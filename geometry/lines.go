@@ -5,18 +5,43 @@ import (
 	"strings"
 )
 
-// keyLines maps the key paths of a TOML source ("length",
-// "material.strength", "opening[2]", "variant[1].opening[3].x"; tables of
-// an array counted from 1) to the line, counted from 1, where each is
-// written. The TOML library does not expose key positions, so this small
-// scanner reads the source a second time; it understands tables, arrays of
-// tables, dotted and quoted keys, and skips multi-line strings and arrays.
-// Keys inside inline tables are not mapped; find falls back to the line of
-// the enclosing key.
-type keyLines map[string]int
+// LineKind says what a line of a TOML source is.
+type LineKind int
 
-func scanKeyLines(src string) keyLines {
-	kl := keyLines{}
+const (
+	LineBlank LineKind = iota // empty, or only a comment
+	LineTable                 // a [table] header
+	LineArray                 // an [[array]] header: one more table of the array
+	LineKey                   // key = value
+	LineMore                  // inside a multi-line string or array begun above
+	LineOther                 // none of these (not TOML; the decoder says why)
+)
+
+// TOMLLine is one line of a TOML source as ScanTOML sees it.
+type TOMLLine struct {
+	Num  int    // counted from 1
+	Text string // as written, without the newline
+	Kind LineKind
+	// Path is, for a header, the table's key path and, for a key, the key's
+	// full path; tables of an array are counted from 1 in the order they
+	// appear ("variant[1].opening[2]", "material.strength").
+	Path    string
+	Table   string   // LineKey: the path of the table the key is in ("" at the top)
+	Segs    []string // LineKey: the parts of the key as written, unquoted
+	Value   string   // LineKey: the value without its comment, when it ends on this line
+	Comment string   // the comment at the end of the line (or the whole comment line), with its '#'
+	Open    bool     // LineKey: the value goes on over the next lines
+}
+
+// ScanTOML reads a TOML source line by line, quote-aware: tables, arrays of
+// tables, dotted and quoted keys, comments, and multi-line strings and
+// arrays (their lines are LineMore). The TOML library keeps no positions,
+// so the wall and storey parsers find lines for their messages here, and
+// MarshalKeeping finds the tables, keys and comments it keeps. It never
+// fails: lines it cannot read are LineOther, and keys inside inline
+// tables are not mapped.
+func ScanTOML(src string) []TOMLLine {
+	var out []TOMLLine
 	arrays := map[string]int{} // array-of-tables path → tables seen so far
 	prefix := ""
 	closer := "" // closing delimiter of a multi-line string being skipped
@@ -32,68 +57,118 @@ func scanKeyLines(src string) keyLines {
 		return path
 	}
 	for i, line := range strings.Split(src, "\n") {
-		n := i + 1
-		if closer != "" {
+		l := TOMLLine{Num: i + 1, Text: line, Kind: LineOther}
+		switch {
+		case closer != "":
+			l.Kind = LineMore
 			if k := strings.Index(line, closer); k >= 0 {
 				closer = ""
-				line = line[k+3:]
-			} else {
-				continue
 			}
-		}
-		if depth > 0 {
+		case depth > 0:
+			l.Kind = LineMore
 			depth, closer = bracketDepth(line, depth)
-			continue
-		}
-		t := strings.TrimSpace(line)
-		switch {
-		case t == "" || t[0] == '#':
-		case strings.HasPrefix(t, "[["):
-			end := strings.Index(t, "]]")
-			if end < 0 {
-				continue
-			}
-			segs := splitKey(t[2:end])
-			if len(segs) == 0 {
-				continue
-			}
-			name := joinKey(resolve(segs[:len(segs)-1]), segs[len(segs)-1])
-			arrays[name]++
-			prefix = name + "[" + strconv.Itoa(arrays[name]) + "]"
-			kl.set(prefix, n)
-		case t[0] == '[':
-			end := strings.IndexByte(t, ']')
-			if end < 0 {
-				continue
-			}
-			prefix = resolve(splitKey(t[1:end]))
-			kl.set(prefix, n)
 		default:
-			eq := keyEnd(t)
-			if eq < 0 {
-				continue
-			}
-			segs := splitKey(t[:eq])
-			if len(segs) == 0 {
-				continue
-			}
-			path := prefix
-			for _, s := range segs {
-				path = joinKey(path, s)
-				kl.set(path, n)
-			}
-			v := strings.TrimSpace(t[eq+1:])
-			for _, q := range []string{`"""`, "'''"} {
-				if strings.HasPrefix(v, q) && !strings.Contains(v[3:], q) {
-					closer = q
+			t := strings.TrimSpace(line)
+			switch {
+			case t == "" || t[0] == '#':
+				l.Kind, l.Comment = LineBlank, t
+			case strings.HasPrefix(t, "[["):
+				end := indexUnquoted(t[2:], "]")
+				if end < 0 || !strings.HasPrefix(t[2+end:], "]]") {
+					break
+				}
+				segs := splitKey(t[2 : 2+end])
+				if len(segs) == 0 {
+					break
+				}
+				name := joinKey(resolve(segs[:len(segs)-1]), segs[len(segs)-1])
+				arrays[name]++
+				prefix = name + "[" + strconv.Itoa(arrays[name]) + "]"
+				l.Kind, l.Path, l.Comment = LineArray, prefix, trailingComment(t[4+end:])
+			case t[0] == '[':
+				end := indexUnquoted(t[1:], "]")
+				if end < 0 {
+					break
+				}
+				prefix = resolve(splitKey(t[1 : 1+end]))
+				l.Kind, l.Path, l.Comment = LineTable, prefix, trailingComment(t[2+end:])
+			default:
+				eq := keyEnd(t)
+				if eq < 0 {
+					break
+				}
+				segs := splitKey(t[:eq])
+				if len(segs) == 0 {
+					break
+				}
+				l.Kind, l.Segs, l.Table = LineKey, segs, prefix
+				l.Path = prefix
+				for _, s := range segs {
+					l.Path = joinKey(l.Path, s)
+				}
+				v := strings.TrimSpace(t[eq+1:])
+				for _, q := range []string{`"""`, "'''"} {
+					if strings.HasPrefix(v, q) && !strings.Contains(v[3:], q) {
+						closer = q
+					}
+				}
+				if closer == "" && strings.HasPrefix(v, "[") {
+					depth, closer = bracketDepth(v, 0)
+				}
+				l.Open = closer != "" || depth > 0
+				if !l.Open {
+					l.Value, l.Comment = splitComment(v)
 				}
 			}
-			if closer == "" && strings.HasPrefix(v, "[") {
-				depth, closer = bracketDepth(v, 0)
+		}
+		out = append(out, l)
+	}
+	return out
+}
+
+// trailingComment returns the comment after a header, or "".
+func trailingComment(rest string) string {
+	if i := strings.IndexByte(rest, '#'); i >= 0 {
+		return strings.TrimSpace(rest[i:])
+	}
+	return ""
+}
+
+// splitComment splits a one-line value from its comment.
+func splitComment(v string) (value, comment string) {
+	if i := indexUnquoted(v, "#"); i >= 0 {
+		return strings.TrimSpace(v[:i]), v[i:]
+	}
+	return v, ""
+}
+
+// keyLines maps the key paths of a TOML source ("length",
+// "material.strength", "opening[2]", "variant[1].opening[3].x"; tables of
+// an array counted from 1) to the line, counted from 1, where each is
+// written (ScanTOML). Dotted keys map each of their parts.
+type keyLines map[string]int
+
+func scanKeyLines(src string) keyLines {
+	kl := keyLines{}
+	for _, l := range ScanTOML(src) {
+		switch l.Kind {
+		case LineTable, LineArray:
+			kl.set(l.Path, l.Num)
+		case LineKey:
+			path := l.Table
+			for _, s := range l.Segs {
+				path = joinKey(path, s)
+				kl.set(path, l.Num)
 			}
 		}
 	}
 	return kl
+}
+
+// KeyLines maps every key path of a TOML source (as TOMLLine.Path names
+// them) to its line, counted from 1: the first line when a path repeats.
+func KeyLines(src []byte) map[string]int {
+	return scanKeyLines(string(src))
 }
 
 func (kl keyLines) set(path string, line int) {
@@ -251,4 +326,36 @@ func OpeningKey(w *Wall, name string) string {
 // is there.
 func KeyLine(src []byte, key string) int {
 	return scanKeyLines(string(src)).find(key)
+}
+
+// IsStoreyFile reports whether a TOML source is a storey file rather than a
+// wall file: it has a [storey] table or [[wall]] entries, and none of a
+// wall's length, height or [[opening]] tables. It reads the lines only
+// (ScanTOML), so a storey file with a TOML error is still recognised and its
+// errors reported as a storey file's.
+func IsStoreyFile(src []byte) bool {
+	storey, wall := false, false
+	for _, l := range ScanTOML(string(src)) {
+		var top string
+		switch {
+		case l.Kind == LineTable || l.Kind == LineArray:
+			top = l.Path
+			if i := strings.IndexAny(top, ".["); i >= 0 {
+				top = top[:i]
+			}
+		case l.Kind == LineKey && l.Table == "":
+			top = l.Segs[0]
+		default:
+			continue
+		}
+		switch top {
+		case "storey":
+			storey = true
+		case "wall":
+			wall = true
+		case "length", "height", "opening":
+			return false
+		}
+	}
+	return storey || wall
 }
