@@ -16,9 +16,9 @@ func (p Parts) Total() float64 { return p.Bending + p.Shear }
 type Moduli struct {
 	E      geometry.Stress // E_m or E_c
 	Ev     geometry.Stress // shear modulus E_v (G)
-	Source string          // e.g. "E_m = 900 f'm (TMS 402 §1.8.2.2)"
+	Source string          // both sources, "ESource; EvSource", for one-line displays
 
-	ESource  string // where E came from
+	ESource  string // where E came from, e.g. "E_m = 900 f'm (TMS 402 §1.8.2.2)"
 	EvSource string // where E_v came from
 }
 

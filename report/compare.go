@@ -46,7 +46,7 @@ func CompareReport(out io.Writer, c *study.Comparison, info CompareInfo) error {
 		w.KV("Date", info.Now.UTC().Format("2006-01-02 15:04 UTC"))
 	}
 	if info.Version != "" {
-		w.KV("Program", "pierwise "+info.Version)
+		w.KV("Program", Program(info.Version))
 	}
 	w.KV("Units", unitsLine(sys))
 	w.KV("Method", "classic method, relative values with E = 1 and t = 1")

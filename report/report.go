@@ -52,7 +52,7 @@ func Wall(out io.Writer, in Input) error {
 	w.KV("File", orDefault(filePart(in.Path), "(built-in demo wall)"))
 	w.KV("Layout", layoutLine(wall))
 	w.KV("Date", in.Now.Format("2006-01-02 15:04 MST"))
-	w.KV("Program", "pierwise "+in.Version)
+	w.KV("Program", Program(in.Version))
 	w.KV("Units", unitsLine(wall.Units))
 	w.KV("Method", "classic strip method (solid wall − strips with openings + piers)")
 	if in.Drawing != "" {
@@ -124,9 +124,8 @@ func inputs(w *Text, wall *geometry.Wall, res *pier.Result) {
 	w.KV("Material", materialLine(wall.Material, sys))
 	if res != nil && res.Moduli.E > 0 {
 		w.KV("E", fmt.Sprintf("%s; E_v = %s", geometry.FormatStress(res.Moduli.E, sys), geometry.FormatStress(res.Moduli.Ev, sys)))
-		for _, src := range strings.Split(res.Moduli.Source, "; ") {
-			w.KV("", src)
-		}
+		w.KV("", res.Moduli.ESource)
+		w.KV("", res.Moduli.EvSource)
 	}
 	w.KV("Stiffness", fmt.Sprintf("flexure × %.2f, shear × %.2f (1.00 = gross section)", orOne(wall.Stiffness.Flexure), orOne(wall.Stiffness.Shear)))
 	if wall.Load.Shear > 0 {
@@ -179,9 +178,9 @@ func steps(w *Text, res *pier.Result, wall *geometry.Wall) {
 		}
 		switch s.Kind {
 		case pier.StepSolid:
-			rows = append(rows, row{indent + fmt.Sprintf("%s as solid, %s, %s", where, dim(s.Rect), supportShort(s.Support)), "+", s.Deflection})
+			rows = append(rows, row{indent + fmt.Sprintf("%s as solid, %s, %s", where, dim(s.Rect), s.Support.String()), "+", s.Deflection})
 		case pier.StepStrip:
-			rows = append(rows, row{indent + fmt.Sprintf("strip %s…%s, %s, %s", yText(s.Rect.Y0, wall), yText(s.Rect.Y1, wall), dim(s.Rect), supportShort(s.Support)), "−", s.Deflection})
+			rows = append(rows, row{indent + fmt.Sprintf("strip %s…%s, %s, %s", yText(s.Rect.Y0, wall), yText(s.Rect.Y1, wall), dim(s.Rect), s.Support.String()), "−", s.Deflection})
 		case pier.StepPiers:
 			rows = append(rows, row{indent + fmt.Sprintf("piers %s in parallel: 1/Σ(1/Δ)", pierList(s.Piers)), "+", s.Deflection})
 		}
@@ -236,7 +235,7 @@ func pierTable(w *Text, res *pier.Result, wall *geometry.Wall) {
 			rel, cut = "-", true
 		}
 		nested = nested || (!p.Leaf && !p.Cut)
-		t.Add(name(p), L(p.H()), L(p.L()), fmt.Sprintf("%.2f", p.Ratio()), supportShort(p.Support), rel)
+		t.Add(name(p), L(p.H()), L(p.L()), fmt.Sprintf("%.2f", p.Ratio()), p.Support.String(), rel)
 		row := []string{name(p), fmt.Sprintf("%.1f %%", 100*p.Share), split}
 		if res.HasLoad && !p.Cut {
 			row = append(row, fixed2(u.ForceOf(p.Shear)), fixed2(u.MomentOf(p.Moment)), fixed2(u.ForceOf(p.Loads.Lateral.Middle.Axial)))
@@ -450,13 +449,6 @@ func supportLong(s geometry.Support) string {
 		return "fixed-fixed (base fixed, top kept from rotating)"
 	}
 	return "cantilever (base fixed, top free)"
-}
-
-func supportShort(s geometry.Support) string {
-	if s == geometry.Fixed {
-		return "fixed"
-	}
-	return "cantilever"
 }
 
 func materialLine(m geometry.Material, sys geometry.System) string {

@@ -2,6 +2,7 @@ package report
 
 import (
 	"fmt"
+	"strconv"
 
 	"pierwise/geometry"
 )
@@ -65,3 +66,19 @@ func (u Units) MomentOf(m float64) float64 { return m / u.moment }
 
 // CoordOf converts a coordinate or size in metres to the base unit (ft or m).
 func (u Units) CoordOf(x float64) float64 { return x / float64(u.coord) }
+
+// Tidy rounds a number for JSON to 12 significant digits, so that 10 ft
+// read as metres and converted back prints as 10, not 10.000000000000002.
+func Tidy(x float64) float64 {
+	y, _ := strconv.ParseFloat(strconv.FormatFloat(x, 'g', 12, 64), 64)
+	return y
+}
+
+// Program names the program in a report's title block: "pierwise 0.1.0",
+// or "pierwise" when the version is not known.
+func Program(version string) string {
+	if version == "" {
+		return "pierwise"
+	}
+	return "pierwise " + version
+}

@@ -161,8 +161,15 @@ func (s *compareScreen) update(msg tea.Msg) (screen, tea.Cmd) {
 	case resumeMsg:
 		return s, s.recompute()
 	case compareFEMsg:
-		if msg.id == s.feID && msg.err == nil {
-			s.cmp, s.feRunning = msg.cmp, false
+		if msg.id != s.feID {
+			break // a stale answer
+		}
+		s.feRunning = false
+		if msg.err != nil {
+			// The classic comparison stays; say why the FE columns are missing.
+			s.msg, s.msgBad = "finite-element check failed: "+msg.err.Error(), true
+		} else {
+			s.cmp = msg.cmp
 		}
 	case snapshotDoneMsg:
 		if msg.err != nil {
@@ -210,10 +217,10 @@ func (s *compareScreen) update(msg tea.Msg) (screen, tea.Cmd) {
 			if s.cmp == nil {
 				return s, nil
 			}
-			c, path, now := s.cmp, s.c.doc.path, s.c.now()
+			c, path, now, version := s.cmp, s.c.doc.path, s.c.now(), s.c.version
 			return s, func() tea.Msg {
 				out, err := writeSnapshot(path, "compare", now, func(f io.Writer) error {
-					return report.CompareReport(f, c, report.CompareInfo{Now: now, Version: ProgramVersion})
+					return report.CompareReport(f, c, report.CompareInfo{Now: now, Version: version})
 				})
 				return snapshotDoneMsg{out, err}
 			}

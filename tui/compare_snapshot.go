@@ -13,9 +13,6 @@ import (
 	"pierwise/geometry"
 )
 
-// ProgramVersion is the version printed in snapshots; cmd/pierwise sets it.
-var ProgramVersion string
-
 // snapshotPath names a new snapshot file beside the wall file: the wall
 // file's name without its extension, the kind ("compare", "sweep-W1") and
 // the time to the second, e.g. annex-compare-20261201-225012.txt. A wall

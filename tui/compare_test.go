@@ -1,6 +1,7 @@
 package tui
 
 import (
+	"errors"
 	"fmt"
 	"os"
 	"path/filepath"
@@ -19,7 +20,7 @@ import (
 // cmpCommon is the shared state of a screen test: the demo wall (layouts
 // "main" and "wide entrance") as if read from path, and a fixed clock.
 func cmpCommon(path string) *common {
-	c := newCommon(newDocument(demo.Wall(), path, true), nil)
+	c := newCommon(newDocument(demo.Wall(), path), nil)
 	c.now = func() time.Time { return time.Date(2026, 12, 1, 23, 30, 5, 0, time.UTC) }
 	return c
 }
@@ -182,7 +183,7 @@ func TestCompareScreenSnapshot(t *testing.T) {
 func TestCompareScreenOneLayout(t *testing.T) {
 	w := demo.Wall()
 	w.Layouts = w.Layouts[:1]
-	c := newCommon(newDocument(w, "", false), nil)
+	c := newCommon(newDocument(w, ""), nil)
 	s := newCompareScreen(c)
 	s.setSize(80, 24)
 	v := ansi.Strip(s.view())
@@ -221,7 +222,7 @@ func cmpDrain(m *root, cmd tea.Cmd) {
 func TestCompareOpensFromElevation(t *testing.T) {
 	w := demo.Wall()
 	w.Active = 1
-	m := newModel(w, Options{Path: "annex.toml", OnDisk: true})
+	m := newModel(w, Options{Path: "annex.toml"})
 	m.Update(tea.WindowSizeMsg{Width: 80, Height: 24})
 	_, cmd := m.Update(cmpKey("C"))
 	cmpDrain(m, cmd)
@@ -266,5 +267,25 @@ func TestCompareScreenFE(t *testing.T) {
 	s.update(cmpKey("f"))
 	if v := ansi.Strip(s.view()); strings.Contains(v, "FE relative rigidity") {
 		t.Error("FE rows with the check off")
+	}
+}
+
+// An FE check that fails ends "running..." and says why; the classic
+// comparison stays on screen, and a stale failure changes nothing.
+func TestCompareScreenFEError(t *testing.T) {
+	c := newCommon(newDocument(demo.Wall(), ""), nil)
+	s := newCompareScreen(c)
+	s.setSize(100, 30)
+	if !s.feRunning || !strings.Contains(ansi.Strip(s.view()), "running") {
+		t.Fatal("the FE check is not running at the start")
+	}
+	s.update(compareFEMsg{id: s.feID - 1, err: errors.New("stale")})
+	if !s.feRunning {
+		t.Error("a stale answer stopped the check")
+	}
+	s.update(compareFEMsg{id: s.feID, err: errors.New("out of memory")})
+	v := ansi.Strip(s.view())
+	if s.feRunning || strings.Contains(v, "running") || !strings.Contains(v, "out of memory") || s.cmp == nil {
+		t.Errorf("after the FE error:\n%s", v)
 	}
 }

@@ -45,10 +45,9 @@ type snapshot struct {
 	version int
 }
 
-func newDocument(w *geometry.Wall, path string, onDisk bool) *document {
-	// A wall opened from its file, and the demo, start clean: quitting
-	// without a change asks nothing.
-	_ = onDisk
+// newDocument starts the history of w. A wall opened from its file, and the
+// demo, start clean: quitting without a change asks nothing.
+func newDocument(w *geometry.Wall, path string) *document {
 	return &document{wall: w, path: path, next: 1}
 }
 

@@ -470,21 +470,7 @@ func newOpening(w *geometry.Wall, door bool) geometry.Opening {
 }
 
 // nextName is the first unused D<n> or W<n> of the active layout.
-func nextName(w *geometry.Wall, door bool) string {
-	p := "W"
-	if door {
-		p = "D"
-	}
-	used := map[string]bool{}
-	for _, o := range w.Openings() {
-		used[o.Name] = true
-	}
-	for i := 1; ; i++ {
-		if n := p + strconv.Itoa(i); !used[n] {
-			return n
-		}
-	}
-}
+func nextName(w *geometry.Wall, door bool) string { return w.NextOpeningName(w.Active, door) }
 
 func (e *elevation) add(door bool) {
 	w := e.wall()
@@ -614,12 +600,12 @@ func (e *elevation) deleteLayout() {
 // background.
 func (e *elevation) snapshot() tea.Cmd {
 	d := e.c.doc
-	in := report.Input{Path: d.path, Wall: d.wall, Result: e.res, Err: e.solveErr, Now: e.c.now(), Version: ProgramVersion}
+	in := report.Input{Path: d.path, Wall: d.wall, Result: e.res, Err: e.solveErr, Now: e.c.now(), Version: e.c.version}
 	if e.fe.on && !e.fe.running && !e.fe.stale() {
 		in.FE, in.FEErr = e.fe.res, e.fe.err
 	}
 	draw := drawing.WallInput{Path: d.path, Wall: d.wall, Basis: "classic strip method", Piers: drawing.LeafPiers(e.res),
-		Now: in.Now, Version: ProgramVersion}
+		Now: in.Now, Version: e.c.version}
 	if e.res != nil {
 		draw.HasLoad, draw.Warnings = e.res.HasLoad, pier.Texts(e.res.Warnings)
 	} else if e.solveErr != nil {

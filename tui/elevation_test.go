@@ -43,7 +43,7 @@ type editor struct {
 
 func newEditor(t *testing.T, w *geometry.Wall, path string, width, height int) *editor {
 	t.Helper()
-	m := newModel(w, Options{Path: path, OnDisk: path != ""})
+	m := newModel(w, Options{Path: path})
 	m.c.now = func() time.Time { return time.Date(2026, 12, 1, 12, 0, 0, 0, time.UTC) }
 	m.Update(tea.WindowSizeMsg{Width: width, Height: height})
 	return &editor{t: t, m: m}

@@ -439,10 +439,7 @@ func (e *elevation) tableView(l elevLayout) string {
 		if len(piers) == len(r.Piers) {
 			name = strings.Repeat(" ", strings.Count(p.Name, ".")) + name
 		}
-		sup := "cantilever"
-		if p.Support == geometry.Fixed {
-			sup = "fixed"
-		}
+		sup := p.Support.String()
 		v, m, split := "", "", ""
 		if p.Leaf {
 			if r.HasLoad {

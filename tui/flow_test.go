@@ -43,7 +43,7 @@ func TestFlowMoveUndoSave(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	tm := teatest.NewTestModel(t, newModel(w, Options{Path: path, OnDisk: true}), teatest.WithInitialTermSize(160, 48))
+	tm := teatest.NewTestModel(t, newModel(w, Options{Path: path}), teatest.WithInitialTermSize(160, 48))
 	waitText(t, tm, `D1 door: x 4'-0"`) // WaitFor consumes output: one wait per frame
 
 	tm.Send(tea.KeyMsg{Type: tea.KeyRight})
@@ -104,7 +104,7 @@ func TestFlowQuitAsks(t *testing.T) {
 	path := copyWall(t, "door.toml")
 	before, _ := os.ReadFile(path)
 	w, _, _, _ := openFile(path)
-	tm := teatest.NewTestModel(t, newModel(w, Options{Path: path, OnDisk: true}), teatest.WithInitialTermSize(80, 24))
+	tm := teatest.NewTestModel(t, newModel(w, Options{Path: path}), teatest.WithInitialTermSize(80, 24))
 	waitText(t, tm, "Results")
 	tm.Type("w")
 	waitText(t, tm, "added window W1")

@@ -27,7 +27,7 @@ func openEditor(t *testing.T, w *geometry.Wall) (*editor, string) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	m := newModel(w2, Options{Path: path, OnDisk: true, Content: data})
+	m := newModel(w2, Options{Path: path, Content: data})
 	m.Update(tea.WindowSizeMsg{Width: 100, Height: 30})
 	return &editor{t: t, m: m}, path
 }
@@ -136,7 +136,7 @@ func TestCommentsLostAsks(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	ed.m = newModel(w, Options{Path: path, OnDisk: true, Content: data2})
+	ed.m = newModel(w, Options{Path: path, Content: data2})
 	ed.m.Update(tea.WindowSizeMsg{Width: 100, Height: 30})
 	ed.do(runes("l"), runes("s"))
 	if e := ed.elev(); e.mode != modeAsk || e.ask.ask != askComments {

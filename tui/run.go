@@ -13,9 +13,9 @@ import (
 // Options say what the editor opens.
 type Options struct {
 	Path    string // the wall's file; "" for a wall without one (the demo)
-	OnDisk  bool   // the wall is what the file holds (not modified yet)
 	Message string // shown in the status line at the start
 	Content []byte // the file's bytes as read, to notice a change by another program before saving
+	Version string // the program's version, printed in the reports it writes
 
 	Program []tea.ProgramOption // extra bubbletea options (tests: input, output)
 }
@@ -51,12 +51,13 @@ func crashed(err error, d *document) error {
 
 // newModel builds the root model with the elevation screen on w.
 func newModel(w *geometry.Wall, opt Options) *root {
-	d := newDocument(w, opt.Path, opt.OnDisk)
+	d := newDocument(w, opt.Path)
 	if opt.Content != nil {
 		sum := geometry.SumOf(opt.Content)
 		d.sum = &sum
 	}
 	c := newCommon(d, nil)
+	c.version = opt.Version
 	e := newElevation(c)
 	if opt.Message != "" {
 		e.say("%s", opt.Message)
@@ -65,8 +66,9 @@ func newModel(w *geometry.Wall, opt Options) *root {
 }
 
 // EditFile opens the wall file at path in the editor; a missing file is
-// created first with NewWall.
-func EditFile(path string, opts ...tea.ProgramOption) error {
+// created first with NewWall. opt.Path, opt.Message and opt.Content are set
+// here.
+func EditFile(path string, opt Options) error {
 	w, data, msg, err := openFile(path)
 	if err != nil {
 		return err
@@ -74,7 +76,8 @@ func EditFile(path string, opts ...tea.ProgramOption) error {
 	if n := recoveryNotice(path); n != "" {
 		msg = n
 	}
-	return Edit(w, Options{Path: path, OnDisk: true, Message: msg, Content: data, Program: opts})
+	opt.Path, opt.Message, opt.Content = path, msg, data
+	return Edit(w, opt)
 }
 
 // openFile reads the wall at path (geometry.ReadUserFile: a regular file of

@@ -65,6 +65,7 @@ type common struct {
 	doc           *document
 	now           func() time.Time // the clock; fixed in tests
 	fe            *feGate          // the one finite-element check in flight
+	version       string           // the program's version, for reports
 
 	// tick is tea.Tick; tests that run commands replace it so that a timer
 	// (the FE check's delay) is never mistaken for work, however slow the

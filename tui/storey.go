@@ -20,12 +20,14 @@ import (
 // the walls with their rigidities and design shears, and any wall in the
 // elevation editor (enter). Edits to a wall update the storey numbers when
 // its editor is closed (esc or q).
-func EditStorey(path string, opts ...tea.ProgramOption) error {
+// opt.Version and opt.Program are used.
+func EditStorey(path string, opt Options) error {
 	m, err := newStoreyModel(path)
 	if err != nil {
 		return err
 	}
-	all := append([]tea.ProgramOption{tea.WithAltScreen()}, opts...)
+	m.c.version = opt.Version
+	all := append([]tea.ProgramOption{tea.WithAltScreen()}, opt.Program...)
 	_, err = tea.NewProgram(m, all...).Run()
 	return err
 }
@@ -120,7 +122,7 @@ func newStoreyScreen(c *common, st *storey.Storey, walls []*geometry.Wall) *stor
 	s := &storeyScreen{c: c, keys: newStoreyKeys(c), help: help.New(), st: st}
 	s.help.ShortSeparator = "  "
 	for i, w := range walls {
-		s.docs = append(s.docs, newDocument(w, st.Walls[i].Path, true))
+		s.docs = append(s.docs, newDocument(w, st.Walls[i].Path))
 	}
 	s.analyse()
 	return s

@@ -17,7 +17,7 @@ func TestMonochromeReads(t *testing.T) {
 	view := func(p termenv.Profile) string {
 		r := lipgloss.NewRenderer(io.Discard)
 		r.SetColorProfile(p)
-		c := newCommon(newDocument(annex(), "", false), r)
+		c := newCommon(newDocument(annex(), ""), r)
 		e := newElevation(c)
 		e.setSize(160, 48)
 		return e.view()

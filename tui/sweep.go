@@ -243,10 +243,10 @@ func (s *sweepScreen) snapshot() tea.Cmd {
 		return nil
 	}
 	w, pts, path, now := s.wall(), s.pts, s.c.doc.path, s.c.now()
-	name, axis, step := s.openingName(), s.axis, s.stepLength()
+	name, axis, step, version := s.openingName(), s.axis, s.stepLength(), s.c.version
 	return func() tea.Msg {
 		out, err := writeSnapshot(path, "sweep-"+name+"-"+axis.String(), now, func(f io.Writer) error {
-			if _, err := fmt.Fprintf(f, "pierwise %s, %s\n\n", ProgramVersion, now.UTC().Format("2006-01-02 15:04 UTC")); err != nil {
+			if _, err := fmt.Fprintf(f, "%s, %s\n\n", report.Program(version), now.UTC().Format("2006-01-02 15:04 UTC")); err != nil {
 				return err
 			}
 			return report.SweepTable(f, w, name, axis, step, pts)

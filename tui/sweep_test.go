@@ -134,7 +134,7 @@ func TestSweepScreenSnapshot(t *testing.T) {
 }
 
 func TestSweepOpensFromElevation(t *testing.T) {
-	m := newModel(demo.Wall(), Options{Path: "annex.toml", OnDisk: true})
+	m := newModel(demo.Wall(), Options{Path: "annex.toml"})
 	m.Update(tea.WindowSizeMsg{Width: 80, Height: 24})
 	_, cmd := m.Update(cmpKey("G"))
 	cmpDrain(m, cmd)
@@ -187,7 +187,7 @@ func TestSweepScreenMarksWeakPositions(t *testing.T) {
 }
 
 func sweepWeakCase(t *testing.T, w *geometry.Wall, width, height int) {
-	c := newCommon(newDocument(w, "classroom.toml", true), nil)
+	c := newCommon(newDocument(w, "classroom.toml"), nil)
 	s := newSweepScreen(c)
 	s.setSize(width, height)
 	s.opening, s.axis, s.step = 1, study.AlongY, 2 // W2 up and down by 8 in

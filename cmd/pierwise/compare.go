@@ -14,11 +14,9 @@ import (
 	"pierwise/pier"
 	"pierwise/report"
 	"pierwise/study"
-	"pierwise/tui"
 )
 
 func init() {
-	tui.ProgramVersion = version // for the editor's comparison and sweep snapshots
 	register(command{
 		name:  "compare",
 		args:  "FILE[:LAYOUT] FILE[:LAYOUT]... [-o OUT] [--fe] [--mesh SIZE] [--element q4|qm6]",

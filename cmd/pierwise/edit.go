@@ -16,7 +16,7 @@ func init() {
 		run:   runEdit,
 	})
 	defaultCommand = func(e *env) error {
-		return tui.Edit(demo.Wall(), tui.Options{Message: "demo wall: s saves it to a file of your choice, ? shows every key"})
+		return tui.Edit(demo.Wall(), tui.Options{Message: "demo wall: s saves it to a file of your choice, ? shows every key", Version: version})
 	}
 }
 
@@ -30,7 +30,7 @@ func runEdit(e *env, args []string) error {
 		return usagef("edit needs exactly one file")
 	}
 	if data, err := geometry.ReadUserFile(pos[0]); err == nil && storey.IsStoreyFile(data) {
-		return tui.EditStorey(pos[0])
+		return tui.EditStorey(pos[0], tui.Options{Version: version})
 	}
-	return tui.EditFile(pos[0])
+	return tui.EditFile(pos[0], tui.Options{Version: version})
 }

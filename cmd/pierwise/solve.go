@@ -7,7 +7,6 @@ import (
 	"fmt"
 	"io"
 	"slices"
-	"strconv"
 	"strings"
 
 	"pierwise/demo"
@@ -297,7 +296,7 @@ func pierRows(t *report.Text, r *pier.Result, w *geometry.Wall) {
 		case !p.Leaf:
 			name += "*"
 		}
-		row := []string{name, L(p.H()), L(p.L()), fmt.Sprintf("%.2f", p.Ratio()), supportWord(p.Support), rel, fmt.Sprintf("%.1f%%", 100*p.Share)}
+		row := []string{name, L(p.H()), L(p.L()), fmt.Sprintf("%.2f", p.Ratio()), p.Support.String(), rel, fmt.Sprintf("%.1f%%", 100*p.Share)}
 		if r.HasLoad && !p.Cut {
 			row = append(row, fmt.Sprintf("%.2f", u.ForceOf(p.Shear)), fmt.Sprintf("%.2f", u.MomentOf(p.Moment)), fmt.Sprintf("%.2f", u.ForceOf(p.Loads.Lateral.Middle.Axial)))
 		} else if r.HasLoad {
@@ -378,7 +377,7 @@ func inputsJSON(w *geometry.Wall) jsonInputs {
 		switch v := s.JSONValue(w).(type) {
 		case nil:
 		case float64:
-			in[s.Key] = tidy(v)
+			in[s.Key] = report.Tidy(v)
 		default:
 			in[s.Key] = v
 		}
@@ -474,12 +473,6 @@ type jsonFEShare struct {
 
 func ptr(x float64) *float64 { return &x }
 
-// tidy rounds a coordinate to 12 significant digits, so that 10 ft read as
-// metres and converted back prints as 10, not 10.000000000000002.
-func tidy(x float64) float64 {
-	y, _ := strconv.ParseFloat(strconv.FormatFloat(x, 'g', 12, 64), 64)
-	return y
-}
 
 func toJSON(s *solved) jsonWall {
 	w, u := s.wall, report.UnitsFor(s.wall.Units)
@@ -514,8 +507,8 @@ func toJSON(s *solved) jsonWall {
 		for _, p := range r.Piers {
 			jp := jsonPier{
 				Name: p.Name, Parent: p.Parent,
-				X0: tidy(u.CoordOf(p.Rect.X0)), X1: tidy(u.CoordOf(p.Rect.X1)), Y0: tidy(u.CoordOf(p.Rect.Y0)), Y1: tidy(u.CoordOf(p.Rect.Y1)),
-				H: tidy(u.CoordOf(p.H())), L: tidy(u.CoordOf(p.L())), Support: supportWord(p.Support),
+				X0: report.Tidy(u.CoordOf(p.Rect.X0)), X1: report.Tidy(u.CoordOf(p.Rect.X1)), Y0: report.Tidy(u.CoordOf(p.Rect.Y0)), Y1: report.Tidy(u.CoordOf(p.Rect.Y1)),
+				H: report.Tidy(u.CoordOf(p.H())), L: report.Tidy(u.CoordOf(p.L())), Support: p.Support.String(),
 				RigidityRelative: p.Rigidity, Share: p.Share, Leaf: p.Leaf, Cut: p.Cut,
 			}
 			if d := p.Parts.Total(); d > 0 {
@@ -537,7 +530,7 @@ func toJSON(s *solved) jsonWall {
 			f.Error = s.feErr.Error()
 		} else {
 			f.DeflectionRelative, f.RigidityRelative = s.fe.Deflection, s.fe.Rigidity
-			f.Mesh, f.Element, f.Elements, f.DOFs = tidy(u.CoordOf(float64(s.fe.Mesh))), s.fe.Element, s.fe.Elements, s.fe.DOFs
+			f.Mesh, f.Element, f.Elements, f.DOFs = report.Tidy(u.CoordOf(float64(s.fe.Mesh))), s.fe.Element, s.fe.Elements, s.fe.DOFs
 			if s.res != nil {
 				f.Difference = ptr(s.fe.Difference)
 			}
@@ -555,13 +548,6 @@ func toJSON(s *solved) jsonWall {
 		j.FE = f
 	}
 	return j
-}
-
-func supportWord(s geometry.Support) string {
-	if s == geometry.Fixed {
-		return "fixed"
-	}
-	return "cantilever"
 }
 
 // writeSolveJSON prints one object for one wall and an array for several.

@@ -55,7 +55,7 @@ func runStorey(e *env, args []string) error {
 		if *basis != "" || *diaphragm != "" {
 			return usagef("storey: --edit takes the basis and the diaphragm from the storey file")
 		}
-		return tui.EditStorey(files[0])
+		return tui.EditStorey(files[0], tui.Options{Version: version})
 	}
 	s, walls, err := storey.LoadFiles(files[0])
 	if err != nil {
