@@ -473,7 +473,6 @@ type jsonFEShare struct {
 
 func ptr(x float64) *float64 { return &x }
 
-
 func toJSON(s *solved) jsonWall {
 	w, u := s.wall, report.UnitsFor(s.wall.Units)
 	j := jsonWall{
