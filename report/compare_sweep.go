@@ -40,9 +40,7 @@ func SweepTable(out io.Writer, w *geometry.Wall, name string, axis study.Axis, s
 	if w.Units == geometry.SI {
 		head[0], head[1] = "x ("+u.Coord+")", "sill ("+u.Coord+")"
 	}
-	for _, n := range names {
-		head = append(head, n)
-	}
+	head = append(head, names...)
 	stressHead := "max share/L (1/" + u.Coord + ")"
 	if w.Load.Shear > 0 && w.Thickness > 0 {
 		stressHead = "max stress (" + u.Stress + ")"

@@ -102,3 +102,30 @@ func annexFile(t *testing.T) string {
 	}
 	return string(out)
 }
+
+// The wall form at 80×24 scrolls: shift+tab from the first field wraps to
+// the last, which shows with the fields above it counted; tab wraps back.
+// Backspace and the arrows edit the focused field.
+func TestWallFormScrolls(t *testing.T) {
+	ed := newEditor(t, annex(), "", 80, 24)
+	ed.press(runes("E"))
+	n := len(wallFormSettings())
+	if v := ed.view(); !strings.Contains(v, "more below") || strings.Contains(v, "more above") {
+		t.Fatalf("the form's first page:\n%s", v)
+	}
+	ed.press(keyShiftTab)
+	f := ed.elev().form
+	last := f.fields[n-1].label
+	if v := ed.view(); f.focus != n-1 || !strings.Contains(v, "> "+last) || !strings.Contains(v, "more above") || strings.Contains(v, "more below") {
+		t.Fatalf("shift+tab did not scroll to %q:\n%s", last, v)
+	}
+	checkSize(t, ed.view(), 80, 24)
+	ed.press(keyTab)
+	if f.focus != 0 || strings.Contains(ed.view(), "more above") {
+		t.Fatalf("tab did not wrap to the first field:\n%s", ed.view())
+	}
+	ed.press(keyBack, keyBack, keyBack, keyBack, keyBack, keyRight, runes("!"))
+	if got := f.fields[0].input.Value(); got != "Library annex, east!" {
+		t.Errorf("title typed as %q", got)
+	}
+}
