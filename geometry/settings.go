@@ -59,7 +59,7 @@ type Setting struct {
 	Max     float64 // plausible maximum (SI base units) for the default check; 0 = none
 	Write   Write   // when Marshal writes it
 	Form    int     // position in the editor's wall form; 0 = not in the form
-	Report  bool    // listed among the report's inputs when not the default
+	Report  bool    // listed among the report's inputs when not the default (false when the report has a line of its own for it)
 
 	// Required reports whether the wall needs the setting; nil = optional.
 	// Needs names a setting that must have been read for the requirement to
@@ -187,13 +187,13 @@ var Settings = []Setting{
 		Get: func(w *Wall) Value { return Value{Bool: !w.Analysis.NoTopTie} }, Set: func(w *Wall, v Value) { w.Analysis.NoTopTie = !v.Bool }},
 
 	{Key: "gravity.dead", Kind: KindLineLoad, Label: "dead load D", Help: "along the top, e.g. 1.2kip/ft, 800plf, 15kN/m",
-		Example: [2]string{`"1.2kip/ft"`, `"15kN/m"`}, Max: maxLineLoad, Form: 200, Report: true,
+		Example: [2]string{`"1.2kip/ft"`, `"15kN/m"`}, Max: maxLineLoad, Form: 200,
 		Get: func(w *Wall) Value { return Value{Num: float64(w.Gravity.Dead)} }, Set: func(w *Wall, v Value) { w.Gravity.Dead = LineLoad(v.Num) }},
 	{Key: "gravity.live", Kind: KindLineLoad, Label: "live load L", Help: "along the top, e.g. 0.5kip/ft, 7kN/m",
-		Example: [2]string{`"0.5kip/ft"`, `"7kN/m"`}, Max: maxLineLoad, Form: 210, Report: true,
+		Example: [2]string{`"0.5kip/ft"`, `"7kN/m"`}, Max: maxLineLoad, Form: 210,
 		Get: func(w *Wall) Value { return Value{Num: float64(w.Gravity.Live)} }, Set: func(w *Wall, v Value) { w.Gravity.Live = LineLoad(v.Num) }},
 	{Key: "gravity.self_weight", Kind: KindAreaLoad, Label: "self weight", Help: "per face area, e.g. 60psf, 2.9kPa; blank: from the material; 0: none",
-		Example: [2]string{`"60psf"`, `"2.9kPa"`}, Max: maxAreaLoad, Form: 220, Report: true,
+		Example: [2]string{`"60psf"`, `"2.9kPa"`}, Max: maxAreaLoad, Form: 220,
 		Default: Value{Num: math.NaN()}, // "not given" (NaN so that 0, "no self weight", is written)
 		Get: func(w *Wall) Value {
 			if w.Gravity.NoSelf {
