@@ -2,31 +2,16 @@ package report
 
 import (
 	"bytes"
-	"flag"
 	"fmt"
-	"os"
-	"path/filepath"
 	"strings"
 	"testing"
 	"time"
 
 	"pierwise/geometry"
+	"pierwise/internal/testkit"
 	"pierwise/pier/fe"
 	"pierwise/study"
 )
-
-// The -update flag rewrites golden files. Another test file of the package
-// may define it too, so it is registered only when nobody has.
-func init() {
-	if flag.Lookup("update") == nil {
-		flag.Bool("update", false, "rewrite golden files")
-	}
-}
-
-func cmpUpdate() bool {
-	f := flag.Lookup("update")
-	return f != nil && f.Value.String() == "true"
-}
 
 // cmpTestWall is an invented wall (not a published example): 30 ft by 12 ft
 // concrete masonry with a door and two windows, and a variant in which the
@@ -54,22 +39,7 @@ func cmpTestWall() *geometry.Wall {
 
 func cmpGolden(t *testing.T, name string, got []byte) {
 	t.Helper()
-	golden := filepath.Join("testdata", name)
-	if cmpUpdate() {
-		if err := os.MkdirAll("testdata", 0o755); err != nil {
-			t.Fatal(err)
-		}
-		if err := os.WriteFile(golden, got, 0o644); err != nil {
-			t.Fatal(err)
-		}
-	}
-	want, err := os.ReadFile(golden)
-	if err != nil {
-		t.Fatalf("%v (run go test -update to create it)", err)
-	}
-	if string(got) != string(want) {
-		t.Errorf("output differs from %s (check it, then go test -update):\n%s", golden, got)
-	}
+	testkit.Golden(t, name, string(got))
 }
 
 func TestCompareReportGolden(t *testing.T) {

@@ -1,19 +1,15 @@
 package sketch
 
 import (
-	"flag"
 	"fmt"
 	"math"
-	"os"
-	"path/filepath"
 	"strings"
 	"testing"
 
 	"pierwise/geometry"
+	"pierwise/internal/testkit"
 	"pierwise/pier"
 )
-
-var update = flag.Bool("update", false, "rewrite the golden files in testdata")
 
 const ft = geometry.Foot
 
@@ -141,20 +137,7 @@ func TestOpeningLabelStaysWithItsBox(t *testing.T) {
 
 func golden(t *testing.T, name, got string) {
 	t.Helper()
-	path := filepath.Join("testdata", name)
-	if *update {
-		if err := os.WriteFile(path, []byte(got+"\n"), 0o644); err != nil {
-			t.Fatal(err)
-		}
-		return
-	}
-	want, err := os.ReadFile(path)
-	if err != nil {
-		t.Fatalf("%v (run go test -update to create it)", err)
-	}
-	if string(want) != got+"\n" {
-		t.Errorf("%s differs:\ngot:\n%s\nwant:\n%s", name, got, want)
-	}
+	testkit.Golden(t, name, got+"\n")
 }
 
 func TestElevationGolden(t *testing.T) {

@@ -14,6 +14,7 @@ import (
 	"github.com/charmbracelet/x/ansi"
 
 	"pierwise/demo"
+	"pierwise/internal/testkit"
 	"pierwise/study"
 )
 
@@ -43,22 +44,7 @@ func cmpKey(s string) tea.KeyMsg {
 
 func cmpGoldenView(t *testing.T, name, got string) {
 	t.Helper()
-	path := filepath.Join("testdata", name)
-	if *update {
-		if err := os.MkdirAll("testdata", 0o755); err != nil {
-			t.Fatal(err)
-		}
-		if err := os.WriteFile(path, []byte(got), 0o644); err != nil {
-			t.Fatal(err)
-		}
-	}
-	want, err := os.ReadFile(path)
-	if err != nil {
-		t.Fatalf("%v (go test -update writes it)", err)
-	}
-	if got != string(want) {
-		t.Errorf("view differs from %s (check, then go test -update):\n%s", path, got)
-	}
+	testkit.Golden(t, name, got)
 }
 
 // checkSize fails unless the view is exactly w × h cells.

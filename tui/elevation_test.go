@@ -15,6 +15,7 @@ import (
 	"github.com/charmbracelet/x/ansi"
 
 	"pierwise/geometry"
+	"pierwise/internal/testkit"
 	"pierwise/pier"
 	"pierwise/pier/fe"
 	"pierwise/report"
@@ -85,23 +86,7 @@ func (ed *editor) typeText(s string) {
 
 func checkGolden(t *testing.T, name, got string) {
 	t.Helper()
-	path := filepath.Join("testdata", name)
-	if *update {
-		if err := os.MkdirAll("testdata", 0o755); err != nil {
-			t.Fatal(err)
-		}
-		if err := os.WriteFile(path, []byte(got), 0o644); err != nil {
-			t.Fatal(err)
-		}
-		return
-	}
-	want, err := os.ReadFile(path)
-	if err != nil {
-		t.Fatalf("%v (go test ./tui -update writes it)", err)
-	}
-	if string(want) != got {
-		t.Errorf("%s differs from the view:\n%s\n--- want:\n%s", name, got, want)
-	}
+	testkit.Golden(t, name, got)
 }
 
 // checkSize: the view fills the window exactly, never more.
