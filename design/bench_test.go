@@ -1,7 +1,7 @@
 package design
 
 import (
-	"math/rand"
+	"math/rand/v2"
 	"testing"
 
 	"pierwise/geometry"
@@ -12,7 +12,7 @@ import (
 // piers (21 piers in the window band) and the full-length pier below the
 // sills: 22 leaf piers with random section forces (seeded).
 func wall20(b testing.TB, kind geometry.MaterialKind, class WallClass) Input {
-	rng := rand.New(rand.NewSource(1))
+	rng := rand.New(rand.NewPCG(1, 0))
 	w := Wall{Units: geometry.US, Length: geometry.Length(102 * foot), Height: geometry.Length(12 * foot),
 		Thickness: geometry.Length(7.625 * inch), Material: geometry.Material{Kind: kind, Strength: geometry.Stress(3000 * psiU)}}
 	var piers []PierInput
