@@ -3,7 +3,7 @@
 # 20 ft x 10 ft wall meshed 160 x 80 (1.5 in elements), pierwise with the
 # plain bilinear element (q4), CalculiX with CPS4. Prints the best-of-N
 # wall-clock time, the CPU time and the peak resident memory of each, and the
-# ratios. Target (issue 3): pierwise at least 10x faster, at most 1/10 of
+# ratios. The target: pierwise at least 10x faster, at most 1/10 of
 # CalculiX's peak memory.
 #
 # Usage: scripts/fe-vs-ccx.sh [runs]     (default 3 runs each)
