@@ -5,7 +5,6 @@ import (
 	"fmt"
 	"math"
 	"path/filepath"
-	"regexp"
 	"sort"
 	"strconv"
 	"strings"
@@ -87,24 +86,12 @@ func newError(file string, line int, key, format string, a ...any) *Error {
 	return &Error{File: file, Line: line, Key: key, Msg: fmt.Sprintf(format, a...)}
 }
 
-var (
-	storeyHeader = regexp.MustCompile(`(?m)^[ \t]*\[[ \t]*storey[ \t]*\]`)
-	wallHeader   = regexp.MustCompile(`(?m)^[ \t]*\[\[[ \t]*wall[ \t]*\]\]`)
-)
-
 // IsStoreyFile reports whether data looks like a storey file rather than a
-// wall file: it has a [storey] table or [[wall]] entries. A file with TOML
-// syntax errors is still recognised by its table headers, so that its errors
-// are reported as a storey file's.
-func IsStoreyFile(data []byte) bool {
-	var m map[string]any
-	if _, err := toml.Decode(string(data), &m); err == nil {
-		_, s := m["storey"]
-		_, w := m["wall"]
-		return s || w
-	}
-	return storeyHeader.Match(data) || wallHeader.Match(data)
-}
+// wall file: it has a [storey] table or [[wall]] entries, and no wall sizes
+// (geometry.IsStoreyFile, the one detector the wall parser uses too). A file
+// with TOML syntax errors is still recognised by its table headers, so that
+// its errors are reported as a storey file's.
+func IsStoreyFile(data []byte) bool { return geometry.IsStoreyFile(data) }
 
 // Parse reads a storey file. It checks the keys, the values and the plan
 // (positions inside the plan); the wall files themselves are read by
@@ -674,53 +661,20 @@ func sortedKeys[V any](m map[string]V) []string {
 	return keys
 }
 
-var (
-	headerLine = regexp.MustCompile(`^\s*(\[\[?)\s*([A-Za-z0-9_.\-]+)\s*\]\]?`)
-	keyLine    = regexp.MustCompile(`^\s*([A-Za-z0-9_\-]+)\s*=`)
-)
-
 // keyLines maps keys to the lines they are on: "title", "storey",
-// "storey.shear", "wall#0" (the first [[wall]] header), "wall#0.file". The
-// TOML decoder keeps no positions, and errors must name lines. Multi-line
-// strings are skipped over.
+// "storey.shear", "wall#0" (the first [[wall]] header), "wall#0.file", from
+// the scanner every TOML file of pierwise shares (geometry.KeyLines).
 func keyLines(data []byte) map[string]int {
 	lines := map[string]int{}
-	table := ""
-	walls := -1
-	inMulti := ""
-	for i, l := range strings.Split(string(data), "\n") {
-		n := i + 1
-		if inMulti != "" {
-			if strings.Count(l, inMulti)%2 == 1 {
-				inMulti = ""
-			}
-			continue
-		}
-		if m := headerLine.FindStringSubmatch(l); m != nil {
-			table = m[2]
-			if m[1] == "[[" && table == "wall" {
-				walls++
-				table = "wall#" + strconv.Itoa(walls)
-			}
-			if _, seen := lines[table]; !seen {
-				lines[table] = n
-			}
-			continue
-		}
-		if m := keyLine.FindStringSubmatch(l); m != nil {
-			key := m[1]
-			if table != "" {
-				key = table + "." + key
-			}
-			if _, seen := lines[key]; !seen {
-				lines[key] = n
-			}
-			for _, q := range []string{`"""`, `'''`} {
-				if strings.Count(l, q)%2 == 1 {
-					inMulti = q
+	for path, n := range geometry.KeyLines(data) {
+		if rest, ok := strings.CutPrefix(path, "wall["); ok {
+			if i := strings.IndexByte(rest, ']'); i > 0 {
+				if k, err := strconv.Atoi(rest[:i]); err == nil {
+					path = "wall#" + strconv.Itoa(k-1) + rest[i+1:]
 				}
 			}
 		}
+		lines[path] = n
 	}
 	return lines
 }
