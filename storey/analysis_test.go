@@ -252,7 +252,7 @@ func TestAnalyseDriftUnderDesignShear(t *testing.T) {
 		t.Fatalf("drift %g m, want %g m and OK", float64(res.Drift.Design), want)
 	}
 	var b strings.Builder
-	if err := Report(&b, a, time.Date(2026, 12, 1, 0, 0, 0, 0, time.UTC)); err != nil {
+	if err := Report(&b, a, time.Date(2026, 12, 1, 0, 0, 0, 0, time.UTC), ""); err != nil {
 		t.Fatal(err)
 	}
 	if !strings.Contains(b.String(), "design drift δ = Cd·δe/Ie =") || !strings.Contains(b.String(), ": OK") {

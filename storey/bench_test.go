@@ -2,18 +2,18 @@ package storey
 
 import (
 	"fmt"
-
-	"math/rand"
+	"math/rand/v2"
 	"path/filepath"
-	"pierwise/geometry"
 	"testing"
+
+	"pierwise/geometry"
 )
 
 // BenchmarkDistribute: the distribution alone, for storeys of 6 and 60
 // walls (seeded random plans).
 func BenchmarkDistribute(b *testing.B) {
 	for _, n := range []int{6, 60} {
-		rng := rand.New(rand.NewSource(1))
+		rng := rand.New(rand.NewPCG(1, 0))
 		members := make([]Member, n)
 		for i := range members {
 			d := Direction(i % 2)

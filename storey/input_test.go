@@ -114,7 +114,7 @@ func TestFlexibleAndEnvelopeStorey(t *testing.T) {
 		}
 	}
 	var b strings.Builder
-	if err := Report(&b, a, time.Date(2026, 12, 2, 0, 0, 0, 0, time.UTC)); err != nil {
+	if err := Report(&b, a, time.Date(2026, 12, 2, 0, 0, 0, 0, time.UTC), ""); err != nil {
 		t.Fatal(err)
 	}
 	for _, want := range []string{"Flexible diaphragm: shear to the wall lines", "the larger of rigid and flexible", "common practice"} {
@@ -150,7 +150,7 @@ func TestRigidityWall(t *testing.T) {
 		t.Errorf("JSON frame %+v", j.Walls[3])
 	}
 	var b strings.Builder
-	if err := Report(&b, a, time.Now()); err != nil {
+	if err := Report(&b, a, time.Now(), ""); err != nil {
 		t.Fatal(err)
 	}
 	if !strings.Contains(b.String(), "(given by rigidity)") || !strings.Contains(b.String(), "braced frame (given by rigidity), design shear") {
@@ -222,7 +222,7 @@ func TestFEBasis(t *testing.T) {
 		}
 	}
 	var b strings.Builder
-	if err := Report(&b, a, time.Now()); err != nil {
+	if err := Report(&b, a, time.Now(), ""); err != nil {
 		t.Fatal(err)
 	}
 	if !strings.Contains(b.String(), "Rigidity by each model") || !strings.Contains(b.String(), "classic - FE") {

@@ -2,7 +2,6 @@ package storey
 
 import (
 	"math"
-	"strconv"
 
 	"pierwise/geometry"
 	"pierwise/pier"
@@ -164,8 +163,8 @@ type JSONPierForce struct {
 func (a *Analysis) JSON() JSON {
 	s, d := a.Storey, a.Distribution
 	u := report.UnitsFor(s.Units)
-	f := func(v float64) float64 { return tidy(u.ForceOf(geometry.Force(v))) }
-	c := func(v float64) float64 { return tidy(u.CoordOf(v)) }
+	f := func(v float64) float64 { return report.Tidy(u.ForceOf(geometry.Force(v))) }
+	c := func(v float64) float64 { return report.Tidy(u.CoordOf(v)) }
 	j := JSON{
 		File: s.Path, Title: s.Title,
 		Units:            JSONUnits{Length: u.Coord, Force: u.Force, Rigidity: u.Rigidity, Moment: u.Moment},
@@ -178,17 +177,17 @@ func (a *Analysis) JSON() JSON {
 		Warnings:         append([]string{}, a.Warnings...),
 	}
 	if a.Absolute {
-		jv := tidy(u.MomentOf(d.J))
+		jv := report.Tidy(u.MomentOf(d.J))
 		j.J = &jv
 	}
 	for _, cs := range d.Cases {
-		j.Cases = append(j.Cases, JSONCase{Name: cs.Name(), Load: cs.Load.String(), Eccentricity: c(cs.Eccentricity), Torque: tidy(u.MomentOf(cs.Torque))})
+		j.Cases = append(j.Cases, JSONCase{Name: cs.Name(), Load: cs.Load.String(), Eccentricity: c(cs.Eccentricity), Torque: report.Tidy(u.MomentOf(cs.Torque))})
 	}
 	j.Diaphragm, j.Basis, j.SDC = s.Diaphragm.String(), s.Basis.String(), s.SDC
 	for _, cs := range d.Cases {
-		ji := JSONIrregularity{Case: cs.Name(), Type: cs.Torsion.Type.String(), Amplification: tidy(cs.Torsion.Amplification)}
+		ji := JSONIrregularity{Case: cs.Name(), Type: cs.Torsion.Type.String(), Amplification: report.Tidy(cs.Torsion.Amplification)}
 		if r := cs.Torsion.Ratio; !math.IsInf(r, 0) {
-			r = tidy(r)
+			r = report.Tidy(r)
 			ji.Ratio = &r
 		}
 		j.TorsionalIrregularity = append(j.TorsionalIrregularity, ji)
@@ -210,7 +209,7 @@ func (a *Analysis) JSON() JSON {
 		if !dr.Checked {
 			return nil
 		}
-		return &JSONDrift{Design: tidy(u.DeflectionOf(geometry.Length(dr.Design))), Ratio: tidy(dr.Ratio), Allowable: tidy(u.DeflectionOf(geometry.Length(dr.Allowable))), OK: dr.OK}
+		return &JSONDrift{Design: report.Tidy(u.DeflectionOf(geometry.Length(dr.Design))), Ratio: report.Tidy(dr.Ratio), Allowable: report.Tidy(u.DeflectionOf(geometry.Length(dr.Allowable))), OK: dr.OK}
 	}
 	if s.Cd > 0 && a.Absolute {
 		sd := &JSONStoreyDrift{Cd: s.Cd, Ie: s.Ie, Height: c(float64(s.Height)), Limit: s.DriftLimit, Edges: []JSONEdgeDrift{}}
@@ -240,16 +239,16 @@ func (a *Analysis) JSON() JSON {
 			jw.RigidityRelative = w.FE.Rigidity
 		}
 		if a.Absolute {
-			r := tidy(u.RigidityOf(w.Rigidity))
+			r := report.Tidy(u.RigidityOf(w.Rigidity))
 			jw.Rigidity = &r
 		}
 		rig := func(r float64) *float64 {
 			if !(r > 0) {
 				return nil
 			}
-			v := tidy(r)
+			v := report.Tidy(r)
 			if a.Absolute {
-				v = tidy(u.RigidityOf(r))
+				v = report.Tidy(u.RigidityOf(r))
 			}
 			return &v
 		}
@@ -264,35 +263,28 @@ func (a *Analysis) JSON() JSON {
 			jw.Cases = append(jw.Cases, JSONWallCase{Case: cs.Name(), Direct: f(sh.Direct), Torsional: f(sh.Torsional), Total: f(sh.Total())})
 		}
 		if a.Absolute && w.Rigidity > 0 && w.Design.Shear > 0 {
-			v := tidy(u.DeflectionOf(geometry.Length(w.Design.Shear / w.Rigidity)))
+			v := report.Tidy(u.DeflectionOf(geometry.Length(w.Design.Shear / w.Rigidity)))
 			jw.Deflection = &v
 		}
 		if w.Loaded != nil {
 			jw.Warnings = append(jw.Warnings, pier.Texts(w.Loaded.Warnings)...)
 			if dr := w.Loaded.Drift; s.Basis == geometry.BasisClassic && w.Loaded.HasLoad && dr.Allowable > 0 {
-				jw.Drift = &JSONDrift{Design: tidy(u.DeflectionOf(dr.Design)), Ratio: tidy(dr.Ratio), Allowable: tidy(u.DeflectionOf(dr.Allowable)), OK: dr.OK}
+				jw.Drift = &JSONDrift{Design: report.Tidy(u.DeflectionOf(dr.Design)), Ratio: report.Tidy(dr.Ratio), Allowable: report.Tidy(u.DeflectionOf(dr.Allowable)), OK: dr.OK}
 			}
 		}
 		if w.FE != nil {
 			jw.Warnings = append(jw.Warnings, w.FE.Warnings...)
 		}
 		if g := w.Governing; g != nil {
-			jw.GoverningPier = &JSONGoverning{Pier: g.Pier, Ratio: tidy(g.Ratio), Check: g.Check}
+			jw.GoverningPier = &JSONGoverning{Pier: g.Pier, Ratio: report.Tidy(g.Ratio), Check: g.Check}
 		}
 		for _, p := range w.Piers {
 			jw.Piers = append(jw.Piers, JSONPierForce{
-				Name: p.Name, H: c(p.H()), L: c(p.L()), Support: supportName(p.Support),
-				Share: p.Share, Shear: f(float64(p.Shear)), Moment: tidy(u.MomentOf(p.Moment)),
+				Name: p.Name, H: c(p.H()), L: c(p.L()), Support: p.Support.String(),
+				Share: p.Share, Shear: f(float64(p.Shear)), Moment: report.Tidy(u.MomentOf(p.Moment)),
 			})
 		}
 		j.Walls = append(j.Walls, jw)
 	}
 	return j
-}
-
-// tidy rounds to 12 significant digits, so that 50 ft read as metres and
-// converted back prints as 50, not 50.000000000000007.
-func tidy(x float64) float64 {
-	y, _ := strconv.ParseFloat(strconv.FormatFloat(x, 'g', 12, 64), 64)
-	return y
 }

@@ -13,23 +13,20 @@ import (
 	"pierwise/sketch"
 )
 
-// Version is the program version printed in the report's title block; the
-// command sets it.
-var Version = "dev"
-
 // WriteReport loads the storey file at path with its walls, analyses it and
 // writes the storey report. Errors in the files are returned before anything
-// is written.
-func WriteReport(out io.Writer, path string, now time.Time) error {
+// is written. version is the program's, for the title block ("" when not
+// known).
+func WriteReport(out io.Writer, path string, now time.Time, version string) error {
 	a, err := Load(path)
 	if err != nil {
 		return err
 	}
-	return Report(out, a, now)
+	return Report(out, a, now, version)
 }
 
 // Report writes the text report of an analysed storey.
-func Report(out io.Writer, a *Analysis, now time.Time) error {
+func Report(out io.Writer, a *Analysis, now time.Time, version string) error {
 	s := a.Storey
 	u := report.UnitsFor(s.Units)
 	d := a.Distribution
@@ -39,7 +36,7 @@ func Report(out io.Writer, a *Analysis, now time.Time) error {
 	w.KV("Title", orDash(s.Title))
 	w.KV("File", s.Path)
 	w.KV("Date", now.Format("2006-01-02 15:04 MST"))
-	w.KV("Program", "pierwise "+Version)
+	w.KV("Program", report.Program(version))
 	w.KV("Units", unitsLine(s.Units, u))
 	w.KV("Method", methodLine(s))
 
@@ -257,7 +254,7 @@ func Report(out io.Writer, a *Analysis, now time.Time) error {
 			}
 			for _, p := range leaves {
 				t.Add(p.Name, geometry.FormatLength(geometry.Length(p.H()), s.Units), geometry.FormatLength(geometry.Length(p.L()), s.Units),
-					fmt.Sprintf("%.2f", p.Ratio()), supportName(p.Support), fmt.Sprintf("%.1f %%", 100*p.Share),
+					fmt.Sprintf("%.2f", p.Ratio()), p.Support.String(), fmt.Sprintf("%.1f %%", 100*p.Share),
 					num(u.ForceOf(p.Shear), 2), num(u.MomentOf(p.Moment), 1))
 			}
 			t.Write(w, "   ")
@@ -453,13 +450,6 @@ func caseNumber(c Case) int {
 		n++
 	}
 	return n
-}
-
-func supportName(s geometry.Support) string {
-	if s == geometry.Fixed {
-		return "fixed"
-	}
-	return "cantilever"
 }
 
 func unitsLine(sys geometry.System, u report.Units) string {

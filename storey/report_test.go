@@ -2,15 +2,14 @@ package storey
 
 import (
 	"bytes"
-	"flag"
 	"os"
 	"path/filepath"
 	"strings"
 	"testing"
 	"time"
-)
 
-var update = flag.Bool("update", false, "rewrite the golden files in testdata/")
+	"pierwise/internal/testkit"
+)
 
 // The storey report of the invented workshop, compared with a golden file.
 // Its numbers are rounded in the text (2 decimals for forces and distances),
@@ -18,34 +17,12 @@ var update = flag.Bool("update", false, "rewrite the golden files in testdata/")
 // go test ./storey -run TestReportGolden -update after a deliberate change,
 // and read the diff.
 func TestReportGolden(t *testing.T) {
-	Version = "test"
 	var buf bytes.Buffer
 	now := time.Date(2026, 12, 1, 23, 0, 0, 0, time.UTC)
-	if err := WriteReport(&buf, filepath.Join("..", "testdata", "storey", "workshop.toml"), now); err != nil {
+	if err := WriteReport(&buf, filepath.Join("..", "testdata", "storey", "workshop.toml"), now, "test"); err != nil {
 		t.Fatal(err)
 	}
-	golden := filepath.Join("testdata", "workshop.report.txt")
-	if *update {
-		if err := os.MkdirAll("testdata", 0o755); err != nil {
-			t.Fatal(err)
-		}
-		if err := os.WriteFile(golden, buf.Bytes(), 0o644); err != nil {
-			t.Fatal(err)
-		}
-	}
-	want, err := os.ReadFile(golden)
-	if err != nil {
-		t.Fatalf("%v (run with -update to create it)", err)
-	}
-	if got := buf.String(); got != string(want) {
-		gl, wl := strings.Split(got, "\n"), strings.Split(string(want), "\n")
-		for i := 0; i < len(gl) && i < len(wl); i++ {
-			if gl[i] != wl[i] {
-				t.Fatalf("report differs from %s at line %d:\n got: %q\nwant: %q", golden, i+1, gl[i], wl[i])
-			}
-		}
-		t.Fatalf("report differs from %s in length: %d lines, want %d", golden, len(gl), len(wl))
-	}
+	testkit.Golden(t, "workshop.report.txt", buf.String())
 	// What the report must say whatever its layout.
 	for _, s := range []string{"licensed", "local codes govern", "ASCE 7-22 §12.8.4.2", "x_R:", "y_R:", "J:", " M ", " R "} {
 		if !strings.Contains(buf.String(), s) {
@@ -58,31 +35,12 @@ func TestReportGolden(t *testing.T) {
 // rigidity, a seismic design category and the storey drift check, against
 // a golden file (rounded numbers; read the diff after -update).
 func TestReportGoldenFrame(t *testing.T) {
-	Version = "test"
 	var buf bytes.Buffer
 	now := time.Date(2026, 12, 2, 12, 0, 0, 0, time.UTC)
-	if err := WriteReport(&buf, filepath.Join("..", "testdata", "storey", "workshop-frame.toml"), now); err != nil {
+	if err := WriteReport(&buf, filepath.Join("..", "testdata", "storey", "workshop-frame.toml"), now, "test"); err != nil {
 		t.Fatal(err)
 	}
-	golden := filepath.Join("testdata", "workshop-frame.report.txt")
-	if *update {
-		if err := os.WriteFile(golden, buf.Bytes(), 0o644); err != nil {
-			t.Fatal(err)
-		}
-	}
-	want, err := os.ReadFile(golden)
-	if err != nil {
-		t.Fatalf("%v (run with -update to create it)", err)
-	}
-	if got := buf.String(); got != string(want) {
-		gl, wl := strings.Split(got, "\n"), strings.Split(string(want), "\n")
-		for i := 0; i < len(gl) && i < len(wl); i++ {
-			if gl[i] != wl[i] {
-				t.Fatalf("report differs from %s at line %d:\n got: %q\nwant: %q", golden, i+1, gl[i], wl[i])
-			}
-		}
-		t.Fatalf("report differs from %s in length", golden)
-	}
+	testkit.Golden(t, "workshop-frame.report.txt", buf.String())
 	for _, s := range []string{"Mezzanine frame", "(given by rigidity)", "Storey drift (ASCE 7-22 §12.8.6", "Torsional irregularity", "licensed"} {
 		if !strings.Contains(buf.String(), s) {
 			t.Errorf("report lacks %q", s)
@@ -105,7 +63,7 @@ func TestWriteReportError(t *testing.T) {
 		t.Fatal(err)
 	}
 	var buf bytes.Buffer
-	err := WriteReport(&buf, path, time.Now())
+	err := WriteReport(&buf, path, time.Now(), "")
 	if err == nil || !strings.Contains(err.Error(), path+":15: wall[2].file") || !strings.Contains(err.Error(), "not found") {
 		t.Errorf("got %v, want a missing-file error at line 15", err)
 	}

@@ -322,7 +322,7 @@ func (s *storeyScreen) writeReport() tea.Cmd {
 	}
 	path := strings.TrimSuffix(s.st.Path, filepath.Ext(s.st.Path)) + ".report.txt"
 	var b strings.Builder
-	if err := storey.Report(&b, s.an, s.c.now()); err != nil {
+	if err := storey.Report(&b, s.an, s.c.now(), s.c.version); err != nil {
 		s.refuse("no report: %v", err)
 		return nil
 	}
@@ -540,10 +540,7 @@ func (s *storeyScreen) tableView(w, h int) string {
 			lines = append(lines, st.dim.Render(fmt.Sprintf("… %d more piers (p writes the full report)", len(leaves)-i)))
 			break
 		}
-		support := "cantilever"
-		if p.Support == geometry.Fixed {
-			support = "fixed"
-		}
+		support := p.Support.String()
 		lines = append(lines, truncate(fmt.Sprintf("%-7s %5.2f %-10s %5.1f%% %8.2f %9.1f", p.Name, p.Ratio(), support, 100*p.Share,
 			u.ForceOf(p.Shear), u.MomentOf(p.Moment)), w))
 	}

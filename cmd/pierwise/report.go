@@ -57,7 +57,7 @@ func runReport(e *env, args []string) error {
 		if ff.on {
 			return usagef("--fe, --mesh and --element apply to wall files, not to the storey file %s", arg)
 		}
-		if err := storey.WriteReport(&buf, arg, now); err != nil {
+		if err := storey.WriteReport(&buf, arg, now, version); err != nil {
 			return err
 		}
 	} else {

@@ -14,7 +14,6 @@ import (
 )
 
 func init() {
-	storey.Version = version
 	register(command{
 		name:  "storey",
 		args:  "FILE [--json | --edit] [--basis classic|fe] [--diaphragm rigid|flexible|envelope]",
@@ -253,10 +252,7 @@ func writeStoreyTables(out io.Writer, a *storey.Analysis) {
 		}
 		tw := newTextTable("pier", "h/L", "support", "share", "V "+u.Force, "M "+u.Moment)
 		for _, p := range w.Piers {
-			support := "cantilever"
-			if p.Support == geometry.Fixed {
-				support = "fixed"
-			}
+			support := p.Support.String()
 			tw.Add(p.Name, fmt.Sprintf("%.2f", p.Ratio()), support, fmt.Sprintf("%.1f%%", 100*p.Share),
 				fmt.Sprintf("%.2f", u.ForceOf(p.Shear)), fmt.Sprintf("%.1f", u.MomentOf(p.Moment)))
 		}

@@ -13,7 +13,7 @@ import (
 
 const workshop = "../../testdata/storey/workshop.toml"
 
-// pierwise storey --json on the invented workshop: the keys of issue 6, and
+// pierwise storey --json on the invented workshop: the keys of the storey JSON, and
 // the statics of the rigid diaphragm checked on the printed numbers (direct
 // shears of one direction sum to the storey shear, Taly 2nd ed. §7.9; the
 // design shear is never below the direct shear, common practice).
