@@ -35,8 +35,9 @@ func Parse(filename string, data []byte) (*Wall, error) {
 		}
 		return nil, ErrorList{{File: filename, Msg: "not valid TOML: " + err.Error()}}
 	}
-	p := &fileParser{file: filename, lines: scanKeyLines(string(data)), bad: map[string]bool{}, md: &md, sc: sc}
-	if e := storeyFile(data, p.lines); e != nil {
+	scanned := ScanTOML(string(data))
+	p := &fileParser{file: filename, lines: keyLinesOf(scanned), bad: map[string]bool{}, md: &md, sc: sc}
+	if e := storeyFile(scanned, p.lines); e != nil {
 		e.File = filename
 		return nil, ErrorList{e}
 	}
@@ -62,8 +63,8 @@ func Parse(filename string, data []byte) (*Wall, error) {
 
 // storeyFile returns one error that says a storey file (IsStoreyFile) was
 // handed over as a wall file, instead of a list of unknown and missing keys.
-func storeyFile(src []byte, lines keyLines) *Error {
-	if !IsStoreyFile(src) {
+func storeyFile(scanned []TOMLLine, lines keyLines) *Error {
+	if !isStorey(scanned) {
 		return nil
 	}
 	key := "storey"

@@ -41,7 +41,7 @@ type TOMLLine struct {
 // fails: lines it cannot read are LineOther, and keys inside inline
 // tables are not mapped.
 func ScanTOML(src string) []TOMLLine {
-	var out []TOMLLine
+	out := make([]TOMLLine, 0, strings.Count(src, "\n")+1)
 	arrays := map[string]int{} // array-of-tables path → tables seen so far
 	prefix := ""
 	closer := "" // closing delimiter of a multi-line string being skipped
@@ -148,9 +148,11 @@ func splitComment(v string) (value, comment string) {
 // written (ScanTOML). Dotted keys map each of their parts.
 type keyLines map[string]int
 
-func scanKeyLines(src string) keyLines {
+func scanKeyLines(src string) keyLines { return keyLinesOf(ScanTOML(src)) }
+
+func keyLinesOf(lines []TOMLLine) keyLines {
 	kl := keyLines{}
-	for _, l := range ScanTOML(src) {
+	for _, l := range lines {
 		switch l.Kind {
 		case LineTable, LineArray:
 			kl.set(l.Path, l.Num)
@@ -333,9 +335,11 @@ func KeyLine(src []byte, key string) int {
 // wall's length, height or [[opening]] tables. It reads the lines only
 // (ScanTOML), so a storey file with a TOML error is still recognised and its
 // errors reported as a storey file's.
-func IsStoreyFile(src []byte) bool {
+func IsStoreyFile(src []byte) bool { return isStorey(ScanTOML(string(src))) }
+
+func isStorey(lines []TOMLLine) bool {
 	storey, wall := false, false
-	for _, l := range ScanTOML(string(src)) {
+	for _, l := range lines {
 		var top string
 		switch {
 		case l.Kind == LineTable || l.Kind == LineArray:

@@ -4,6 +4,7 @@ import (
 	"reflect"
 	"strconv"
 	"strings"
+	"sync"
 
 	"github.com/BurntSushi/toml"
 )
@@ -77,7 +78,33 @@ type schema struct {
 
 var openingKeys = []string{"name", "x", "sill", "width", "height"}
 
+// schemaOf returns the schema of the current Settings, built once for
+// each version of the table (tests add a setting by replacing the slice).
 func schemaOf() *schema {
+	schemaCache.Lock()
+	defer schemaCache.Unlock()
+	key := schemaKey{n: len(Settings)}
+	if len(Settings) > 0 {
+		key.first = &Settings[0]
+	}
+	if schemaCache.sc == nil || schemaCache.key != key {
+		schemaCache.sc, schemaCache.key = buildSchema(), key
+	}
+	return schemaCache.sc
+}
+
+type schemaKey struct {
+	first *Setting
+	n     int
+}
+
+var schemaCache struct {
+	sync.Mutex
+	key schemaKey
+	sc  *schema
+}
+
+func buildSchema() *schema {
 	sc := &schema{top: newNode(), opening: newNode(openingKeys...), variant: newNode("name", "opening")}
 	for i := range Settings {
 		s := &Settings[i]

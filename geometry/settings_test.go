@@ -4,6 +4,7 @@ import (
 	"errors"
 	"math"
 	"math/rand/v2"
+	"os"
 	"reflect"
 	"strings"
 	"testing"
@@ -192,4 +193,41 @@ func TestAnalysisAndGravityErrors(t *testing.T) {
 	if _, err := Marshal(w); err == nil {
 		t.Error("Marshal wrote an infinite load")
 	}
+}
+
+// BenchmarkParse reads and writes the example walls: the table-driven
+// parser (schema structs, toml.MetaData.Undecoded, ScanTOML) and Marshal.
+func BenchmarkParse(b *testing.B) {
+	data, err := os.ReadFile("../testdata/walls/variants.toml")
+	if err != nil {
+		b.Fatal(err)
+	}
+	w, err := Parse("variants.toml", data)
+	if err != nil {
+		b.Fatal(err)
+	}
+	b.Run("Parse", func(b *testing.B) {
+		b.ReportAllocs()
+		for b.Loop() {
+			if _, err := Parse("variants.toml", data); err != nil {
+				b.Fatal(err)
+			}
+		}
+	})
+	b.Run("Marshal", func(b *testing.B) {
+		b.ReportAllocs()
+		for b.Loop() {
+			if _, err := Marshal(w); err != nil {
+				b.Fatal(err)
+			}
+		}
+	})
+	b.Run("MarshalKeeping", func(b *testing.B) {
+		b.ReportAllocs()
+		for b.Loop() {
+			if _, err := MarshalKeeping(data, w); err != nil {
+				b.Fatal(err)
+			}
+		}
+	})
 }
