@@ -4,13 +4,11 @@ import (
 	"bytes"
 	"encoding/xml"
 	"errors"
-	"flag"
 	"fmt"
 	"image"
 	"image/color"
 	"io"
 	"math"
-	"os"
 	"path/filepath"
 	"strings"
 	"testing"
@@ -20,12 +18,11 @@ import (
 	"github.com/srwiley/rasterx"
 
 	"pierwise/geometry"
+	"pierwise/internal/testkit"
 	"pierwise/pier"
 	"pierwise/pier/fe"
 	"pierwise/storey"
 )
-
-var update = flag.Bool("update", false, "rewrite the golden SVG files")
 
 // fixedNow keeps the title block's date out of the golden files' diffs.
 var fixedNow = time.Date(2026, 12, 1, 9, 30, 0, 0, time.UTC)
@@ -70,26 +67,7 @@ func wellFormed(t *testing.T, svg []byte) {
 
 func golden(t *testing.T, name string, got []byte) {
 	t.Helper()
-	path := filepath.Join("testdata", name)
-	if *update {
-		if err := os.WriteFile(path, got, 0o644); err != nil {
-			t.Fatal(err)
-		}
-		return
-	}
-	want, err := os.ReadFile(path)
-	if err != nil {
-		t.Fatalf("%v (run go test ./drawing -update)", err)
-	}
-	if !bytes.Equal(got, want) {
-		gl, wl := strings.Split(string(got), "\n"), strings.Split(string(want), "\n")
-		for i := 0; i < min(len(gl), len(wl)); i++ {
-			if gl[i] != wl[i] {
-				t.Fatalf("%s differs at line %d:\n got %s\nwant %s", name, i+1, gl[i], wl[i])
-			}
-		}
-		t.Fatalf("%s differs in length: %d lines, want %d", name, len(gl), len(wl))
-	}
+	testkit.Golden(t, name, string(got))
 }
 
 // pxPerMM is the resolution of the test rasters.

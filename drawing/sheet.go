@@ -10,6 +10,7 @@ import (
 	"unicode/utf8"
 
 	"pierwise/geometry"
+	"pierwise/report"
 )
 
 // Caution is printed in every title block (docs/method.md §10).
@@ -200,7 +201,7 @@ func (d *doc) frame(sh sheet, tb titleBlock) {
 	y = y0 + 6
 	for _, l := range [][2]string{
 		{"Date", tb.Date.Format("2006-01-02 15:04 MST")},
-		{"Program", "pierwise " + tb.Version},
+		{"Program", report.Program(tb.Version)},
 		{"Scale", tb.Scale},
 		{"Sheet", tb.Sheet},
 	} {

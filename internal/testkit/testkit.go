@@ -5,8 +5,10 @@ package testkit
 
 import (
 	"flag"
+	"fmt"
 	"os"
 	"path/filepath"
+	"strings"
 	"sync"
 	"testing"
 
@@ -46,9 +48,29 @@ func Golden(t testing.TB, name, got string) {
 	if err != nil {
 		t.Fatalf("%v (go test -update writes it)", err)
 	}
-	if string(want) != got {
-		t.Errorf("%s differs (check it, then go test -update):\n%s\n--- want:\n%s", path, got, want)
+	if string(want) == got {
+		return
 	}
+	gl, wl := strings.Split(got, "\n"), strings.Split(string(want), "\n")
+	at := min(len(gl), len(wl))
+	for i := range at {
+		if gl[i] != wl[i] {
+			at = i
+			break
+		}
+	}
+	msg := fmt.Sprintf("%s differs at line %d (check it, then go test -update):\n got: %q\nwant: %q", path, at+1, line(gl, at), line(wl, at))
+	if len(gl) <= 60 {
+		msg += "\n--- got:\n" + got // a screen: show all of it
+	}
+	t.Error(msg)
+}
+
+func line(ls []string, i int) string {
+	if i < len(ls) {
+		return ls[i]
+	}
+	return "(end of file)"
 }
 
 // Dummy is the key of the setting DummySetting adds.
