@@ -243,7 +243,7 @@ func TestParseValidText(t *testing.T) {
 	if len(w.Layouts) != 1 || w.Layouts[0].Name != DefaultLayout || len(w.Openings()) != 2 {
 		t.Fatalf("unexpected layouts %+v", w.Layouts)
 	}
-	// Defaults of DESIGN.md §6 and api.md.
+	// Defaults of DESIGN.md §6 and geometry/doc.go.
 	if w.Units != US || w.Support != Cantilever || w.Stiffness != (Stiffness{1, 1}) || w.Drift != (Drift{Cd: 1, Ie: 1}) {
 		t.Errorf("defaults not applied: %+v %+v", w.Stiffness, w.Drift)
 	}
