@@ -243,7 +243,7 @@ func splitKey(k string) []string {
 	var cur strings.Builder
 	var q byte
 	flush := func() {
-		segs = append(segs, strings.TrimSpace(cur.String()))
+		segs = append(segs, cur.String()) // spaces outside quotes are skipped; inside they count
 		cur.Reset()
 	}
 	for i := 0; i < len(k); i++ {
