@@ -36,7 +36,7 @@ func TestExampleWalls(t *testing.T) {
 // The published walls carry the geometry their sources print.
 func TestPublishedExampleGeometry(t *testing.T) {
 	ft := float64(Foot)
-	// Masonry Chronicles nested-opening wall (DESIGN.md §3).
+	// Masonry Chronicles nested-opening wall (docs/method.md §2).
 	w, err := LoadFile("../testdata/walls/nested.toml")
 	if err != nil {
 		t.Fatal(err)
@@ -243,7 +243,7 @@ func TestParseValidText(t *testing.T) {
 	if len(w.Layouts) != 1 || w.Layouts[0].Name != DefaultLayout || len(w.Openings()) != 2 {
 		t.Fatalf("unexpected layouts %+v", w.Layouts)
 	}
-	// Defaults of DESIGN.md §6 and geometry/doc.go.
+	// Defaults of geometry/doc.go and the README's wall file.
 	if w.Units != US || w.Support != Cantilever || w.Stiffness != (Stiffness{1, 1}) || w.Drift != (Drift{Cd: 1, Ie: 1}) {
 		t.Errorf("defaults not applied: %+v %+v", w.Stiffness, w.Drift)
 	}
@@ -549,7 +549,7 @@ k = 3
 	}
 }
 
-// The example file printed in DESIGN.md §6, verbatim, reads as it says.
+// The commented example wall file (the file format in its fullest form) reads as it says.
 func TestDesignExampleFile(t *testing.T) {
 	text := `title = "Rear wall, grid 4"        # free text
 units = "us"                       # "us" (ft, in, kip, psi) or "si" (m, mm, kN, MPa); default "us"

@@ -17,7 +17,7 @@ strength = "4000psi"
 poisson = 0.2
 `
 
-// DESIGN §4: a custom E_v may be given as Poisson's ratio ν instead
+// docs/method.md §3: a custom E_v may be given as Poisson's ratio ν instead
 // (E_v = E/(2(1+ν)), isotropic elasticity, Gere & Timoshenko). It is read,
 // written back and read again unchanged; out-of-range values and ν together
 // with shear_modulus are errors naming the line and the key.

@@ -7,7 +7,7 @@ import (
 	"testing"
 )
 
-// A storey file (DESIGN §10) given where a wall file is expected gets one
+// A storey file (docs/method.md §9) given where a wall file is expected gets one
 // error that says what it is, at the [storey] line, instead of a list of
 // unknown and missing keys; a wall file with a stray [[wall]] table is still
 // a wall file with an unknown key.

@@ -278,7 +278,7 @@ func TestNextOpeningName(t *testing.T) {
 }
 
 // ASCE 7-22 Table 12.12-1, allowable story drift Δa as a fraction of the
-// story height h_sx (values as quoted in DESIGN.md §4).
+// story height h_sx (values as quoted in docs/method.md §7).
 func TestDriftPresets(t *testing.T) {
 	want := map[string]float64{
 		"masonry-cantilever": 0.010, "masonry-other": 0.007,

@@ -35,7 +35,7 @@ func sweepWall(load bool) *geometry.Wall {
 // without one.
 func TestSweepTableStressOrShare(t *testing.T) {
 	// With the load, at the current position the 8 ft piers P2 and P3 are
-	// the most stressed. Hand arithmetic (DESIGN §3, fixed-fixed piers 4 ft
+	// the most stressed. Hand arithmetic (docs/method.md §2, fixed-fixed piers 4 ft
 	// high): 6 ft piers d = (2/3)³ + 3·(2/3) = 2.2963, 8 ft piers d = 0.5³ +
 	// 1.5 = 1.625; share of P2 = (1/1.625) / (2/2.2963 + 2/1.625) = 0.2928;
 	// τ = 35 kip × 0.2928 / (96 in × 7.625 in) = 14.0 psi.

@@ -28,7 +28,7 @@ func wallReport(t *testing.T, w *geometry.Wall, path string) string {
 }
 
 // The Masonry Chronicles wall with a nested opening (Concrete Masonry
-// Association of California and Nevada; geometry as in DESIGN §3): the
+// Association of California and Nevada; geometry as in docs/method.md §2): the
 // report must show the published working — solid 5.476, strip 1.421,
 // piers 3.559, wall 7.614 (printed; exact arithmetic gives 7.607).
 func TestWallReportPublishedWall(t *testing.T) {

@@ -15,7 +15,7 @@ const ft = geometry.Foot
 
 // chronicles is the wall of the nested-opening check published in Masonry
 // Chronicles (Concrete Masonry Association of California and Nevada), as
-// DESIGN §3 describes it: 18 ft × 16 ft cantilever, a 4 × 8 ft door 4 ft
+// docs/method.md §2 describes it: 18 ft × 16 ft cantilever, a 4 × 8 ft door 4 ft
 // from the left end and a 4 × 4 ft window on a 2 ft sill 12 ft from it.
 func chronicles() *geometry.Wall {
 	return &geometry.Wall{
@@ -28,7 +28,7 @@ func chronicles() *geometry.Wall {
 	}
 }
 
-// chroniclesPiers are the piers of that wall by DESIGN §3 (fixed-fixed in
+// chroniclesPiers are the piers of that wall by docs/method.md §2 (fixed-fixed in
 // the band under the spandrel), with shares from the §3 formulas
 // (d = r³ + 3r fixed-fixed), worked here so the labels have true values.
 func chroniclesPiers() *pier.Result {

@@ -87,7 +87,7 @@ func TestAnalyseSymmetricShares(t *testing.T) {
 
 // Each wall's design shear flows into its piers: a leaf pier takes
 // V_i = share·V_design and M_i = V_i·h (cantilever) or V_i·h/2 (fixed-fixed)
-// (DESIGN §3).
+// (docs/method.md §2).
 func TestAnalysePierForces(t *testing.T) {
 	s, walls := symmetricStorey(DefaultAccidental)
 	a, err := Analyse(s, walls)

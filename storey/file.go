@@ -14,7 +14,7 @@ import (
 	"pierwise/geometry"
 )
 
-// Storey is a storey file (DESIGN §10) as read: the storey shear, where it
+// Storey is a storey file (docs/method.md §9) as read: the storey shear, where it
 // acts, the plan size and the walls by reference. Lengths are metres and
 // forces newtons whatever Units says; Units decides how they are read and
 // shown.

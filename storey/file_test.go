@@ -182,7 +182,7 @@ position = ["40ft", "10ft"]
 	}
 }
 
-// SI storeys: a bare length is metres and a bare force kN (DESIGN §6, the
+// SI storeys: a bare length is metres and a bare force kN (as in wall files, the
 // same rule as wall files); units may be mixed with explicit suffixes.
 func TestParseSI(t *testing.T) {
 	text := `units = "si"

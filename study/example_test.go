@@ -8,7 +8,7 @@ import (
 )
 
 // A window moved from the middle of a wall to 2 ft from its end: the wall
-// and its piers before and after. Invented wall; by hand (DESIGN §3):
+// and its piers before and after. Invented wall; by hand (docs/method.md §2):
 // solid 4(0.5)³ + 3(0.5) = 2.000, strip 0.2³ + 3(0.2) = 0.608, two 8 ft
 // piers 1/(2/1.625) = 0.8125, so R = 1/2.2045 = 0.454; after, piers of
 // 14 ft and 2 ft take 1.136 and 0.071 (94 % and 6 %), R = 1/2.2204 = 0.450.

@@ -46,7 +46,7 @@ func annex() *geometry.Wall {
 	}
 }
 
-// chronicles is the Masonry Chronicles nested-opening wall of DESIGN §3
+// chronicles is the Masonry Chronicles nested-opening wall of docs/method.md §2
 // (Concrete Masonry Association of California and Nevada): 18 ft × 16 ft,
 // cantilever; door 4 × 8 ft at 4 ft; window 4 × 4 ft, sill 2 ft, at 12 ft.
 // Printed wall deflection 7.614/(E t).

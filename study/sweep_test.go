@@ -185,7 +185,7 @@ func TestSweepKeepsFailedPositions(t *testing.T) {
 	}
 	bad := 0
 	for _, p := range pts {
-		overlaps := p.Y+ft >= 2*ft && p.Y <= 6*ft // touching bands merge (DESIGN §3)
+		overlaps := p.Y+ft >= 2*ft && p.Y <= 6*ft // touching bands merge (docs/method.md §2)
 		if overlaps != (p.Err != nil) {
 			t.Errorf("sill %g ft: err %v", p.Y/ft, p.Err)
 		}

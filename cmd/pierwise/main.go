@@ -22,7 +22,7 @@ import (
 // version is the program version printed in reports.
 const version = "0.1.0"
 
-// Exit statuses (DESIGN §7).
+// Exit statuses (README: the command line).
 const (
 	exitOK    = 0
 	exitInput = 1 // bad input: the message names file, line and key

@@ -342,7 +342,7 @@ func writeFETable(t *report.Text, s *solved) {
 	}
 }
 
-// JSON output (DESIGN §7). Lengths in the base unit (ft or m); forces,
+// JSON output (README: the command line). Lengths in the base unit (ft or m); forces,
 // rigidities, deflections and moments in the report units, named in "units".
 type jsonWall struct {
 	File               string     `json:"file"`

@@ -18,7 +18,7 @@ func runCLI(args ...string) (int, string, string) {
 	return code, out.String(), errb.String()
 }
 
-// The JSON keys of DESIGN §7, checked on the Masonry Chronicles wall
+// The JSON keys of the README, checked on the Masonry Chronicles wall
 // (Concrete Masonry Association of California and Nevada; printed wall
 // deflection 7.614/(E t), exact 7.607; compare within 0.2 %).
 func TestSolveJSONKeys(t *testing.T) {

@@ -64,7 +64,7 @@ func TestStoreyJSON(t *testing.T) {
 			t.Errorf("direct shears along %s sum to %g kip, want 120", d, sum[d])
 		}
 	}
-	// x_R = Σ R·x / Σ R over the y-walls (DESIGN §10), from the printed values.
+	// x_R = Σ R·x / Σ R over the y-walls (docs/method.md §9), from the printed values.
 	if xr := moment["y"] / rsum["y"]; math.Abs(xr-s.CenterOfRigidity[0]) > 1e-6 {
 		t.Errorf("center_of_rigidity x %g, want Σ R·x / Σ R = %g", s.CenterOfRigidity[0], xr)
 	}
@@ -246,7 +246,7 @@ func TestStoreyDiaphragmAndBasis(t *testing.T) {
 		if w.RigidityFE == nil || w.RigidityClassic == nil || math.Abs(w.Rigidity-*w.RigidityFE) > 1e-9**w.RigidityFE {
 			t.Fatalf("%s: rigidity %g, FE %v, classic %v", w.Name, w.Rigidity, w.RigidityFE, w.RigidityClassic)
 		}
-		// The classic method overestimates walls with openings (DESIGN §5:
+		// The classic method overestimates walls with openings (docs/method.md §4:
 		// often by tens of percent); it is never below the model here.
 		if *w.RigidityClassic < *w.RigidityFE {
 			t.Errorf("%s: classic %g below FE %g", w.Name, *w.RigidityClassic, *w.RigidityFE)
