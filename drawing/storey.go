@@ -142,7 +142,7 @@ func Storey(in StoreyInput) ([]byte, error) {
 	lines := [][2]string{
 		{"File", s.Path},
 		{"Storey shear", geometry.FormatForce(s.Shear, sys) + " along x and along y in turn"},
-		{"Basis", "classic wall rigidities, rigid diaphragm with torsion"},
+		{"Basis", storeyBasis(s)},
 	}
 	d.frame(sh, titleBlock{
 		Title: s.Title, Drawing: "Storey plan: walls, centres, design shears",
@@ -306,4 +306,20 @@ func storeySide(d *doc, ws *wallSheet, a *storey.Analysis) {
 	}
 	d.close("g")
 	d.scaleBar(x, bot-14, w-12, s.Units, ws.sc)
+}
+
+// storeyBasis says where the walls' rigidities come from and how the
+// diaphragm shares the storey shear.
+func storeyBasis(s *storey.Storey) string {
+	rig := "classic wall rigidities"
+	if s.Basis == geometry.BasisFE {
+		rig = "finite-element wall rigidities"
+	}
+	switch s.Diaphragm {
+	case storey.Flexible:
+		return rig + ", flexible diaphragm (tributary)"
+	case storey.Envelope:
+		return rig + ", envelope of rigid (with torsion) and flexible diaphragms"
+	}
+	return rig + ", rigid diaphragm with torsion"
 }
