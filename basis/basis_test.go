@@ -15,7 +15,7 @@ import (
 func wallFt(l, h float64, ops ...[5]any) *geometry.Wall {
 	ft := func(v float64) geometry.Length { return geometry.Length(v) * geometry.Foot }
 	w := &geometry.Wall{Units: geometry.US, Length: ft(l), Height: ft(h), Thickness: 7.625 * geometry.Inch,
-		Support: geometry.Cantilever,
+		Support:  geometry.Cantilever,
 		Material: geometry.Material{Kind: geometry.ConcreteMasonry, Strength: 2000 * geometry.PSI},
 		Load:     geometry.Load{Shear: 30 * geometry.Kip}}
 	var os []geometry.Opening
@@ -30,7 +30,9 @@ func typical() *geometry.Wall {
 	return wallFt(30, 12, [5]any{"W1", 3.0, 3.0, 5.0, 4.0}, [5]any{"D1", 12.0, 0.0, 4.0, 8.0}, [5]any{"W2", 21.0, 3.0, 6.0, 4.0})
 }
 
-func near(a, b, tol float64) bool { return math.Abs(a-b) <= tol*math.Max(1, math.Max(math.Abs(a), math.Abs(b))) }
+func near(a, b, tol float64) bool {
+	return math.Abs(a-b) <= tol*math.Max(1, math.Max(math.Abs(a), math.Abs(b)))
+}
 
 func TestParse(t *testing.T) {
 	for in, want := range map[string]geometry.Basis{"classic": geometry.BasisClassic, "fe": geometry.BasisFE, " FE ": geometry.BasisFE} {

@@ -9,6 +9,7 @@ import (
 	"slices"
 	"strings"
 
+	"pierwise/basis"
 	"pierwise/demo"
 	"pierwise/geometry"
 	"pierwise/pier"
@@ -20,7 +21,7 @@ import (
 func init() {
 	register(command{
 		name:  "solve",
-		args:  "[FILE[:LAYOUT]...] [--json] [--fe] [--mesh SIZE] [--element q4|qm6]",
+		args:  "[FILE[:LAYOUT]...] [--json] [--basis classic|fe] [--fe] [--mesh SIZE] [--element q4|qm6]",
 		short: "rigidity, pier shares, forces and drift of each wall (the demo wall without FILE)",
 		run:   runSolve,
 	})
@@ -31,6 +32,7 @@ type feFlags struct {
 	on      bool
 	mesh    string
 	element string
+	basis   string // --basis; "" takes the wall file's [analysis] basis
 }
 
 // register adds --fe, --mesh and --element to fs; what names the check in
@@ -39,6 +41,7 @@ func (f *feFlags) register(fs *flag.FlagSet, what string) {
 	fs.BoolVar(&f.on, "fe", false, what)
 	fs.StringVar(&f.mesh, "mesh", "", "maximum element size of the finite-element mesh, e.g. 6in or 150mm (implies --fe)")
 	fs.StringVar(&f.element, "element", "", "finite-element type: qm6 (default) or q4 (implies --fe)")
+	f.registerBasis(fs)
 }
 
 // implied turns the check on when --mesh or --element was given.
@@ -89,6 +92,7 @@ type solved struct {
 	err   error // the classic method's error
 	fe    *fe.Result
 	feErr error
+	b     *basis.Result // the answer of the chosen basis; res, err, fe and feErr are its parts
 }
 
 // solveArg loads FILE[:LAYOUT] (the demo for "") and solves it.
@@ -103,15 +107,20 @@ func solveArg(arg string, ff *feFlags) (*solved, error) {
 		}
 	}
 	s := &solved{arg: arg, wall: w}
-	s.res, s.err = pier.Solve(w)
-	s.err = locate(arg, w, s.err)
-	if ff != nil && ff.on {
-		opt, err := ff.options(w)
-		if err != nil {
+	b, err := ff.chosen(w)
+	if err != nil {
+		return nil, err
+	}
+	var opt basis.Options
+	if ff != nil && (ff.on || b == geometry.BasisFE) {
+		if opt.FE, err = ff.options(w); err != nil {
 			return nil, err
 		}
-		s.fe, s.feErr = fe.Solve(w, s.res, opt)
+		opt.Check = ff.on
 	}
+	s.b = basis.Solve(w, b, opt)
+	s.res, s.err = s.b.Classic, locate(arg, w, s.b.ClassicErr)
+	s.fe, s.feErr = s.b.FE, s.b.FEErr
 	return s, nil
 }
 
@@ -168,11 +177,11 @@ func runSolve(e *env, args []string) error {
 			failed = append(failed, err)
 			continue
 		}
-		if s.err != nil {
-			err := s.err
+		if serr := s.basisErr(); serr != nil {
+			err := serr
 			var le *locatedError
 			if !errors.As(err, &le) {
-				err = fmt.Errorf("%s: %w", displayName(f), s.err)
+				err = fmt.Errorf("%s: %w", displayName(f), serr)
 			}
 			if len(files) > 1 {
 				fmt.Fprintln(e.stderr, "pierwise:", err)
@@ -198,7 +207,11 @@ func runSolve(e *env, args []string) error {
 			if i > 0 {
 				fmt.Fprintln(e.stdout)
 			}
-			writeSolveTable(e.stdout, s)
+			if s.b.IsFE() {
+				writeSolveTableFE(e.stdout, s)
+			} else {
+				writeSolveTable(e.stdout, s)
+			}
 		}
 	}
 	switch {
@@ -237,6 +250,7 @@ func writeSolveTable(out io.Writer, s *solved) {
 		support = "fixed-fixed"
 	}
 	t.Wrapped("  ", fmt.Sprintf("wall %s long × %s high × %s thick, %s, %s", L(w.Length), L(w.Height), L(w.Thickness), support, plural(len(w.Openings()), "opening")))
+	t.Line("  basis: " + basis.Name(s.b.Basis))
 	if s.res == nil {
 		t.Wrapped("  ", fmt.Sprintf("classic method: no answer: %v", s.err))
 		writeFETable(t, s)
@@ -348,6 +362,7 @@ type jsonWall struct {
 	File               string     `json:"file"`
 	Title              string     `json:"title"`
 	Layout             string     `json:"layout"`
+	Basis              string     `json:"basis"` // "classic" or "fe": every number below is of this basis
 	Units              jsonUnits  `json:"units"`
 	Inputs             jsonInputs `json:"inputs"`
 	Error              string     `json:"error,omitempty"`
@@ -361,6 +376,7 @@ type jsonWall struct {
 	Drift              *jsonDrift `json:"drift,omitempty"`
 	Piers              []jsonPier `json:"piers"`
 	Warnings           []string   `json:"warnings"`
+	Check              *jsonCheck `json:"check,omitempty"` // the other basis's rigidity, when it was solved
 	FE                 *jsonFE    `json:"fe,omitempty"`
 }
 
@@ -411,11 +427,11 @@ type jsonPier struct {
 	H                float64     `json:"h"`
 	L                float64     `json:"l"`
 	Support          string      `json:"support"`
-	RigidityRelative float64     `json:"rigidity_relative"`
+	RigidityRelative *float64    `json:"rigidity_relative,omitempty"` // the classic formula's; not on the fe basis
 	Share            float64     `json:"share"`
 	Leaf             bool        `json:"leaf"`
 	Cut              bool        `json:"cut,omitempty"`
-	BendingFraction  float64     `json:"bending_fraction"`
+	BendingFraction  *float64    `json:"bending_fraction,omitempty"` // of the classic formula; not on the fe basis
 	Shear            *float64    `json:"shear,omitempty"`
 	Moment           *float64    `json:"moment,omitempty"`
 	Forces           *jsonForces `json:"forces,omitempty"`
@@ -474,9 +490,12 @@ type jsonFEShare struct {
 func ptr(x float64) *float64 { return &x }
 
 func toJSON(s *solved) jsonWall {
+	if s.b.IsFE() {
+		return toJSONFE(s)
+	}
 	w, u := s.wall, report.UnitsFor(s.wall.Units)
 	j := jsonWall{
-		File: s.arg, Title: w.Title, Layout: w.Layouts[w.Active].Name,
+		File: s.arg, Title: w.Title, Layout: w.Layouts[w.Active].Name, Basis: s.b.Basis.String(),
 		Units:    jsonUnits{Length: u.Coord, Force: u.Force, Deflection: u.Deflection, Rigidity: u.Rigidity, Moment: u.Moment},
 		Inputs:   inputsJSON(w),
 		Piers:    []jsonPier{},
@@ -508,10 +527,10 @@ func toJSON(s *solved) jsonWall {
 				Name: p.Name, Parent: p.Parent,
 				X0: report.Tidy(u.CoordOf(p.Rect.X0)), X1: report.Tidy(u.CoordOf(p.Rect.X1)), Y0: report.Tidy(u.CoordOf(p.Rect.Y0)), Y1: report.Tidy(u.CoordOf(p.Rect.Y1)),
 				H: report.Tidy(u.CoordOf(p.H())), L: report.Tidy(u.CoordOf(p.L())), Support: p.Support.String(),
-				RigidityRelative: p.Rigidity, Share: p.Share, Leaf: p.Leaf, Cut: p.Cut,
+				RigidityRelative: ptr(p.Rigidity), Share: p.Share, Leaf: p.Leaf, Cut: p.Cut, BendingFraction: ptr(0),
 			}
 			if d := p.Parts.Total(); d > 0 {
-				jp.BendingFraction = p.Parts.Bending / d
+				jp.BendingFraction = ptr(p.Parts.Bending / d)
 			}
 			if r.HasLoad && !p.Cut {
 				jp.Shear, jp.Moment = ptr(u.ForceOf(p.Shear)), ptr(u.MomentOf(p.Moment))
@@ -546,6 +565,7 @@ func toJSON(s *solved) jsonWall {
 		}
 		j.FE = f
 	}
+	j.Check = checkJSON(s, u)
 	return j
 }
 
