@@ -334,3 +334,32 @@ func Name(b geometry.Basis) string {
 	}
 	return "classic method"
 }
+
+// View returns the chosen basis's answer in the shape of a classic result,
+// for the views that draw or tabulate a *pier.Result (the elevation sketch,
+// the drawings, the editor): on the classic basis the classic result
+// itself; on the fe basis a copy whose wall numbers (deflection, rigidity,
+// drift) and piers' shares and section forces are the model's, with no
+// classic working (Steps, Split) and no classic warnings. Nil when the
+// chosen basis has no answer, or on the fe basis when the classic method
+// has none. The classic result is not changed.
+func (r *Result) View() *pier.Result {
+	if !r.OK() || r.Classic == nil {
+		return nil
+	}
+	if !r.IsFE() {
+		return r.Classic
+	}
+	v := *r.Classic
+	v.Deflection, v.Rigidity, v.RigidityAbs = r.FE.Deflection, r.FE.Rigidity, r.FE.RigidityAbs
+	v.DeflectionAbs, v.Drift = r.FE.DeflectionAbs, r.FE.Drift
+	v.Split, v.Steps, v.Warnings = pier.Parts{}, nil, nil
+	v.Piers = make([]pier.Pier, len(r.Classic.Piers))
+	for i, p := range r.Piers() {
+		q := r.Classic.Piers[i]
+		q.Share, q.Shear, q.Moment, q.Loads = p.Share, p.Shear, p.Moment, p.Loads
+		q.BandShare = 0
+		v.Piers[i] = q
+	}
+	return &v
+}

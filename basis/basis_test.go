@@ -159,3 +159,26 @@ func TestFEBasisRefused(t *testing.T) {
 }
 
 func feOptions(mesh geometry.Length) fe.Options { return fe.Options{Mesh: mesh} }
+
+// View gives the model's numbers in a classic result's shape and leaves
+// the classic result alone.
+func TestView(t *testing.T) {
+	w := typical()
+	r := Solve(w, geometry.BasisFE, Options{})
+	before := r.Classic.Piers[1].Share
+	v := r.View()
+	if v == r.Classic || v.Rigidity != r.FE.Rigidity || v.DeflectionAbs != r.FE.DeflectionAbs || len(v.Steps) != 0 {
+		t.Fatal("view is not the model's")
+	}
+	for i, p := range r.Piers() {
+		if v.Piers[i].Name != p.Name || v.Piers[i].Share != p.Share || v.Piers[i].Loads != p.Loads {
+			t.Errorf("view pier %s differs", p.Name)
+		}
+	}
+	if r.Classic.Piers[1].Share != before {
+		t.Error("View changed the classic result")
+	}
+	if c := Solve(w, geometry.BasisClassic, Options{}); c.View() != c.Classic {
+		t.Error("the classic view is not the classic result")
+	}
+}

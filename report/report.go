@@ -9,6 +9,7 @@ import (
 	"fmt"
 	"io"
 	"math"
+	"pierwise/basis"
 	"strconv"
 	"strings"
 	"time"
@@ -30,12 +31,15 @@ const Caution = "CAUTION: these results support, and do not replace, the judgeme
 // Input is everything a wall report shows. Result is nil when the classic
 // method failed; Err then says why.
 type Input struct {
-	Path    string // the wall file, "" for the built-in demo
-	Wall    *geometry.Wall
-	Result  *pier.Result
-	Err     error
-	FE      *fe.Result
-	FEErr   error
+	Path   string // the wall file, "" for the built-in demo
+	Wall   *geometry.Wall
+	Result *pier.Result
+	Err    error
+	FE     *fe.Result
+	FEErr  error
+	// Basis is the answer of the chosen basis (its Classic and FE are
+	// Result and FE above); nil is the classic basis.
+	Basis   *basis.Result
 	Now     time.Time
 	Version string
 	Drawing string // the SVG drawing written beside the report, "" for none
@@ -54,9 +58,18 @@ func Wall(out io.Writer, in Input) error {
 	w.KV("Date", in.Now.Format("2006-01-02 15:04 MST"))
 	w.KV("Program", Program(in.Version))
 	w.KV("Units", unitsLine(wall.Units))
-	w.KV("Method", "classic strip method (solid wall − strips with openings + piers)")
+	onFE := in.Basis != nil && in.Basis.IsFE()
+	if onFE {
+		w.KV("Method", "plane-stress finite-element model; the classic strip method as its check")
+	} else {
+		w.KV("Method", "classic strip method (solid wall − strips with openings + piers)")
+	}
+	w.KV("Basis", basisLine(in.Basis))
 	if in.Drawing != "" {
 		w.KV("Drawing", in.Drawing+" (beside this report)")
+	}
+	if onFE {
+		return wallFE(w, in)
 	}
 
 	w.Section("1. Inputs")
@@ -264,6 +277,13 @@ func pierTable(w *Text, res *pier.Result, wall *geometry.Wall) {
 // unfactored, by load case: lateral (V, M, N of the overturning), dead and
 // live (N by tributary width, docs/method.md §6).
 func sectionTable(w *Text, res *pier.Result, wall *geometry.Wall) {
+	u := sectionForces(w, res, wall)
+	w.Wrapped("  ", fmt.Sprintf("Forces in %s and %s. Dead and live: the line loads on each pier's tributary width (its own width and half of each opening beside it) and the wall's weight above the section in that width (common practice; docs/method.md §6).", u.Force, u.Moment))
+}
+
+// sectionForces writes the table of sectionTable (either basis's forces)
+// and returns the report units.
+func sectionForces(w *Text, res *pier.Result, wall *geometry.Wall) Units {
 	u := UnitsFor(wall.Units)
 	w.Wrapped("  ", "Section forces, unfactored, by load case (compression positive; moments positive when they compress the right end):")
 	t := Table{Head: []string{"pier", "section"}, Right: []bool{false, false}}
@@ -298,7 +318,7 @@ func sectionTable(w *Text, res *pier.Result, wall *geometry.Wall) {
 		}
 	}
 	t.Write(w, "  ")
-	w.Wrapped("  ", fmt.Sprintf("Forces in %s and %s. Dead and live: the line loads on each pier's tributary width (its own width and half of each opening beside it) and the wall's weight above the section in that width (common practice; docs/method.md §6).", u.Force, u.Moment))
+	return u
 }
 
 // fixed2 prints a force or moment to two decimals, never as -0.00.

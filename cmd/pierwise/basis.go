@@ -237,4 +237,3 @@ func supportLong(s geometry.Support) string {
 	}
 	return "cantilever"
 }
-

@@ -16,7 +16,7 @@ import (
 func init() {
 	register(command{
 		name:  "report",
-		args:  "[FILE[:LAYOUT]] [-o OUT] [--fe] [--mesh SIZE] [--element q4|qm6]",
+		args:  "[FILE[:LAYOUT]] [-o OUT] [--basis classic|fe] [--fe] [--mesh SIZE] [--element q4|qm6]",
 		short: "write the text report of a wall (or of a storey file) for the calculation package",
 		run:   runReport,
 	})
@@ -54,8 +54,8 @@ func runReport(e *env, args []string) error {
 	var feErr error      // the report is written, but the check asked for failed
 	now := time.Now()
 	if isStorey(arg) {
-		if ff.on {
-			return usagef("--fe, --mesh and --element apply to wall files, not to the storey file %s", arg)
+		if ff.on || ff.basis != "" {
+			return usagef("--fe, --mesh, --element and --basis apply to wall files, not to the storey file %s (the storey file's basis key, or pierwise storey --basis)", arg)
 		}
 		if err := storey.WriteReport(&buf, arg, now, version); err != nil {
 			return err
@@ -65,11 +65,11 @@ func runReport(e *env, args []string) error {
 		if err != nil {
 			return err
 		}
-		in := report.Input{Path: arg, Wall: s.wall, Result: s.res, Err: s.err, FE: s.fe, FEErr: s.feErr, Now: now, Version: version}
+		in := report.Input{Path: arg, Wall: s.wall, Result: s.res, Err: s.err, FE: s.fe, FEErr: s.feErr, Basis: s.b, Now: now, Version: version}
 		if err := report.Wall(&buf, in); err != nil {
 			return err
 		}
-		classicErr = s.err
+		classicErr = s.basisErr()
 		if classicErr == nil && s.feErr != nil {
 			feErr = feFailed(arg, s.feErr)
 		}
