@@ -6,7 +6,6 @@ import (
 	"time"
 
 	"pierwise/drawing"
-	"pierwise/pier"
 	"pierwise/pier/fe"
 	"pierwise/storey"
 )
@@ -31,10 +30,10 @@ func runDraw(e *env, args []string) error {
 	outPath := fs.String("o", "", "write the SVG to this file (atomically) instead of standard output")
 	show := fs.String("show", "shares", "what the piers carry: shares, forces (V and M) or ratios (demand/capacity)")
 	field := fs.String("field", "", "map the finite-element stress over the wall: shear (τxy) or vertical (σy)")
-	basis := fs.String("basis", "", "the model the pier values come from: classic (default) or fe")
 	var ff feFlags
-	fs.StringVar(&ff.mesh, "mesh", "", "maximum element size of the stress map's model, e.g. 6in or 150mm (with --field)")
-	fs.StringVar(&ff.element, "element", "", "finite-element type of the stress map's model: qm6 (default) or q4 (with --field)")
+	ff.registerBasis(fs)
+	fs.StringVar(&ff.mesh, "mesh", "", "maximum element size of the finite-element model, e.g. 6in or 150mm (with --field or --basis fe)")
+	fs.StringVar(&ff.element, "element", "", "finite-element type: qm6 (default) or q4 (with --field or --basis fe)")
 	files, err := parseInterleaved(fs, args)
 	if err != nil {
 		return err
@@ -63,24 +62,18 @@ func runDraw(e *env, args []string) error {
 			return usagef("--field: unknown component %q (use shear or vertical)", *field)
 		}
 	}
-	// The basis hook: the basis work adds "fe" (pier values from the
-	// finite-element model); until then every value is the classic one.
-	switch *basis {
-	case "", "classic":
-	case "fe":
-		return usagef("--basis fe: the finite-element basis is not in this build yet; draw with the classic basis (the default), and use --field to see the finite-element stresses")
-	default:
-		return usagef("--basis: unknown basis %q (use classic or fe)", *basis)
+	// The pier values come from the chosen basis (docs/method.md §5).
+	if ff.basis != "" {
+		if _, err := parseBasisFlag(ff.basis); err != nil {
+			return err
+		}
 	}
 	now := time.Now()
 	var svg []byte
 	var classicErr error // the drawing is written, but the wall has no answer
-	if comp == drawing.NoField && (ff.mesh != "" || ff.element != "") {
-		return usagef("--mesh and --element set up the stress map's model: they go with --field")
-	}
 	if isStorey(arg) {
-		if comp != drawing.NoField || sh != drawing.Shares {
-			return usagef("--show and --field apply to wall files, not to the storey file %s", arg)
+		if comp != drawing.NoField || sh != drawing.Shares || ff.basis != "" {
+			return usagef("--show, --field and --basis apply to wall files, not to the storey file %s (its basis is the storey file's)", arg)
 		}
 		a, err := storey.Load(arg)
 		if err != nil {
@@ -90,19 +83,29 @@ func runDraw(e *env, args []string) error {
 			return err
 		}
 	} else {
-		s, err := solveArg(arg, nil)
+		s, err := solveArg(arg, &ff)
 		if err != nil {
 			return err
 		}
+		if comp == drawing.NoField && !s.b.IsFE() && (ff.mesh != "" || ff.element != "") {
+			return usagef("--mesh and --element set up the finite-element model: they go with --field or --basis fe")
+		}
+		view := s.b.View()
 		in := drawing.WallInput{
-			Path: arg, Wall: s.wall, Basis: "classic strip method", Piers: drawing.LeafPiers(s.res),
+			Path: arg, Wall: s.wall, Basis: "classic strip method", Piers: drawing.LeafPiers(view),
 			Show: sh, Component: comp, Now: now, Version: version,
 		}
-		if s.res != nil {
-			in.HasLoad, in.Warnings = s.res.HasLoad, pier.Texts(s.res.Warnings)
-		} else if s.err != nil {
-			in.NoAnswer = s.err.Error()
-			classicErr = s.err
+		if s.b.IsFE() {
+			in.Basis = "plane-stress finite-element model"
+		}
+		switch {
+		case view != nil:
+			in.HasLoad, in.Warnings = view.HasLoad, s.b.Warnings()
+		case s.basisErr() != nil:
+			in.NoAnswer = s.basisErr().Error()
+			classicErr = s.basisErr()
+		case s.err != nil: // fe basis, no classic decomposition: no piers
+			in.Warnings = append(s.b.Warnings(), "the classic method has no answer here, so no piers are named: "+s.err.Error())
 		}
 		if sh == drawing.Ratios {
 			if pierRatios == nil {
