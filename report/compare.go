@@ -49,8 +49,13 @@ func CompareReport(out io.Writer, c *study.Comparison, info CompareInfo) error {
 		w.KV("Program", Program(info.Version))
 	}
 	w.KV("Units", unitsLine(sys))
-	w.KV("Method", "classic method, relative values with E = 1 and t = 1")
-	if b.FE != nil || a.FE != nil {
+	onFE := b.Basis != nil && b.Basis.IsFE()
+	if onFE {
+		w.KV("Method", "finite-element model (the basis), relative values with E = 1 and t = 1; the classic method as its check")
+	} else {
+		w.KV("Method", "classic method, relative values with E = 1 and t = 1")
+	}
+	if (b.FE != nil || a.FE != nil) && !onFE {
 		w.KV("Check", "plane-stress finite-element model of each layout")
 	}
 
@@ -87,7 +92,7 @@ func CompareReport(out io.Writer, c *study.Comparison, info CompareInfo) error {
 			"the names P1, P2, ... are given left to right in each layout and may differ.")
 	}
 
-	if len(c.Piers) > 0 && (c.Before.FE != nil || c.After.FE != nil) {
+	if len(c.Piers) > 0 && (c.Before.FE != nil || c.After.FE != nil) && !onFE {
 		section("Leaf piers, finite-element shares")
 		ft := &Table{
 			Head:  []string{"before", "after", "classic", "FE", "classic", "FE"},
@@ -248,7 +253,24 @@ func CompareRows(c *study.Comparison) []CompareRow {
 		if b.FE != nil && a.FE != nil {
 			ch = cmpPct(b.FE.Rigidity, a.FE.Rigidity)
 		}
-		add("fe_rigidity_relative", "FE relative rigidity", feVal(b, rel), feVal(a, rel), ch)
+		if b.Basis != nil && b.Basis.IsFE() {
+			// The rows above are the model's: the classic rigidity is the check.
+			cl := func(s *study.Side) (string, float64) {
+				if s.Basis == nil || s.Basis.Classic == nil {
+					return "no answer", 0
+				}
+				return cmpSig(s.Basis.Classic.Rigidity, 4), s.Basis.Classic.Rigidity
+			}
+			sb, vb := cl(b)
+			sa, va := cl(a)
+			ch = ""
+			if vb > 0 && va > 0 {
+				ch = cmpPct(vb, va)
+			}
+			add("classic_rigidity_relative", "Classic relative rigidity", sb, sa, ch)
+		} else {
+			add("fe_rigidity_relative", "FE relative rigidity", feVal(b, rel), feVal(a, rel), ch)
+		}
 		// The classic rigidity against the FE one, per side: only where
 		// both methods answered.
 		diff := func(s *study.Side) string {

@@ -6,6 +6,7 @@ import (
 	"math"
 	"sort"
 
+	"pierwise/basis"
 	"pierwise/geometry"
 	"pierwise/pier"
 	"pierwise/pier/fe"
@@ -23,6 +24,13 @@ type Side struct {
 	// where the classic method has none (staggered openings).
 	FE    *fe.Result
 	FEErr error
+
+	// Basis is the side's answer on the comparison's basis. On the fe
+	// basis Result is its View (the model's rigidity, deflection, drift
+	// and shares in a classic result's shape), so that every number of
+	// the comparison is the model's; Basis.Classic keeps the classic
+	// answer for the check. docs/method.md §5.
+	Basis *basis.Result
 }
 
 // FEShare returns the FE share of the leaf pier called name, and false when
@@ -112,6 +120,10 @@ func (p PierChange) ShareChange() float64 {
 type Options struct {
 	FE        bool       // also run the finite-element check on both sides
 	FEOptions fe.Options // its mesh and element
+	// Basis is where the compared numbers come from: the classic method
+	// (default) or the finite-element model (which then runs on both
+	// sides whatever FE says).
+	Basis geometry.Basis
 }
 
 // Compare solves two walls, or two layouts of one wall (pass copies with
@@ -139,16 +151,21 @@ func CompareWith(a, b *geometry.Wall, opt Options) (*Comparison, error) {
 		}
 		side.Wall = w
 		side.Label = w.Layouts[w.Active].Name
-		side.Result, side.Err = pier.Solve(w)
+		b := basis.Solve(w, opt.Basis, basis.Options{FE: opt.FEOptions, Check: opt.FE})
+		side.Basis = b
+		side.Result, side.Err = b.View(), b.ClassicErr // the classic errors as they are, for their types
+		if b.IsFE() {
+			side.Err = b.Err()
+		}
+		if side.Err == nil && side.Result == nil {
+			// fe basis, no classic decomposition: the model's rigidity
+			// stands in the FE rows, but there are no piers to compare.
+			side.Err = b.ClassicErr
+		}
 		if side.Err != nil {
 			side.Result = nil
 		}
-		if opt.FE {
-			side.FE, side.FEErr = fe.Solve(w, side.Result, opt.FEOptions)
-			if side.FEErr != nil {
-				side.FE = nil
-			}
-		}
+		side.FE, side.FEErr = b.FE, b.FEErr
 	}
 	if c.Before.OK() && c.After.OK() {
 		c.Piers = MatchPiers(c.Before.Wall, c.Before.Result.Leaves(), c.After.Wall, c.After.Result.Leaves())

@@ -19,7 +19,7 @@ import (
 func init() {
 	register(command{
 		name:  "compare",
-		args:  "FILE[:LAYOUT] FILE[:LAYOUT]... [-o OUT] [--fe] [--mesh SIZE] [--element q4|qm6]",
+		args:  "FILE[:LAYOUT] FILE[:LAYOUT]... [-o OUT] [--basis classic|fe] [--fe] [--mesh SIZE] [--element q4|qm6]",
 		short: "compare opening layouts side by side (the first against each of the others; one FILE alone: all its layouts)",
 		run:   runCompare,
 	})
@@ -53,8 +53,13 @@ func runCompare(e *env, args []string) error {
 	}
 	ff.implied()
 	var opt study.Options
-	if ff.on {
-		opt.FE = true
+	// One basis for every layout compared: the flag's, else the first
+	// wall file's.
+	if opt.Basis, err = ff.chosen(walls[0].wall); err != nil {
+		return err
+	}
+	if ff.on || opt.Basis == geometry.BasisFE {
+		opt.FE = ff.on
 		// The mesh of the first wall's file, unless given here.
 		if opt.FEOptions, err = ff.options(walls[0].wall); err != nil {
 			return err
@@ -108,6 +113,9 @@ func runCompare(e *env, args []string) error {
 		fmt.Fprintln(e.stderr, "comparison written to", *outPath)
 	}
 	if len(noAnswer) > 0 {
+		if opt.Basis == geometry.BasisFE {
+			return fmt.Errorf("the finite-element basis has no answer for %s", strings.Join(noAnswer, "; "))
+		}
 		return fmt.Errorf("the classic method has no answer for %s", strings.Join(noAnswer, "; "))
 	}
 	if len(feFailures) > 0 {
