@@ -9,8 +9,10 @@ import (
 	"strconv"
 	"strings"
 
+	"pierwise/basis"
 	"pierwise/geometry"
 	"pierwise/pier"
+	"pierwise/pier/fe"
 )
 
 // Axis is the direction an opening moves in a sweep.
@@ -98,6 +100,28 @@ func (p Point) Pos(a Axis) geometry.Length {
 // unknown opening, a step that is not positive or would make more than
 // MaxPoints positions.
 func Sweep(w *geometry.Wall, name string, axis Axis, step geometry.Length) ([]Point, error) {
+	return SweepWith(w, name, axis, step, SweepOptions{})
+}
+
+// MaxFEPoints bounds a sweep on the fe basis, where every position is a
+// finite-element solve (about 15 ms on a typical wall at the default mesh,
+// docs/method.md §5): 100 positions take a few seconds at most.
+const MaxFEPoints = 100
+
+// SweepOptions choose the basis of a sweep.
+type SweepOptions struct {
+	// Basis is where each position's rigidity and shares come from: the
+	// classic method (default) or the finite-element model, which solves
+	// every position (at most MaxFEPoints of them).
+	Basis geometry.Basis
+	FE    fe.Options // the model's mesh and element on the fe basis
+}
+
+// SweepWith is Sweep on the basis of opt. On the fe basis each point's
+// Result is the basis's View (the model's rigidity and shares), and a step
+// that makes more than MaxFEPoints positions is refused with the smallest
+// step that would do.
+func SweepWith(w *geometry.Wall, name string, axis Axis, step geometry.Length, opt SweepOptions) ([]Point, error) {
 	ops := w.Openings()
 	idx := FindOpening(w, name)
 	if idx < 0 {
@@ -138,6 +162,10 @@ func Sweep(w *geometry.Wall, name string, axis Axis, step geometry.Length) ([]Po
 			FormatStep(step, w.Units), count, MaxPoints)
 	}
 	kmin, kmax := int(fmin), int(fmax)
+	if n := kmax - kmin + 1; opt.Basis == geometry.BasisFE && n > MaxFEPoints {
+		return nil, fmt.Errorf("a step of %s makes %d positions, each a finite-element solve; on the fe basis a sweep has at most %d: use a step of %s or more, or the classic basis",
+			FormatStep(step, w.Units), n, MaxFEPoints, FormatStep(feStep(span, w.Units), w.Units))
+	}
 
 	// One private copy of the active layout's openings, edited in place.
 	work := *w
@@ -161,7 +189,7 @@ func Sweep(w *geometry.Wall, name string, axis Axis, step geometry.Length) ([]Po
 			continue
 		}
 		moved[idx] = m
-		pts = append(pts, solvePoint(&work, m, k == 0))
+		pts = append(pts, solvePoint(&work, m, k == 0, opt))
 	}
 	markWeak(pts)
 	markBest(pts)
@@ -217,9 +245,18 @@ func FindOpening(w *geometry.Wall, name string) int {
 	return slices.IndexFunc(ops, func(o geometry.Opening) bool { return strings.EqualFold(o.Name, name) })
 }
 
-func solvePoint(w *geometry.Wall, o geometry.Opening, current bool) Point {
+func solvePoint(w *geometry.Wall, o geometry.Opening, current bool, opt SweepOptions) Point {
 	p := Point{X: o.X, Y: o.Sill, Current: current}
-	res, err := pier.Solve(w)
+	var res *pier.Result
+	var err error
+	if opt.Basis == geometry.BasisFE {
+		b := basis.Solve(w, opt.Basis, basis.Options{FE: opt.FE})
+		if res, err = b.View(), b.Err(); err == nil && res == nil {
+			err = b.ClassicErr // no classic decomposition: no piers to share
+		}
+	} else {
+		res, err = pier.Solve(w)
+	}
 	if err != nil {
 		p.Err = err
 		return p
@@ -309,4 +346,14 @@ func PierSeries(pts []Point) []string {
 		return cmp.Compare(sum[a]/float64(n[a]), sum[b]/float64(n[b]))
 	})
 	return keys
+}
+
+// feStep is the smallest step, a whole inch or 10 mm, that sweeps span in
+// at most MaxFEPoints positions.
+func feStep(span float64, sys geometry.System) geometry.Length {
+	unit := float64(geometry.Inch)
+	if sys == geometry.SI {
+		unit = float64(10 * geometry.Millimetre)
+	}
+	return geometry.Length(unit * math.Ceil(span/float64(MaxFEPoints-1)/unit+1e-9))
 }

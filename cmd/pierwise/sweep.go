@@ -6,6 +6,7 @@ import (
 	"io"
 	"math"
 
+	"pierwise/basis"
 	"pierwise/geometry"
 	"pierwise/report"
 	"pierwise/study"
@@ -14,7 +15,7 @@ import (
 func init() {
 	register(command{
 		name:  "sweep",
-		args:  "FILE[:LAYOUT] --opening NAME [--step SIZE] [--axis x|y] [--json]",
+		args:  "FILE[:LAYOUT] --opening NAME [--step SIZE] [--axis x|y] [--basis classic|fe] [--mesh SIZE] [--element q4|qm6] [--json]",
 		short: "move one opening step by step along the wall and tabulate rigidity and pier shares",
 		run:   runSweep,
 	})
@@ -26,6 +27,10 @@ func runSweep(e *env, args []string) error {
 	stepText := fs.String("step", "", "the step, a length such as 8in or 200mm (default 8in, or 200mm for SI walls)")
 	axisText := fs.String("axis", "x", "move along x (left edge) or y (sill)")
 	asJSON := fs.Bool("json", false, "print the points as JSON")
+	var ff feFlags
+	ff.registerBasis(fs)
+	fs.StringVar(&ff.mesh, "mesh", "", "maximum element size of the finite-element model, e.g. 6in or 150mm (with --basis fe)")
+	fs.StringVar(&ff.element, "element", "", "finite-element type: qm6 (default) or q4 (with --basis fe)")
 	pos, err := parseInterleaved(fs, args)
 	if err != nil {
 		return err
@@ -57,13 +62,25 @@ func runSweep(e *env, args []string) error {
 			return usagef("sweep: --step: the step must be a positive length, not %q", *stepText)
 		}
 	}
-	pts, err := study.Sweep(w, *opening, axis, step)
+	var opt study.SweepOptions
+	if opt.Basis, err = ff.chosen(w); err != nil {
+		return err
+	}
+	if opt.Basis == geometry.BasisFE {
+		if opt.FE, err = ff.options(w); err != nil {
+			return err
+		}
+	} else if ff.mesh != "" || ff.element != "" {
+		return usagef("sweep: --mesh and --element set up the finite-element model: they go with --basis fe")
+	}
+	pts, err := study.SweepWith(w, *opening, axis, step, opt)
 	if err != nil {
 		return fmt.Errorf("%s: %w", pos[0], err)
 	}
 	if *asJSON {
-		return writeSweepJSON(e.stdout, w, pts)
+		return writeSweepJSON(e.stdout, w, pts, opt.Basis)
 	}
+	fmt.Fprintf(e.stdout, "basis: %s\n", basis.Name(opt.Basis))
 	name := *opening
 	if i := study.FindOpening(w, name); i >= 0 {
 		name = w.Openings()[i].Name // as written in the file, whatever the case typed
@@ -84,13 +101,14 @@ type sweepPointJSON struct {
 	Piers            []sweepPierJSON `json:"piers"`
 	MaxStressPier    string          `json:"max_stress_pier,omitempty"`
 	MaxStress        *float64        `json:"max_stress,omitempty"` // psi or MPa, with a load
+	Basis            string          `json:"basis"` // "classic" or "fe": where this point's numbers come from
 	Current          bool            `json:"current"`
 	Best             bool            `json:"best"`
 	Weak             []string        `json:"weak,omitempty"` // layout warnings here that the current position has not
 	Error            string          `json:"error,omitempty"`
 }
 
-func writeSweepJSON(out io.Writer, w *geometry.Wall, pts []study.Point) error {
+func writeSweepJSON(out io.Writer, w *geometry.Wall, pts []study.Point, b geometry.Basis) error {
 	base := float64(w.Units.BaseLength())
 	stress := float64(w.Units.BaseStress())
 	list := make([]sweepPointJSON, len(pts))
@@ -98,7 +116,7 @@ func writeSweepJSON(out io.Writer, w *geometry.Wall, pts []study.Point) error {
 		// Positions are k steps from the current one in metres; rounding to
 		// a nanometre-scale fraction of the base unit hides the float noise.
 		j := sweepPointJSON{X: sweepRound(float64(p.X) / base), Sill: sweepRound(float64(p.Y) / base), Piers: []sweepPierJSON{},
-			Current: p.Current, Best: p.Best, Weak: p.Weak}
+			Basis: b.String(), Current: p.Current, Best: p.Best, Weak: p.Weak}
 		if p.Err != nil {
 			j.Error = p.Err.Error()
 		} else {
