@@ -138,7 +138,8 @@ func toJSONFE(s *solved) jsonWall {
 	for _, p := range m.Piers {
 		f.Piers = append(f.Piers, jsonFEShare{Name: p.Name, Share: p.Share})
 	}
-	f.Warnings = append(f.Warnings, m.Notes...)
+	f.Warnings = append(f.Warnings, m.Warnings...)
+	f.Notes = m.Notes
 	j.Check = checkJSON(s, u)
 	return j
 }

@@ -479,6 +479,7 @@ type jsonFE struct {
 	DOFs               int           `json:"dofs"`
 	Piers              []jsonFEShare `json:"piers"`
 	Warnings           []string      `json:"warnings"`
+	Notes              []string      `json:"notes,omitempty"` // what the model assumed (top collector, self weight)
 	Error              string        `json:"error,omitempty"`
 }
 

@@ -101,7 +101,7 @@ type sweepPointJSON struct {
 	Piers            []sweepPierJSON `json:"piers"`
 	MaxStressPier    string          `json:"max_stress_pier,omitempty"`
 	MaxStress        *float64        `json:"max_stress,omitempty"` // psi or MPa, with a load
-	Basis            string          `json:"basis"` // "classic" or "fe": where this point's numbers come from
+	Basis            string          `json:"basis"`                // "classic" or "fe": where this point's numbers come from
 	Current          bool            `json:"current"`
 	Best             bool            `json:"best"`
 	Weak             []string        `json:"weak,omitempty"` // layout warnings here that the current position has not
