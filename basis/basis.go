@@ -340,7 +340,8 @@ func Name(b geometry.Basis) string {
 // the drawings, the editor): on the classic basis the classic result
 // itself; on the fe basis a copy whose wall numbers (deflection, rigidity,
 // drift) and piers' shares and section forces are the model's, with no
-// classic working (Steps, Split) and no classic warnings. Nil when the
+// classic working (Steps, Split, the piers' Parts) and no classic
+// warnings; each pier's Rigidity stays the classic formula's. Nil when the
 // chosen basis has no answer, or on the fe basis when the classic method
 // has none. The classic result is not changed.
 func (r *Result) View() *pier.Result {
@@ -358,7 +359,7 @@ func (r *Result) View() *pier.Result {
 	for i, p := range r.Piers() {
 		q := r.Classic.Piers[i]
 		q.Share, q.Shear, q.Moment, q.Loads = p.Share, p.Shear, p.Moment, p.Loads
-		q.BandShare = 0
+		q.BandShare, q.Parts = 0, pier.Parts{} // the classic formula's, not the model's
 		v.Piers[i] = q
 	}
 	return &v

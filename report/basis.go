@@ -111,7 +111,7 @@ func piersFE(w *Text, b *basis.Result, u Units) {
 			name += "*"
 			nested = true
 		}
-		row := []string{name, L(p.H()), L(p.L()), fmt.Sprintf("%.2f", p.Ratio()), supportShort(p.Support), fmt.Sprintf("%.1f %%", 100*p.Share), fmt.Sprintf("%.1f %%", 100*p.Classic.Share)}
+		row := []string{name, L(p.H()), L(p.L()), fmt.Sprintf("%.2f", p.Ratio()), p.Support.String(), fmt.Sprintf("%.1f %%", 100*p.Share), fmt.Sprintf("%.1f %%", 100*p.Classic.Share)}
 		if loaded && !p.Cut {
 			row = append(row, fixed2(u.ForceOf(p.Shear)), fixed2(u.MomentOf(p.Moment)))
 		} else if loaded {

@@ -12,6 +12,7 @@ import (
 	"github.com/charmbracelet/bubbles/key"
 	tea "github.com/charmbracelet/bubbletea"
 
+	"pierwise/basis"
 	"pierwise/drawing"
 	"pierwise/geometry"
 	"pierwise/pier"
@@ -47,6 +48,7 @@ type elevation struct {
 	msgBad bool
 
 	fe feState
+	bs basisState // the basis and what the elevation shows on it (basis.go)
 
 	ask    *choice // the open question (modeAsk)
 	page   *helpPage
@@ -68,6 +70,7 @@ func newElevation(c *common) *elevation {
 	e.help.ShortSeparator = "  "
 	e.page = &helpPage{keys: e.keys, close: []key.Binding{e.keys.Help, c.keys.Back, e.keys.Quit}}
 	e.fe.on = true
+	e.bs.basis = c.doc.wall.Analysis.Basis
 	e.step = defaultStep(c.doc.wall.Units)
 	if len(c.doc.wall.Openings()) > 0 {
 		e.sel = 0
@@ -128,6 +131,7 @@ func (e *elevation) resolve() {
 		e.sel = 0
 	}
 	e.supersede()
+	e.refreshShown()
 }
 
 // say and refuse set the status line; what they show is made visible
@@ -301,6 +305,10 @@ func (e *elevation) programKey(msg tea.KeyMsg) (tea.Cmd, bool) {
 		return e.requestSave("", false), true
 	case key.Matches(msg, k.SaveAs):
 		e.openSaveAs(false)
+	case key.Matches(msg, k.Basis):
+		return e.toggleBasis(), true
+	case key.Matches(msg, k.FE) && e.onFE():
+		e.refuse("the fe basis needs the finite-element model: b switches to the classic basis first")
 	case key.Matches(msg, k.FE):
 		return e.toggleFE(), true
 	case key.Matches(msg, k.Snapshot):
@@ -604,12 +612,25 @@ func (e *elevation) snapshot() tea.Cmd {
 	if e.fe.on && !e.fe.running && !e.fe.stale() {
 		in.FE, in.FEErr = e.fe.res, e.fe.err
 	}
-	draw := drawing.WallInput{Path: d.path, Wall: d.wall, Basis: "classic strip method", Piers: drawing.LeafPiers(e.res),
+	if e.onFE() {
+		if e.bs.stale {
+			e.refuse("no report: the finite-element model is still solving this wall; try again in a moment")
+			return nil
+		}
+		in.Basis = &basis.Result{Basis: geometry.BasisFE, Wall: d.wall, Classic: e.res, ClassicErr: e.solveErr, FE: e.fe.res, FEErr: e.fe.err}
+	}
+	draw := drawing.WallInput{Path: d.path, Wall: d.wall, Basis: "classic strip method", Piers: drawing.LeafPiers(e.bs.shown),
 		Now: in.Now, Version: e.c.version}
-	if e.res != nil {
-		draw.HasLoad, draw.Warnings = e.res.HasLoad, pier.Texts(e.res.Warnings)
-	} else if e.solveErr != nil {
-		draw.NoAnswer = e.solveErr.Error()
+	if e.onFE() {
+		draw.Basis = "plane-stress finite-element model"
+	}
+	if r := e.bs.shown; r != nil {
+		draw.HasLoad, draw.Warnings = r.HasLoad, pier.Texts(e.res.Warnings)
+		if e.onFE() {
+			draw.Warnings = e.fe.res.Warnings
+		}
+	} else if e.bs.shownErr != nil {
+		draw.NoAnswer = e.bs.shownErr.Error()
 	}
 	e.say("writing the report...")
 	return func() tea.Msg {

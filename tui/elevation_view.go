@@ -41,8 +41,8 @@ func (e *elevation) layout() elevLayout {
 	l.areaW = e.width - l.sumW - 1
 	l.sumX = l.areaW + 1
 	rows := 0
-	if e.res != nil {
-		rows = len(e.res.Piers)
+	if r := e.bs.shown; r != nil {
+		rows = len(r.Piers)
 	}
 	want := 2 + rows // header, rows, a blank line above
 	l.topH = max(12, l.bodyH-want)
@@ -74,7 +74,7 @@ func sketchScale(L, H float64, cols, rows int) float64 {
 }
 
 func (e *elevation) grid(l elevLayout) *sketch.Grid {
-	return sketch.Elevation(e.wall(), e.res, l.elevW, l.elevH)
+	return sketch.Elevation(e.wall(), e.bs.shown, l.elevW, l.elevH)
 }
 
 func (e *elevation) view() string {
@@ -119,7 +119,7 @@ func (e *elevation) titleView() string {
 	}
 	lay := fmt.Sprintf("layout %d/%d %s", w.Active+1, len(w.Layouts), quoteVisible(w.Layouts[w.Active].Name))
 	step := "step " + geometry.FormatLength(e.stepLength(), w.Units)
-	s := " " + file + " | " + lay + " | " + step + " | " + title + " | pierwise "
+	s := " " + file + " | " + lay + " | " + step + " | " + e.basisWord() + " | " + title + " | pierwise "
 	return e.c.styles.title.Render(padRight(truncate(s, e.width), e.width))
 }
 
@@ -152,10 +152,11 @@ func (e *elevation) elevationView(l elevLayout) string {
 		tintLabelP[i] = paintOf(st.tint[i].Bold(true))
 	}
 	level := func(p int) int {
-		if e.res == nil || p < 0 || p >= len(e.res.Piers) {
+		r := e.bs.shown
+		if r == nil || p < 0 || p >= len(r.Piers) {
 			return 0
 		}
-		return tintLevel(e.res.Piers[p].Share)
+		return tintLevel(r.Piers[p].Share)
 	}
 
 	var b strings.Builder
@@ -274,11 +275,18 @@ func (e *elevation) summaryView(l elevLayout) string {
 		kv(k, v)
 		extra = append(extra, [2]int{n, len(lines) - n})
 	}
-	lines = append(lines, st.heading.Render("Results")+st.dim.Render(" (classic method)"))
-	if e.solveErr != nil {
+	switch {
+	case !e.onFE():
+		lines = append(lines, st.heading.Render("Results")+st.dim.Render(" (classic method)"))
+	case e.bs.stale:
+		lines = append(lines, st.heading.Render("Results")+st.note.Render(" fe: updating..."))
+	default:
+		lines = append(lines, st.heading.Render("Results")+st.dim.Render(" (finite-element)"))
+	}
+	if e.bs.shownErr != nil {
 		lines = append(lines, st.errText.Render("No answer:"))
-		lines = append(lines, wrap(e.solveErr.Error(), l.sumW)...)
-	} else if r := e.res; r != nil {
+		lines = append(lines, wrap(e.bs.shownErr.Error(), l.sumW)...)
+	} else if r := e.bs.shown; r != nil {
 		if r.RigidityAbs > 0 {
 			kv("rigidity", num(u.RigidityOf(r.RigidityAbs))+" "+u.Rigidity)
 		} else {
@@ -327,8 +335,8 @@ func (e *elevation) summaryView(l elevLayout) string {
 	lines = append(lines, fe...)
 	// Warnings last: on a small screen they are what gets cut (the report
 	// has them all).
-	if e.res != nil {
-		for _, warn := range e.res.Warnings {
+	if r := e.bs.shown; r != nil {
+		for _, warn := range r.Warnings {
 			lines = append(lines, "")
 			lines = append(lines, wrap("! "+warn.Text, l.sumW)...)
 		}
@@ -405,7 +413,10 @@ func (e *elevation) feLines(l elevLayout) []string {
 // leaf piers (the ones that carry forces).
 func (e *elevation) tableView(l elevLayout) string {
 	st := e.c.styles
-	r := e.res
+	r := e.bs.shown
+	if r == nil && e.onFE() {
+		return strings.Join(wrap("No pier table: the piers are those of the classic decomposition, which has no answer for this layout, or the model has not answered yet (see Results).", e.width), "\n")
+	}
 	if r == nil {
 		return strings.Join(wrap("No pier table: the classic method has no answer for this layout (see Results). The FE check still runs.", e.width), "\n")
 	}
@@ -419,7 +430,7 @@ func (e *elevation) tableView(l elevLayout) string {
 	head := []string{"pier", "h", "L", "h/L", "support", "share", "V " + u.Force, "M " + u.Moment, "bend/shear", "FE share"}
 	left := []bool{true, false, false, false, true, true, false, false, false, false}
 	feShare := map[string]float64{}
-	if f := e.fe.res; e.fe.on && f != nil && !e.fe.stale() {
+	if f := e.fe.res; e.fe.on && f != nil && !e.fe.stale() && !e.onFE() {
 		for _, p := range f.Piers {
 			feShare[p.Name] = p.Share
 		}

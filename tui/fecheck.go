@@ -128,6 +128,7 @@ func (e *elevation) feMessage(msg tea.Msg) (tea.Cmd, bool) {
 			return nil, true // an answer for a wall that has changed since
 		}
 		e.fe.res, e.fe.err, e.fe.resID, e.fe.running = msg.res, msg.err, msg.id, false
+		e.feAnswered(msg.id)
 		return nil, true
 	}
 	return nil, false

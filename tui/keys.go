@@ -16,6 +16,7 @@ type KeyMap struct {
 	NextLayout, PrevLayout             key.Binding
 	NewLayout, RenameLayout, DelLayout key.Binding
 	FE                                 key.Binding // the finite-element check on/off
+	Basis                              key.Binding // the basis: classic method or finite-element model
 	Snapshot                           key.Binding // write a text report next to the file
 	Help, Quit                         key.Binding
 
@@ -54,6 +55,7 @@ func newKeyMap() KeyMap {
 		RenameLayout: b("rename layout", "r"),
 		DelLayout:    b("delete layout", "X"),
 		FE:           b("finite-element check on/off", "f"),
+		Basis:        b("basis classic/fe", "b"),
 		Snapshot:     b("write report snapshot", "p"),
 		Help:         b("help", "?"),
 		Quit:         key.NewBinding(key.WithKeys("q"), key.WithHelp("q", "quit")),
@@ -82,7 +84,7 @@ func (k KeyMap) FullHelp() [][]key.Binding {
 	groups := [][]key.Binding{
 		{k.Next, k.Prev, k.Left, k.Right, k.Up, k.Down, k.Narrower, k.Wider, k.Taller, k.Shorter, k.Step},
 		{k.AddDoor, k.AddWindow, k.Delete, k.Copy, k.EditOpening, k.EditWall, k.Undo, k.Redo},
-		{k.Save, k.SaveAs, k.NextLayout, k.PrevLayout, k.NewLayout, k.RenameLayout, k.DelLayout, k.FE, k.Snapshot, k.Help, k.Quit},
+		{k.Save, k.SaveAs, k.NextLayout, k.PrevLayout, k.NewLayout, k.RenameLayout, k.DelLayout, k.FE, k.Basis, k.Snapshot, k.Help, k.Quit},
 	}
 	if len(k.screens) > 0 {
 		groups = append(groups, k.screens)

@@ -77,6 +77,7 @@ func toJSONFE(s *solved) jsonWall {
 	j := jsonWall{
 		File: s.arg, Title: w.Title, Layout: w.Layouts[w.Active].Name, Basis: r.Basis.String(),
 		Units:    jsonUnits{Length: u.Coord, Force: u.Force, Deflection: u.Deflection, Rigidity: u.Rigidity, Moment: u.Moment},
+		Inputs:   inputsJSON(w),
 		Piers:    []jsonPier{},
 		Warnings: []string{},
 	}

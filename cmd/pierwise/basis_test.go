@@ -1,18 +1,14 @@
 package main
 
 import (
-	"bytes"
 	"encoding/json"
-	"flag"
 	"math"
-	"os"
-	"path/filepath"
 	"strconv"
 	"strings"
 	"testing"
-)
 
-var updateBasis = flag.Bool("update", false, "rewrite the golden files in testdata/")
+	"pierwise/internal/testkit"
+)
 
 // round4 rounds every number of a decoded JSON value to 4 significant
 // digits, so that the golden file holds what an engineer reads, not the
@@ -38,24 +34,6 @@ func round4(v any) any {
 		}
 	}
 	return v
-}
-
-func golden(t *testing.T, name string, got []byte) {
-	t.Helper()
-	path := filepath.Join("testdata", name)
-	if *updateBasis {
-		if err := os.WriteFile(path, got, 0o644); err != nil {
-			t.Fatal(err)
-		}
-		return
-	}
-	want, err := os.ReadFile(path)
-	if err != nil {
-		t.Fatalf("%v (run go test -update)", err)
-	}
-	if !bytes.Equal(got, want) {
-		t.Errorf("output differs from %s (check it, then go test -update):\n%s", path, got)
-	}
 }
 
 // solve --basis fe --json on the Masonry Chronicles wall (Concrete Masonry
@@ -119,7 +97,7 @@ func TestSolveFEBasisJSON(t *testing.T) {
 	var v any
 	_ = json.Unmarshal([]byte(out), &v)
 	pretty, _ := json.MarshalIndent(round4(v), "", "  ")
-	golden(t, "solve_nested_fe.golden", append(pretty, '\n'))
+	testkit.Golden(t, "solve_nested_fe.golden", string(pretty)+"\n")
 }
 
 // The classic basis is today's JSON with "basis" added; with --fe its

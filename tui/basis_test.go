@@ -1,0 +1,86 @@
+package tui
+
+import (
+	"context"
+	"strings"
+	"testing"
+
+	"pierwise/geometry"
+	"pierwise/pier"
+)
+
+// TestBasisKey: b switches the basis; the header names it; on the fe basis
+// the panel says it is updating until the model answers for this wall, then
+// shows the model's rigidity and shares; an edit makes it stale again; f
+// cannot turn the model off under the fe basis.
+func TestBasisKey(t *testing.T) {
+	ed := newEditor(t, annex(), "", 80, 24)
+	e := ed.elev()
+	if v := ed.view(); !strings.Contains(v, "basis classic") || !strings.Contains(v, "(classic method)") {
+		t.Fatalf("classic basis not shown:\n%s", v)
+	}
+	ed.press(runes("b"))
+	if v := ed.view(); !strings.Contains(v, "basis fe") || !strings.Contains(v, "fe: updating...") {
+		t.Fatalf("fe basis before the model answers:\n%s", v)
+	}
+	ed.press(runFE(context.Background(), make(chan struct{}), e.fe.id, ed.wall(), e.res)())
+	if e.fe.res == nil {
+		t.Fatalf("FE: %v", e.fe.err)
+	}
+	v := ed.view()
+	if !strings.Contains(v, "(finite-element)") || strings.Contains(v, "updating") {
+		t.Errorf("fe answer not shown as current:\n%s", v)
+	}
+	if want := "relative    " + num(e.fe.res.Rigidity); !strings.Contains(v, want) {
+		t.Errorf("the panel lacks the model's rigidity %q:\n%s", want, v)
+	}
+	// Every number shown is the model's: the sketch's and the table's
+	// shares are the model's leaf shares.
+	for _, p := range e.fe.res.Piers {
+		got, ok := findShare(e.bs.shown, p.Name)
+		if !ok || got != p.Share {
+			t.Errorf("%s: shown share %g, model %g", p.Name, got, p.Share)
+		}
+	}
+	checkGolden(t, "basis_fe_80x24.golden", v)
+
+	// An edit: the old answer is shown on the new piers, marked updating.
+	ed.press(runes("l"))
+	if v := ed.view(); !strings.Contains(v, "fe: updating...") || e.bs.shown == nil {
+		t.Errorf("after an edit on the fe basis:\n%s", v)
+	}
+	ed.press(runFE(context.Background(), make(chan struct{}), e.fe.id, ed.wall(), e.res)())
+	if v := ed.view(); strings.Contains(v, "updating") {
+		t.Errorf("still updating after the answer:\n%s", v)
+	}
+	ed.press(runes("f"))
+	if !e.fe.on || !e.msgBad {
+		t.Error("f turned the model off under the fe basis")
+	}
+	ed.press(runes("b"))
+	if v := ed.view(); !strings.Contains(v, "basis classic") || !strings.Contains(v, "(classic method)") || e.bs.shown != e.res {
+		t.Errorf("back on the classic basis:\n%s", v)
+	}
+}
+
+// A wall whose file says [analysis] basis = "fe" opens on the fe basis.
+func TestBasisFromWall(t *testing.T) {
+	w := annex()
+	w.Analysis.Basis = geometry.BasisFE
+	ed := newEditor(t, w, "", 100, 30)
+	if !ed.elev().onFE() || !strings.Contains(ed.view(), "basis fe") {
+		t.Error("the wall's basis is not the editor's")
+	}
+}
+
+func findShare(r *pier.Result, name string) (float64, bool) {
+	if r == nil {
+		return 0, false
+	}
+	for _, p := range r.Leaves() {
+		if p.Name == name {
+			return p.Share, true
+		}
+	}
+	return 0, false
+}
