@@ -78,3 +78,48 @@ func benchMove(b *testing.B, w *geometry.Wall) {
 		}
 	}
 }
+
+// BenchmarkKeyToResultFE is a key on the fe basis as the editor does it,
+// without the debounce (feDelay) that waits for the keys to settle: the
+// key moves an opening (the classic re-solve, whose decomposition names
+// the piers), the finite-element solve of the wall with every pier's
+// forces, its answer taken in and the screen redrawn at 80×24. The wall is
+// an invented 30 ft × 12 ft wall with a door and two windows at the
+// default mesh. Target: under 20 ms (docs/method.md §5).
+func BenchmarkKeyToResultFE(b *testing.B) {
+	ft := geometry.Foot
+	w := NewWall(geometry.US)
+	w.Length, w.Height = 30*ft, 12*ft
+	w.Load.Shear = 30 * geometry.Kip
+	w.Gravity = geometry.Gravity{Dead: 15_000, Live: 6_000} // N/m
+	w.Analysis.Basis = geometry.BasisFE
+	w.Layouts[0].Openings = []geometry.Opening{
+		{Name: "W1", X: 3 * ft, Sill: 3 * ft, Width: 5 * ft, Height: 4 * ft},
+		{Name: "D1", X: 12 * ft, Width: 4 * ft, Height: 8 * ft},
+		{Name: "W2", X: 21 * ft, Sill: 3 * ft, Width: 6 * ft, Height: 4 * ft},
+	}
+	if err := w.Validate(); err != nil {
+		b.Fatal(err)
+	}
+	m := newModel(w, Options{})
+	m.Update(tea.WindowSizeMsg{Width: 80, Height: 24})
+	e := m.stack[0].(*elevation)
+	if !e.onFE() || e.res == nil {
+		b.Fatalf("not on the fe basis with a classic answer: %v", e.solveErr)
+	}
+	right, left := runes("l"), runes("h")
+	b.ReportAllocs()
+	for i := 0; b.Loop(); i++ {
+		k := right
+		if i%2 == 1 {
+			k = left
+		}
+		m.Update(k)
+		m.Update(runFE(e.fe.id, e.wall(), e.res)())
+		if e.bs.stale || e.fe.res == nil {
+			b.Fatalf("no current answer: %v", e.fe.err)
+		}
+		_ = m.View()
+	}
+	b.ReportMetric(float64(e.fe.res.Elements), "elements")
+}
