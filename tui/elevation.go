@@ -308,7 +308,7 @@ func (e *elevation) programKey(msg tea.KeyMsg) (tea.Cmd, bool) {
 	case key.Matches(msg, k.Basis):
 		return e.toggleBasis(), true
 	case key.Matches(msg, k.FE) && e.onFE():
-		e.refuse("the fe basis needs the finite-element model: b switches to the classic basis first")
+		e.refuse("the fe basis needs the model (b: classic basis)")
 	case key.Matches(msg, k.FE):
 		return e.toggleFE(), true
 	case key.Matches(msg, k.Snapshot):

@@ -438,8 +438,13 @@ func (e *elevation) tableView(l elevLayout) string {
 	if len(feShare) == 0 {
 		head, left = head[:9], left[:9]
 	}
+	if e.onFE() {
+		head[8] = "" // the bending/shear split is the classic formula's
+	}
 	if e.width < 100 { // short headers so that every column fits 80 cells
-		head[8] = "b/s"
+		if !e.onFE() {
+			head[8] = "b/s"
+		}
 		if len(head) > 9 {
 			head[9] = "FE"
 		}
