@@ -341,15 +341,20 @@ func Name(b geometry.Basis) string {
 // itself; on the fe basis a copy whose wall numbers (deflection, rigidity,
 // drift) and piers' shares and section forces are the model's, with no
 // classic working (Steps, Split, the piers' Parts) and no classic
-// warnings; each pier's Rigidity stays the classic formula's. Nil when the
-// chosen basis has no answer, or on the fe basis when the classic method
-// has none. The classic result is not changed.
+// warnings; each pier's Rigidity stays the classic formula's. On the fe
+// basis without a classic decomposition it has the model's wall numbers and
+// no piers. Nil when the chosen basis has no answer. The classic result is
+// not changed.
 func (r *Result) View() *pier.Result {
-	if !r.OK() || r.Classic == nil {
+	if !r.OK() {
 		return nil
 	}
 	if !r.IsFE() {
 		return r.Classic
+	}
+	if r.Classic == nil {
+		return &pier.Result{Deflection: r.FE.Deflection, Rigidity: r.FE.Rigidity, RigidityAbs: r.FE.RigidityAbs,
+			HasLoad: r.Wall.Load.Shear > 0, DeflectionAbs: r.FE.DeflectionAbs, Drift: r.FE.Drift, Overturning: r.Overturning()}
 	}
 	v := *r.Classic
 	v.Deflection, v.Rigidity, v.RigidityAbs = r.FE.Deflection, r.FE.Rigidity, r.FE.RigidityAbs

@@ -143,6 +143,9 @@ func TestStaggered(t *testing.T) {
 	if _, ok := f.Check(); ok {
 		t.Error("a check with no classic answer")
 	}
+	if v := f.View(); v == nil || v.Rigidity != f.FE.Rigidity || len(v.Piers) != 0 || v.Drift != f.FE.Drift {
+		t.Errorf("view without a classic decomposition: %+v", v)
+	}
 }
 
 // A model that cannot be built: the fe basis says so, the classic answers.

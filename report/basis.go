@@ -49,7 +49,7 @@ func wallFE(w *Text, in Input) error {
 	}
 
 	n := 4
-	if view != nil {
+	if b.Classic != nil {
 		w.Section(fmt.Sprintf("%d. Piers (finite-element model)", n))
 		piersFE(w, b, u)
 		n++

@@ -157,17 +157,15 @@ func CompareWith(a, b *geometry.Wall, opt Options) (*Comparison, error) {
 		if b.IsFE() {
 			side.Err = b.Err()
 		}
-		if side.Err == nil && side.Result == nil {
-			// fe basis, no classic decomposition: the model's rigidity
-			// stands in the FE rows, but there are no piers to compare.
-			side.Err = b.ClassicErr
-		}
 		if side.Err != nil {
 			side.Result = nil
 		}
 		side.FE, side.FEErr = b.FE, b.FEErr
 	}
-	if c.Before.OK() && c.After.OK() {
+	// The piers are the classic decomposition's on both bases: without it
+	// (fe basis, staggered openings) a side has the model's wall numbers
+	// but no piers to match.
+	if c.Before.OK() && c.After.OK() && c.Before.Basis.Classic != nil && c.After.Basis.Classic != nil {
 		c.Piers = MatchPiers(c.Before.Wall, c.Before.Result.Leaves(), c.After.Wall, c.After.Result.Leaves())
 	}
 	return c, nil

@@ -45,10 +45,7 @@ func (e *elevation) refreshShown() {
 	switch {
 	case fresh:
 		r := &basis.Result{Basis: geometry.BasisFE, Wall: e.wall(), Classic: e.res, ClassicErr: e.solveErr, FE: f}
-		b.shown = r.View()
-		if b.shown == nil && e.solveErr == nil {
-			b.shown = e.res
-		}
+		b.shown, b.shownErr = r.View(), nil
 	case e.fe.err != nil && answered:
 		b.shown, b.shownErr = nil, &basis.NoAnswerError{Basis: geometry.BasisFE, Err: e.fe.err}
 	default:

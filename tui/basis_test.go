@@ -84,3 +84,32 @@ func findShare(r *pier.Result, name string) (float64, bool) {
 	}
 	return 0, false
 }
+
+// Staggered openings: the classic method has no answer, so on the fe basis
+// the panel shows the model's wall numbers and the table says why it has no
+// piers (the layout of study's TestCompareFEWhereClassicFails).
+func TestBasisFEStaggered(t *testing.T) {
+	ft := geometry.Foot
+	w := annex()
+	w.Length, w.Height = 10*ft, 10*ft
+	w.Layouts = []geometry.Layout{{Name: "staggered", Openings: []geometry.Opening{
+		{Name: "A", X: 0, Sill: 2 * ft, Width: 6 * ft, Height: 2 * ft},
+		{Name: "B", X: 4 * ft, Sill: 6 * ft, Width: 6 * ft, Height: 2 * ft},
+		{Name: "C", X: 7 * ft, Sill: 4 * ft, Width: 1 * ft, Height: 2 * ft},
+	}}}
+	w.Active = 0
+	w.Analysis.Basis = geometry.BasisFE
+	ed := newEditor(t, w, "", 80, 24)
+	e := ed.elev()
+	if e.solveErr == nil {
+		t.Fatal("the classic method solved the staggered layout")
+	}
+	ed.press(runFE(context.Background(), make(chan struct{}), e.fe.id, ed.wall(), e.res)())
+	v := ed.view()
+	if e.fe.res == nil || !strings.Contains(v, "relative    "+num(e.fe.res.Rigidity)) || strings.Contains(v, "No answer") {
+		t.Errorf("the model's answer is not shown:\n%s", v)
+	}
+	if !strings.Contains(v, "No pier table") {
+		t.Errorf("the table does not say why it has no piers:\n%s", v)
+	}
+}

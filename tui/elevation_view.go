@@ -414,7 +414,7 @@ func (e *elevation) feLines(l elevLayout) []string {
 func (e *elevation) tableView(l elevLayout) string {
 	st := e.c.styles
 	r := e.bs.shown
-	if r == nil && e.onFE() {
+	if e.onFE() && (r == nil || len(r.Piers) == 0) {
 		return strings.Join(wrap("No pier table: the piers are those of the classic decomposition, which has no answer for this layout, or the model has not answered yet (see Results).", e.width), "\n")
 	}
 	if r == nil {

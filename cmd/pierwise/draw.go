@@ -101,11 +101,12 @@ func runDraw(e *env, args []string) error {
 		switch {
 		case view != nil:
 			in.HasLoad, in.Warnings = view.HasLoad, s.b.Warnings()
+			if s.err != nil { // fe basis, no classic decomposition: no piers
+				in.Warnings = append(in.Warnings, "the classic method has no answer here, so no piers are named: "+s.err.Error())
+			}
 		case s.basisErr() != nil:
 			in.NoAnswer = s.basisErr().Error()
 			classicErr = s.basisErr()
-		case s.err != nil: // fe basis, no classic decomposition: no piers
-			in.Warnings = append(s.b.Warnings(), "the classic method has no answer here, so no piers are named: "+s.err.Error())
 		}
 		if sh == drawing.Ratios {
 			if pierRatios == nil {
