@@ -65,6 +65,7 @@ func (e *elevation) refreshShown() {
 // toggleBasis switches between the classic and the finite-element basis.
 // The fe basis needs the model, so it turns the check on.
 func (e *elevation) toggleBasis() tea.Cmd {
+	defer func() { e.c.basis = e.bs.basis }()
 	if e.onFE() {
 		e.bs.basis = geometry.BasisClassic
 		e.refreshShown()

@@ -7,6 +7,8 @@ import (
 
 	"pierwise/geometry"
 	"pierwise/pier"
+	"pierwise/pier/fe"
+	"pierwise/study"
 )
 
 // TestBasisKey: b switches the basis; the header names it; on the fe basis
@@ -111,5 +113,33 @@ func TestBasisFEStaggered(t *testing.T) {
 	}
 	if !strings.Contains(v, "No pier table") {
 		t.Errorf("the table does not say why it has no piers:\n%s", v)
+	}
+}
+
+// The sweep screen follows the editor's basis: on fe each position is the
+// model's answer, as study.SweepWith gives it.
+func TestSweepScreenFEBasis(t *testing.T) {
+	c := cmpCommon("annex.toml")
+	c.basis = geometry.BasisFE
+	s := sweepRun(t, c, 80, 24)
+	s.update(cmpKey("tab")) // W1
+	s.update(s.start()())
+	w := c.doc.wall
+	want, err := study.SweepWith(w, "W1", study.AlongX, steps(geometry.US)[defaultStep(geometry.US)],
+		study.SweepOptions{Basis: geometry.BasisFE, FE: fe.Options{Mesh: w.Check.Mesh, Element: w.Check.Element}})
+	if err != nil || s.err != nil {
+		t.Fatalf("%v / %v", err, s.err)
+	}
+	if len(s.pts) != len(want) || len(want) == 0 {
+		t.Fatalf("%d points, study.SweepWith gives %d", len(s.pts), len(want))
+	}
+	classic, _ := study.Sweep(w, "W1", study.AlongX, steps(geometry.US)[defaultStep(geometry.US)])
+	for i := range want {
+		if s.pts[i].Rigidity != want[i].Rigidity {
+			t.Errorf("point %d: rigidity %g, the model %g", i, s.pts[i].Rigidity, want[i].Rigidity)
+		}
+		if s.pts[i].Err == nil && classic[i].Err == nil && s.pts[i].Rigidity == classic[i].Rigidity {
+			t.Errorf("point %d: the classic rigidity on the fe basis", i)
+		}
 	}
 }

@@ -142,11 +142,14 @@ func (s *compareScreen) recompute() tea.Cmd {
 	}
 	s.feID++
 	s.feRunning = false
-	if !s.feOn || s.err != nil {
+	onFE := s.c.basis == geometry.BasisFE
+	if (!s.feOn && !onFE) || s.err != nil {
 		return nil
 	}
 	s.feRunning = true
-	id, opt := s.feID, study.Options{FE: true, FEOptions: fe.Options{Mesh: w.Check.Mesh, Element: w.Check.Element}}
+	// On the fe basis the background answer is the comparison on the
+	// model (docs/method.md §5); the classic one shows until it arrives.
+	id, opt := s.feID, study.Options{FE: s.feOn, Basis: s.c.basis, FEOptions: fe.Options{Mesh: w.Check.Mesh, Element: w.Check.Element}}
 	return func() tea.Msg {
 		c, err := study.CompareWith(a, b, opt)
 		if c != nil {

@@ -71,6 +71,7 @@ func newElevation(c *common) *elevation {
 	e.page = &helpPage{keys: e.keys, close: []key.Binding{e.keys.Help, c.keys.Back, e.keys.Quit}}
 	e.fe.on = true
 	e.bs.basis = c.doc.wall.Analysis.Basis
+	c.basis = e.bs.basis
 	e.step = defaultStep(c.doc.wall.Units)
 	if len(c.doc.wall.Openings()) > 0 {
 		e.sel = 0

@@ -5,6 +5,8 @@ import (
 
 	"github.com/charmbracelet/bubbles/key"
 	tea "github.com/charmbracelet/bubbletea"
+
+	"pierwise/geometry"
 )
 
 // screen is one full-window view of the editor: the elevation, the storey,
@@ -66,6 +68,7 @@ type common struct {
 	now           func() time.Time // the clock; fixed in tests
 	fe            *feGate          // the one finite-element check in flight
 	version       string           // the program's version, for reports
+	basis         geometry.Basis   // the editor's basis (the elevation's b key); the sweep and comparison follow it
 
 	// tick is tea.Tick; tests that run commands replace it so that a timer
 	// (the FE check's delay) is never mistaken for work, however slow the

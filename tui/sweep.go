@@ -12,6 +12,7 @@ import (
 	"github.com/charmbracelet/x/ansi"
 
 	"pierwise/geometry"
+	"pierwise/pier/fe"
 	"pierwise/report"
 	"pierwise/study"
 )
@@ -144,8 +145,9 @@ func (s *sweepScreen) start() tea.Cmd {
 	s.opening = min(max(s.opening, 0), len(ops)-1)
 	s.running = true
 	id, w, name, axis, step := s.id, s.wall(), ops[s.opening].Name, s.axis, s.stepLength()
+	opt := study.SweepOptions{Basis: s.c.basis, FE: fe.Options{Mesh: w.Check.Mesh, Element: w.Check.Element}}
 	return func() tea.Msg {
-		pts, err := study.Sweep(w, name, axis, step)
+		pts, err := study.SweepWith(w, name, axis, step, opt)
 		return sweepDoneMsg{id, pts, err}
 	}
 }
