@@ -24,7 +24,8 @@ type basisState struct {
 	shownErr error        // why the basis has no answer
 	stale    bool         // fe basis: shown is of the wall before the last edit, or not yet solved
 
-	feID int        // the FE check id the latest FE answer belongs to
+	file geometry.Basis // the wall's own [analysis] basis when last seen: a change there (the wall form) is followed
+	feID int            // the FE check id the latest FE answer belongs to
 	last *fe.Result // the latest FE answer, shown stale on the next wall
 }
 
@@ -35,6 +36,14 @@ func (e *elevation) onFE() bool { return e.bs.basis == geometry.BasisFE }
 // and the latest finite-element answer. It is called after every solve.
 func (e *elevation) refreshShown() {
 	b := &e.bs
+	if f := e.wall().Analysis.Basis; f != b.file {
+		// The wall's own basis changed (an edit of the wall's settings,
+		// an undo): the editor follows it; b switches the view only.
+		b.file, b.basis, e.c.basis = f, f, f
+		if f == geometry.BasisFE {
+			e.fe.on = true // the edit's re-solve schedules the model
+		}
+	}
 	b.shown, b.shownErr, b.stale = e.res, e.solveErr, false
 	if !e.onFE() {
 		return

@@ -143,3 +143,22 @@ func TestSweepScreenFEBasis(t *testing.T) {
 		}
 	}
 }
+
+// A change of the wall's own basis (as the wall form or an undo makes it)
+// is followed; b alone switches the view and leaves the wall as it is.
+func TestBasisFollowsTheWall(t *testing.T) {
+	ed := newEditor(t, annex(), "", 100, 30)
+	e := ed.elev()
+	ed.press(runes("b"))
+	if !e.onFE() || ed.wall().Analysis.Basis != geometry.BasisClassic || ed.m.c.doc.dirty() {
+		t.Fatal("b changed the wall or did not switch the view")
+	}
+	ed.press(runes("b"))
+	if err := ed.m.c.doc.change(func(w *geometry.Wall) error { w.Analysis.Basis = geometry.BasisFE; return nil }); err != nil {
+		t.Fatal(err)
+	}
+	ed.elev().afterEdit()
+	if !e.onFE() || !e.fe.on || ed.m.c.basis != geometry.BasisFE {
+		t.Error("the wall's new basis is not followed")
+	}
+}

@@ -70,7 +70,7 @@ func newElevation(c *common) *elevation {
 	e.help.ShortSeparator = "  "
 	e.page = &helpPage{keys: e.keys, close: []key.Binding{e.keys.Help, c.keys.Back, e.keys.Quit}}
 	e.fe.on = true
-	e.bs.basis = c.doc.wall.Analysis.Basis
+	e.bs.basis, e.bs.file = c.doc.wall.Analysis.Basis, c.doc.wall.Analysis.Basis
 	c.basis = e.bs.basis
 	e.step = defaultStep(c.doc.wall.Units)
 	if len(c.doc.wall.Openings()) > 0 {
