@@ -26,7 +26,7 @@ type basisState struct {
 
 	file geometry.Basis // the wall's own [analysis] basis when last seen: a change there (the wall form) is followed
 	feID int            // the FE check id the latest FE answer belongs to
-	last *fe.Result // the latest FE answer, shown stale on the next wall
+	last *fe.Result     // the latest FE answer, shown stale on the next wall
 }
 
 // onFE reports whether the editor is on the finite-element basis.
