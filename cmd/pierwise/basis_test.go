@@ -174,3 +174,29 @@ func TestReportAndTableFEBasis(t *testing.T) {
 		t.Errorf("classic table does not say its basis:\n%s", out)
 	}
 }
+
+// compare --basis fe: the compared numbers are the model's (the relative
+// rigidity row is the one solve --basis fe prints for each layout) and the
+// classic rigidity is the check row.
+func TestCompareFEBasis(t *testing.T) {
+	code, out, errs := runCLI("compare", "../../testdata/walls/variants.toml", "--basis", "fe")
+	if code != exitOK {
+		t.Fatalf("exit %d: %s", code, errs)
+	}
+	for _, want := range []string{"finite-element model (the basis)", "Classic relative rigidity", "local codes govern"} {
+		if !strings.Contains(out, want) {
+			t.Errorf("comparison lacks %q", want)
+		}
+	}
+	for _, layout := range []string{"as drawn", "door moved"} {
+		_, js, _ := runCLI("solve", "../../testdata/walls/variants.toml:"+layout, "--basis", "fe", "--json")
+		var w map[string]any
+		if err := json.Unmarshal([]byte(js), &w); err != nil {
+			t.Fatal(err)
+		}
+		rel := strconv.FormatFloat(w["rigidity_relative"].(float64), 'g', 4, 64)
+		if !strings.Contains(out, rel) {
+			t.Errorf("%s: the model's relative rigidity %s is not in the comparison", layout, rel)
+		}
+	}
+}
