@@ -308,6 +308,8 @@ func (s *compareScreen) view() string {
 		lines = append(lines, st.note.Render(truncate(s.msg, s.width)))
 	case len(w.Layouts) < 2:
 		lines = append(lines, st.note.Render(truncate("This wall has one layout: press esc, then n to make a variant.", s.width)))
+	case s.feRunning && s.c.basis == geometry.BasisFE:
+		lines = append(lines, st.note.Render(truncate("fe basis: updating... (classic numbers until the model answers)", s.width)))
 	case s.feRunning:
 		lines = append(lines, st.note.Render("finite-element check running..."))
 	default:
