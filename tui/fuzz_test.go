@@ -23,6 +23,7 @@ var fuzzKeys = []tea.KeyMsg{
 	runes("e"), runes("E"), runes("u"), runes("U"), runes("]"), runes("["), runes("n"), runes("r"), runes("X"),
 	runes("f"), runes("?"), runes("q"), {Type: tea.KeyEsc}, {Type: tea.KeyEnter}, runes("0"), runes("9"),
 	runes("ft"), {Type: tea.KeyBackspace}, {Type: tea.KeyCtrlU}, runes("y"), {Type: tea.KeyCtrlC},
+	runes("b"), // the basis
 }
 
 // fuzzWall is a wall made from the fuzzer's bytes: sizes from a few feet
