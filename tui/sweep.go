@@ -260,7 +260,7 @@ func (s *sweepScreen) snapshot() tea.Cmd {
 func (s *sweepScreen) view() string {
 	st := s.c.styles
 	w := s.wall()
-	title := " pierwise | sweep | " + geometry.Visible(w.Title) + " "
+	title := " pierwise | sweep | basis " + s.c.basis.String() + " | " + geometry.Visible(w.Title) + " "
 	lines := []string{st.title.Render(padRight(truncate(title, s.width), s.width))}
 	if s.showHelp {
 		lines = append(lines, "", st.heading.Render("Sweep an opening"), "")
