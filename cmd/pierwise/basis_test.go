@@ -200,3 +200,34 @@ func TestCompareFEBasis(t *testing.T) {
 		}
 	}
 }
+
+// The wall file's [analysis] basis is the default and --basis overrides
+// it; an unknown basis in the file is an input error naming the file, the
+// line and the key.
+func TestBasisFromFile(t *testing.T) {
+	basisOf := func(args ...string) string {
+		t.Helper()
+		code, out, errs := runCLI(append([]string{"solve"}, append(args, "--json")...)...)
+		if code != exitOK {
+			t.Fatalf("%v: exit %d: %s", args, code, errs)
+		}
+		var w map[string]any
+		if err := json.Unmarshal([]byte(out), &w); err != nil {
+			t.Fatal(err)
+		}
+		return w["basis"].(string)
+	}
+	if b := basisOf("testdata/basis-fe.toml"); b != "fe" {
+		t.Errorf("the file's basis: %s", b)
+	}
+	if b := basisOf("testdata/basis-fe.toml", "--basis", "classic"); b != "classic" {
+		t.Errorf("--basis classic over the file's fe: %s", b)
+	}
+	if b := basisOf("../../testdata/walls/door.toml"); b != "classic" {
+		t.Errorf("no [analysis] basis: %s", b)
+	}
+	code, _, errs := runCLI("solve", "testdata/basis-bad.toml")
+	if code != exitInput || !strings.Contains(errs, "basis-bad.toml:8: analysis.basis") || !strings.Contains(errs, "finite") {
+		t.Errorf("exit %d, %q; want 1 naming basis-bad.toml:8: analysis.basis", code, errs)
+	}
+}
