@@ -31,7 +31,7 @@ func Wall() *geometry.Wall {
 		},
 		Load:      geometry.Load{Shear: 45 * geometry.Kip},
 		Stiffness: geometry.Stiffness{Flexure: 1, Shear: 1},
-		Drift:     geometry.Drift{Cd: 3.5, Ie: 1, Preset: "masonry-cantilever", Limit: 0.010},
+		Drift:     geometry.Drift{Cd: 3.5, Ie: 1, Preset: "masonry-other", Limit: 0.007},
 		Layouts: []geometry.Layout{
 			{Name: "main", Openings: main},
 			{Name: "wide entrance", Openings: wide},

@@ -68,10 +68,11 @@
 //	flexure = 0.35
 //	shear = 1.0
 //
-//	[drift]                  # δ = cd·δe/ie against limit·h; default 1, 1, no limit
-//	cd = 4.0
-//	ie = 1.0
+//	[drift]                  # δ = cd·δe/ie against limit·h_sx; no verdict without cd and ie
+//	cd = 4.0                 # C_d, no default
+//	ie = 1.0                 # I_e, no default
 //	limit = "masonry-cantilever"   # a DriftPresets name, or a number such as 0.01
+//	storey_height = "10ft"   # h_sx; default the wall's height
 //
 //	[check]                  # finite-element check
 //	mesh = "6in"             # largest element size; default chosen by the solver

@@ -55,7 +55,6 @@ func ExampleMarshal() {
 		Material:  geometry.Material{Kind: geometry.ConcreteMasonry, Strength: 12 * geometry.Megapascal},
 		Load:      geometry.Load{Shear: 80 * geometry.Kilonewton},
 		Stiffness: geometry.Stiffness{Flexure: 1, Shear: 1},
-		Drift:     geometry.Drift{Cd: 1, Ie: 1},
 		Layouts: []geometry.Layout{{Name: "main", Openings: []geometry.Opening{
 			{Name: "D1", X: 1, Width: 0.9, Height: 2.1},
 		}}},

@@ -144,7 +144,6 @@ func randomWall(rng *rand.Rand) *Wall {
 			Strength: Stress(val(5e6, 4e7)),
 		},
 		Stiffness: Stiffness{Flexure: 1, Shear: 1},
-		Drift:     Drift{Cd: 1, Ie: 1},
 	}
 	if w.Material.Kind == Custom || rng.IntN(4) == 0 {
 		w.Material.Modulus = Stress(val(5e9, 3e10))
@@ -244,7 +243,7 @@ func TestParseValidText(t *testing.T) {
 		t.Fatalf("unexpected layouts %+v", w.Layouts)
 	}
 	// Defaults of geometry/doc.go and the README's wall file.
-	if w.Units != US || w.Support != Cantilever || w.Stiffness != (Stiffness{1, 1}) || w.Drift != (Drift{Cd: 1, Ie: 1}) {
+	if w.Units != US || w.Support != Cantilever || w.Stiffness != (Stiffness{1, 1}) || w.Drift != (Drift{}) {
 		t.Errorf("defaults not applied: %+v %+v", w.Stiffness, w.Drift)
 	}
 }

@@ -89,9 +89,15 @@ func FuzzParse(f *testing.F) {
 		if err := w.Validate(); err != nil {
 			t.Fatalf("Parse accepted a wall that Validate refuses: %v", err)
 		}
-		for _, v := range []float64{float64(w.Length), float64(w.Height), float64(w.Thickness), w.Stiffness.Flexure, w.Stiffness.Shear, w.Drift.Cd, w.Drift.Ie} {
+		for _, v := range []float64{float64(w.Length), float64(w.Height), float64(w.Thickness), w.Stiffness.Flexure, w.Stiffness.Shear} {
 			if !(v > 0) || math.IsInf(v, 0) {
 				t.Fatalf("non-positive or non-finite value %g in %+v", v, w)
+			}
+		}
+		// C_d, I_e and h_sx are 0 when not given (docs/method.md §7).
+		for _, v := range []float64{w.Drift.Cd, w.Drift.Ie, float64(w.Drift.StoreyHeight)} {
+			if !(v >= 0) || math.IsInf(v, 0) {
+				t.Fatalf("negative or non-finite drift setting %g in %+v", v, w)
 			}
 		}
 		for _, lay := range w.Layouts {

@@ -136,11 +136,15 @@ var Settings = []Setting{
 		Get: func(w *Wall) Value { return Value{Num: w.Stiffness.Shear} }, Set: func(w *Wall, v Value) { w.Stiffness.Shear = v.Num },
 		Check: checkModifier},
 
-	{Key: "drift.cd", Kind: KindNumber, Label: "Cd", Help: "deflection amplification", Default: Value{Num: 1}, Write: WriteWithTable, Form: 120,
+	// C_d and I_e have no default (docs/method.md §7): 0 is "not given",
+	// and no drift verdict is made without them.
+	{Key: "drift.cd", Kind: KindNumber, Label: "Cd", Help: "deflection amplification; blank: not given, no drift verdict", Form: 120,
 		Get: func(w *Wall) Value { return Value{Num: w.Drift.Cd} }, Set: func(w *Wall, v Value) { w.Drift.Cd = v.Num },
+		InFile: positiveFactor,
 		Check: checkFactor},
-	{Key: "drift.ie", Kind: KindNumber, Label: "Ie", Help: "importance factor", Default: Value{Num: 1}, Write: WriteWithTable, Form: 130,
+	{Key: "drift.ie", Kind: KindNumber, Label: "Ie", Help: "importance factor; blank: not given, no drift verdict", Form: 130,
 		Get: func(w *Wall) Value { return Value{Num: w.Drift.Ie} }, Set: func(w *Wall, v Value) { w.Drift.Ie = v.Num },
+		InFile: positiveFactor,
 		Check: checkFactor},
 	{Key: "drift.limit", Kind: KindDriftLimit, Label: "drift limit", Help: "a fraction (0.01) or " + strings.Join([]string{DriftPresets[0].Name, DriftPresets[1].Name}, ", ") + ", ...",
 		Form: 110,
@@ -148,6 +152,15 @@ var Settings = []Setting{
 		Set:  func(w *Wall, v Value) { w.Drift.Limit, w.Drift.Preset = v.Num, v.Text },
 		Check: func(_ *Setting, w *Wall, l *ErrorList) {
 			w.validateDriftLimit(l)
+		}},
+	{Key: "drift.storey_height", Kind: KindLength, Label: "storey height h_sx", Help: "blank: the wall's height", Example: [2]string{`"10ft"`, `"3m"`}, Form: 135,
+		Get: func(w *Wall) Value { return Value{Num: float64(w.Drift.StoreyHeight)} }, Set: func(w *Wall, v Value) { w.Drift.StoreyHeight = Length(v.Num) },
+		Check: checkStoreyHeight,
+		InFile: func(v Value) string {
+			if v.Num <= 0 {
+				return "must be greater than zero (leave it out to use the wall's height)"
+			}
+			return ""
 		}},
 
 	{Key: "check.mesh", Kind: KindLength, Label: "FE mesh size", Help: "blank: the default size", Example: [2]string{`"6in"`, `"150mm"`}, Form: 160,
@@ -667,7 +680,30 @@ func checkModifier(s *Setting, w *Wall, l *ErrorList) {
 }
 
 func checkFactor(s *Setting, w *Wall, l *ErrorList) {
-	numberIn(l, s.Key, s.Get(w).Num, 0, maxFactor)
+	if v := s.Get(w).Num; v != 0 { // 0: not given (docs/method.md §7)
+		numberIn(l, s.Key, v, 0, maxFactor)
+	}
+}
+
+// positiveFactor refuses a C_d or I_e of zero or less written in a file
+// (the wall takes 0 as "not given").
+func positiveFactor(v Value) string {
+	if v.Num <= 0 {
+		return "must be greater than zero (leave it out when it is not known: no drift verdict is made without it)"
+	}
+	return ""
+}
+
+// checkStoreyHeight: h_sx is 0 (the wall's height) or a plausible length.
+func checkStoreyHeight(s *Setting, w *Wall, l *ErrorList) {
+	switch h := float64(w.Drift.StoreyHeight); {
+	case !finite(h):
+		l.add(s.Key, "is not a finite number")
+	case h < 0:
+		l.add(s.Key, "must be greater than zero (leave it out to use the wall's height)")
+	case h > float64(maxSize):
+		l.add(s.Key, "is implausibly large ("+FormatLength(w.Drift.StoreyHeight, w.Units)+"); check the unit")
+	}
 }
 
 func checkMesh(s *Setting, w *Wall, l *ErrorList) {

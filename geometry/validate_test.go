@@ -15,7 +15,7 @@ func testWall() *Wall {
 		Units: US, Length: 20 * ft, Height: 10 * ft, Thickness: 7.625 * Inch,
 		Material:  Material{Kind: ConcreteMasonry, Strength: 2000 * PSI},
 		Stiffness: Stiffness{1, 1},
-		Drift:     Drift{Cd: 1, Ie: 1},
+
 		Layouts: []Layout{{Name: "main", Openings: []Opening{
 			{Name: "W1", X: 2 * ft, Sill: 3 * ft, Width: 4 * ft, Height: 4 * ft},
 			{Name: "W2", X: 10 * ft, Sill: 3 * ft, Width: 4 * ft, Height: 4 * ft},
@@ -73,7 +73,10 @@ func TestValidate(t *testing.T) {
 		{"NaN shear", func(w *Wall) { w.Load.Shear = Force(nan) }, "load.shear"},
 		{"negative modifier", func(w *Wall) { w.Stiffness.Flexure = -0.35 }, "stiffness.flexure"},
 		{"zero modifier", func(w *Wall) { w.Stiffness.Shear = 0 }, "stiffness.shear"},
-		{"zero cd", func(w *Wall) { w.Drift.Cd = 0 }, "drift.cd"},
+		{"negative cd", func(w *Wall) { w.Drift.Cd = -1 }, "drift.cd"},
+		{"cd not given", func(w *Wall) { w.Drift.Cd = 0 }, ""},
+		{"negative storey height", func(w *Wall) { w.Drift.StoreyHeight = -1 }, "drift.storey_height"},
+		{"NaN storey height", func(w *Wall) { w.Drift.StoreyHeight = Length(nan) }, "drift.storey_height"},
 		{"NaN ie", func(w *Wall) { w.Drift.Ie = nan }, "drift.ie"},
 		{"unknown preset", func(w *Wall) { w.Drift.Preset, w.Drift.Limit = "steel", 0.01 }, "drift.limit"},
 		{"preset with other limit", func(w *Wall) { w.Drift.Preset, w.Drift.Limit = "masonry-cantilever", 0.02 }, "drift.limit"},

@@ -54,12 +54,18 @@ type Stiffness struct {
 	Shear   float64
 }
 
-// Drift holds the storey-drift check settings: δ = Cd·δe/Ie against Limit·h.
+// Drift holds the storey-drift check settings: δ = Cd·δe/Ie against
+// Limit·h_sx (docs/method.md §7). Cd and Ie have no default: zero means not
+// given, and no drift verdict is made without both.
 type Drift struct {
-	Cd     float64 // deflection amplification factor; default 1
-	Ie     float64 // importance factor; default 1
+	Cd     float64 // deflection amplification factor C_d; 0 = not given
+	Ie     float64 // importance factor I_e; 0 = not given
 	Preset string  // name of a limit preset ("" when Limit was typed)
-	Limit  float64 // allowable drift as a fraction of the height; 0 = no check
+	Limit  float64 // allowable drift as a fraction of the storey height; 0 = no check
+
+	// StoreyHeight is h_sx, the storey height below the level whose drift
+	// is checked; 0 = the wall's height.
+	StoreyHeight Length
 }
 
 // LineLoad is a force per length along the top of a wall, in N/m.

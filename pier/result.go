@@ -102,13 +102,35 @@ func (p Pier) H() float64     { return p.Rect.H() }
 func (p Pier) L() float64     { return p.Rect.W() }
 func (p Pier) Ratio() float64 { return p.Rect.H() / p.Rect.W() }
 
-// DriftCheck is the storey-drift check of the wall's top deflection.
+// DriftCheck is the storey-drift check of the wall's top deflection
+// (docs/method.md §7). Without C_d and I_e there is no design drift and no
+// verdict: Missing says what is missing, Design and Ratio are zero.
 type DriftCheck struct {
 	Elastic   geometry.Length // δe, the top deflection under the wall's shear
-	Design    geometry.Length // δ = Cd·δe/Ie
-	Allowable geometry.Length // Limit·h; zero when no limit is set
-	Ratio     float64         // δ/h
-	OK        bool            // δ ≤ allowable (true when no limit is set)
+	Design    geometry.Length // δ = Cd·δe/Ie; zero when Missing
+	Height    geometry.Length // h_sx: [drift] storey_height, or the wall's height
+	Allowable geometry.Length // Limit·h_sx; zero when no limit is set
+	Ratio     float64         // δ/h_sx
+	OK        bool            // δ ≤ allowable (true when no verdict is made)
+	Missing   string          // "C_d", "I_e", "C_d and I_e" when not given; "" otherwise
+}
+
+// Judged reports whether the check gives a verdict: a limit is set and
+// C_d and I_e are given.
+func (d DriftCheck) Judged() bool { return d.Allowable > 0 && d.Missing == "" }
+
+// Verdict is the check's verdict in words: "OK", "EXCEEDS THE LIMIT", or
+// why there is none ("no verdict: C_d and I_e not given", "no limit set").
+func (d DriftCheck) Verdict() string {
+	switch {
+	case d.Missing != "":
+		return "no verdict: " + d.Missing + " not given"
+	case d.Allowable <= 0:
+		return "no limit set"
+	case d.OK:
+		return "OK"
+	}
+	return "EXCEEDS THE LIMIT"
 }
 
 // Result is the classic method's answer for one wall layout. The report and
@@ -192,11 +214,23 @@ const (
 	WarnFixedTop     = "fixed top"
 	WarnOnePier      = "one pier in its band"
 	WarnMergedEdges  = "merged opening edges" // SnapEdges
+
+	// Drift warnings (docs/method.md §7): a limit preset whose row of
+	// ASCE 7-22 Table 12.12-1 does not fit the wall, a single top load on a
+	// wall with openings at more than one level, gross-section stiffness.
+	WarnDriftRow     = "drift limit row"
+	WarnDriftStoreys = "drift over storeys"
+	WarnDriftGross   = "drift on gross sections"
 )
 
 // LayoutWarning reports whether a warning kind comes from the layout of the
-// openings (where they are), rather than from the method as a whole (fixed
-// piers, a fixed top), which every layout of the wall shares.
+// openings (where they are) weakening the method's assumptions, rather than
+// from the method as a whole (fixed piers, a fixed top), which every layout
+// of the wall shares, or from the drift check's settings.
 func LayoutWarning(kind string) bool {
-	return kind != WarnFixedPiers && kind != WarnFixedTop
+	switch kind {
+	case WarnFixedPiers, WarnFixedTop, WarnDriftRow, WarnDriftStoreys, WarnDriftGross:
+		return false
+	}
+	return true
 }

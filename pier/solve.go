@@ -311,6 +311,7 @@ func Solve(w *geometry.Wall) (*Result, error) {
 		return nil, err
 	}
 	s.assumptions(w, ops)
+	s.driftNotes(w, root)
 	r.Warnings = append(merged, r.Warnings...)
 	if err := r.checkFinite(); err != nil {
 		return nil, err
@@ -557,18 +558,14 @@ func checkWall(w *geometry.Wall) ([]opening, error) {
 }
 
 // CheckDrift checks the top deflection δe of wall w under its shear against
-// the wall's drift settings: δ = Cd·δe/Ie against the limit times the
-// height. The classic result and the finite-element check share it.
+// the wall's drift settings (docs/method.md §7): δ = Cd·δe/Ie (ASCE 7-22
+// §12.8.6) against the limit times h_sx (Table 12.12-1). Without C_d or
+// I_e it makes no verdict and says which is missing. The classic result and
+// the finite-element check share it.
 func CheckDrift(w *geometry.Wall, elastic geometry.Length) (DriftCheck, error) {
 	dr := w.Drift
 	cd, ie := dr.Cd, dr.Ie
-	if cd == 0 {
-		cd = 1
-	}
-	if ie == 0 {
-		ie = 1
-	}
-	if !(cd > 0) || math.IsInf(cd, 0) || !(ie > 0) || math.IsInf(ie, 0) {
+	if cd < 0 || math.IsNaN(cd) || math.IsInf(cd, 0) || ie < 0 || math.IsNaN(ie) || math.IsInf(ie, 0) {
 		return DriftCheck{}, fmt.Errorf("pier: drift factors Cd and Ie must be positive numbers, got %g and %g", cd, ie)
 	}
 	limit := dr.Limit
@@ -583,14 +580,33 @@ func CheckDrift(w *geometry.Wall, elastic geometry.Length) (DriftCheck, error) {
 		return DriftCheck{}, fmt.Errorf("pier: the drift limit must be a positive fraction of the height, got %g", limit)
 	}
 	h := float64(w.Height)
-	design := cd * float64(elastic) / ie
-	return DriftCheck{
+	if hs := float64(dr.StoreyHeight); hs > 0 && !math.IsInf(hs, 0) {
+		h = hs
+	} else if hs != 0 {
+		return DriftCheck{}, fmt.Errorf("pier: the storey height h_sx must be a positive length, got %g m", hs)
+	}
+	c := DriftCheck{
 		Elastic:   elastic,
-		Design:    geometry.Length(design),
+		Height:    geometry.Length(h),
 		Allowable: geometry.Length(limit * h),
-		Ratio:     design / h,
-		OK:        limit == 0 || design <= limit*h,
-	}, nil
+		OK:        true,
+	}
+	switch {
+	case cd == 0 && ie == 0:
+		c.Missing = "C_d and I_e"
+	case cd == 0:
+		c.Missing = "C_d"
+	case ie == 0:
+		c.Missing = "I_e"
+	}
+	if c.Missing != "" {
+		return c, nil
+	}
+	design := cd * float64(elastic) / ie
+	c.Design = geometry.Length(design)
+	c.Ratio = design / h
+	c.OK = limit == 0 || design <= limit*h
+	return c, nil
 }
 
 // checkFinite is the last guard of the promise that a Result holds no NaN

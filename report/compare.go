@@ -231,6 +231,8 @@ func CompareRows(c *study.Comparison) []CompareRow {
 				return "no answer"
 			case !r.HasLoad || r.Drift.Allowable <= 0:
 				return cmpDash
+			case r.Drift.Missing != "":
+				return "no verdict: no " + r.Drift.Missing
 			case r.Drift.OK:
 				return fmt.Sprintf("OK, limit %s", cmpSig(u.DeflectionOf(r.Drift.Allowable), 3))
 			}
@@ -426,7 +428,7 @@ func CompareWarnings(c *study.Comparison) []string {
 			}
 		}
 	}
-	if rb, ra := c.Before.Result, c.After.Result; rb != nil && ra != nil && rb.HasLoad && ra.HasLoad && rb.Drift.Allowable > 0 {
+	if rb, ra := c.Before.Result, c.After.Result; rb != nil && ra != nil && rb.HasLoad && ra.HasLoad && rb.Drift.Judged() && ra.Drift.Judged() {
 		if rb.Drift.OK && !ra.Drift.OK {
 			out = append(out, fmt.Sprintf("The drift check passes for %s and fails for %s.", c.Before.Label, c.After.Label))
 		} else if !rb.Drift.OK && ra.Drift.OK {

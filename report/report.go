@@ -147,7 +147,7 @@ func inputs(w *Text, wall *geometry.Wall, res *pier.Result) {
 		w.KV("Load", "none given (relative values only)")
 	}
 	w.KV("Gravity", gravityLine(wall))
-	drift, source, _ := strings.Cut(driftLine(wall.Drift), "\n")
+	drift, source, _ := strings.Cut(driftLine(wall.Drift, wall.Units), "\n")
 	w.KV("Drift", drift)
 	if source != "" {
 		w.KV("", source)
@@ -383,13 +383,17 @@ func inUnits(w *Text, wall *geometry.Wall, u Units, rigidity float64, loaded boo
 		return
 	}
 	w.KV("Deflection", fmt.Sprintf("δe = %s %s under V = %s", Number(u.DeflectionOf(defl)), u.Deflection, geometry.FormatForce(wall.Load.Shear, wall.Units)))
-	w.KV("Drift", fmt.Sprintf("δ = Cd·δe/Ie = %s %s = %s h", Number(u.DeflectionOf(d.Design)), u.Deflection, Fraction(d.Ratio)))
+	hs := "h_sx = " + geometry.FormatLength(d.Height, wall.Units)
+	if wall.Drift.StoreyHeight == 0 {
+		hs += " (the wall's height; no storey_height given)"
+	}
+	if d.Missing != "" {
+		w.KV("Drift", fmt.Sprintf("no design drift and no verdict: %s not given ([drift] cd and ie; ASCE 7-22 §12.8.6: δ = C_d·δe/I_e)", d.Missing))
+		return
+	}
+	w.KV("Drift", fmt.Sprintf("δ = C_d·δe/I_e = %s %s = %s h_sx, %s", Number(u.DeflectionOf(d.Design)), u.Deflection, Fraction(d.Ratio), hs))
 	if d.Allowable > 0 {
-		verdict := "OK"
-		if !d.OK {
-			verdict = "EXCEEDS THE LIMIT"
-		}
-		w.KV("Drift limit", fmt.Sprintf("%s %s (%s h): %s", Number(u.DeflectionOf(d.Allowable)), u.Deflection, Fraction(wall.Drift.Limit), verdict))
+		w.KV("Drift limit", fmt.Sprintf("%s %s (%s h_sx): %s", Number(u.DeflectionOf(d.Allowable)), u.Deflection, Fraction(wall.Drift.Limit), d.Verdict()))
 	} else {
 		w.KV("Drift limit", "none set")
 	}
@@ -495,11 +499,21 @@ func materialLine(m geometry.Material, sys geometry.System) string {
 	return s
 }
 
-func driftLine(d geometry.Drift) string {
-	if d.Limit <= 0 {
-		return fmt.Sprintf("Cd = %g, Ie = %g, no limit set", orOne(d.Cd), orOne(d.Ie))
+func driftLine(d geometry.Drift, sys geometry.System) string {
+	factor := func(name string, v float64) string {
+		if v == 0 {
+			return name + " not given"
+		}
+		return fmt.Sprintf("%s = %g", name, v)
 	}
-	s := fmt.Sprintf("Cd = %g, Ie = %g, limit %s h", orOne(d.Cd), orOne(d.Ie), Fraction(d.Limit))
+	s := factor("C_d", d.Cd) + ", " + factor("I_e", d.Ie)
+	if d.StoreyHeight > 0 {
+		s += ", h_sx = " + geometry.FormatLength(d.StoreyHeight, sys)
+	}
+	if d.Limit <= 0 {
+		return s + ", no limit set"
+	}
+	s += fmt.Sprintf(", limit %s h_sx", Fraction(d.Limit))
 	if d.Preset == "" {
 		return s
 	}

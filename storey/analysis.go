@@ -493,7 +493,7 @@ func (a *Analysis) loadWall(w *Wall) error {
 		}
 		w.Piers = append(w.Piers, pf)
 	}
-	if s.Basis == geometry.BasisClassic && res.HasLoad && res.Drift.Allowable > 0 && !res.Drift.OK {
+	if s.Basis == geometry.BasisClassic && res.HasLoad && res.Drift.Judged() && !res.Drift.OK {
 		u := report.UnitsFor(s.Units)
 		a.Warnings = append(a.Warnings, fmt.Sprintf("%s: under its design shear the drift δ = Cd·δe/Ie = %.3g %s exceeds the limit of its wall file, %.3g %s",
 			w.Name, u.DeflectionOf(res.Drift.Design), u.Deflection, u.DeflectionOf(res.Drift.Allowable), u.Deflection))

@@ -268,7 +268,7 @@ func (a *Analysis) JSON() JSON {
 		}
 		if w.Loaded != nil {
 			jw.Warnings = append(jw.Warnings, pier.Texts(w.Loaded.Warnings)...)
-			if dr := w.Loaded.Drift; s.Basis == geometry.BasisClassic && w.Loaded.HasLoad && dr.Allowable > 0 {
+			if dr := w.Loaded.Drift; s.Basis == geometry.BasisClassic && w.Loaded.HasLoad && dr.Judged() {
 				jw.Drift = &JSONDrift{Design: report.Tidy(u.DeflectionOf(dr.Design)), Ratio: report.Tidy(dr.Ratio), Allowable: report.Tidy(u.DeflectionOf(dr.Allowable)), OK: dr.OK}
 			}
 		}

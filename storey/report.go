@@ -417,7 +417,6 @@ func driftSection(w *report.Text, a *Analysis, u report.Units, n int) {
 	}
 }
 
-// CaseName names case i of d, or "direct" for -1.
 // DriftLine states a wall's drift check under its design shear, with the
 // wall file's own Cd, Ie and limit (ASCE 7-22 §12.8.6: δ = Cd·δe/Ie), or ""
 // when the wall file sets no limit.
@@ -426,14 +425,14 @@ func DriftLine(res *pier.Result, u report.Units) string {
 		return ""
 	}
 	d := res.Drift
-	verdict := "OK"
-	if !d.OK {
-		verdict = "EXCEEDS THE LIMIT"
+	if d.Missing != "" {
+		return "drift: " + d.Verdict() + " in its wall file"
 	}
-	return fmt.Sprintf("design drift δ = Cd·δe/Ie = %.4g %s (%.5f h), limit %.4g %s: %s",
-		u.DeflectionOf(d.Design), u.Deflection, d.Ratio, u.DeflectionOf(d.Allowable), u.Deflection, verdict)
+	return fmt.Sprintf("design drift δ = Cd·δe/Ie = %.4g %s (%.5f h_sx), limit %.4g %s: %s",
+		u.DeflectionOf(d.Design), u.Deflection, d.Ratio, u.DeflectionOf(d.Allowable), u.Deflection, d.Verdict())
 }
 
+// CaseName names case i of d, or "direct" for -1.
 func CaseName(d *Distribution, i int) string {
 	if i == CaseFlexible {
 		return "flexible"

@@ -122,7 +122,7 @@ func annex() *geometry.Wall {
 		Material:  geometry.Material{Kind: geometry.ConcreteMasonry, Strength: 2000 * geometry.PSI},
 		Load:      geometry.Load{Shear: 45 * geometry.Kip},
 		Stiffness: geometry.Stiffness{Flexure: 1, Shear: 1},
-		Drift:     geometry.Drift{Cd: 3.5, Ie: 1, Preset: "masonry-cantilever", Limit: 0.010},
+		Drift:     geometry.Drift{Cd: 3.5, Ie: 1, Preset: "masonry-other", Limit: 0.007},
 		Layouts:   []geometry.Layout{{Name: "main", Openings: main}, {Name: "wide entrance", Openings: wide}},
 	}
 }

@@ -303,15 +303,18 @@ func (e *elevation) summaryView(l elevLayout) string {
 		}
 		if r.HasLoad && r.DeflectionAbs > 0 {
 			d := r.Drift
-			if d.Allowable > 0 {
+			switch {
+			case d.Missing != "":
+				kv("drift", st.dim.Render("no verdict: "+d.Missing+" not given"))
+			case d.Allowable > 0:
 				verdict := st.pass.Render("PASS")
 				rel := "<="
 				if !d.OK {
 					verdict, rel = st.fail.Render("FAIL"), ">"
 				}
 				kv("drift", num3(u.DeflectionOf(d.Design))+" "+rel+" "+num3(u.DeflectionOf(d.Allowable))+" "+u.Deflection+" "+verdict)
-				kvExtra("", st.dim.Render(fmt.Sprintf("Cd %s, limit %s h", input(max(w.Drift.Cd, 1)), input(w.Drift.Limit))))
-			} else {
+				kvExtra("", st.dim.Render(fmt.Sprintf("Cd %s, limit %s h_sx", input(w.Drift.Cd), input(w.Drift.Limit))))
+			default:
 				kv("drift", num3(u.DeflectionOf(d.Design))+" "+u.Deflection+st.dim.Render(" (no limit)"))
 			}
 		}

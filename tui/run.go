@@ -120,7 +120,6 @@ func NewWall(sys geometry.System) *geometry.Wall {
 		Support:   geometry.Cantilever,
 		Material:  geometry.Material{Kind: geometry.ConcreteMasonry, Strength: 2000 * geometry.PSI},
 		Stiffness: geometry.Stiffness{Flexure: 1, Shear: 1},
-		Drift:     geometry.Drift{Cd: 1, Ie: 1},
 		Layouts:   []geometry.Layout{{Name: "main"}},
 	}
 	if sys == geometry.SI {
