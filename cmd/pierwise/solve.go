@@ -266,15 +266,16 @@ func writeSolveTable(out io.Writer, s *solved) {
 	}
 	if r.HasLoad {
 		d := r.Drift
-		t.Line(fmt.Sprintf("  V = %s: δe = %s %s; δ = Cd·δe/Ie = %s %s = %s h", geometry.FormatForce(w.Load.Shear, w.Units),
-			report.Number(u.DeflectionOf(r.DeflectionAbs)), u.Deflection, report.Number(u.DeflectionOf(d.Design)), u.Deflection, report.Fraction(d.Ratio)))
+		if d.Missing != "" {
+			t.Line(fmt.Sprintf("  V = %s: δe = %s %s; no design drift: %s not given", geometry.FormatForce(w.Load.Shear, w.Units),
+				report.Number(u.DeflectionOf(r.DeflectionAbs)), u.Deflection, d.Missing))
+		} else {
+			t.Line(fmt.Sprintf("  V = %s: δe = %s %s; δ = Cd·δe/Ie = %s %s = %s h_sx", geometry.FormatForce(w.Load.Shear, w.Units),
+				report.Number(u.DeflectionOf(r.DeflectionAbs)), u.Deflection, report.Number(u.DeflectionOf(d.Design)), u.Deflection, report.Fraction(d.Ratio)))
+		}
 		check := "  drift limit: none set"
 		if d.Allowable > 0 {
-			verdict := "OK"
-			if !d.OK {
-				verdict = "EXCEEDED"
-			}
-			check = fmt.Sprintf("  drift limit %s h = %s %s: %s", report.Fraction(w.Drift.Limit), report.Number(u.DeflectionOf(d.Allowable)), u.Deflection, verdict)
+			check = fmt.Sprintf("  drift limit %s h_sx = %s %s: %s", report.Fraction(w.Drift.Limit), report.Number(u.DeflectionOf(d.Allowable)), u.Deflection, d.Verdict())
 		}
 		t.Line(check)
 	}
@@ -334,7 +335,10 @@ func writeFETable(t *report.Text, s *solved) {
 	if u := report.UnitsFor(s.wall.Units); f.RigidityAbs > 0 {
 		line := fmt.Sprintf("    rigidity %s %s", report.Number(u.RigidityOf(f.RigidityAbs)), u.Rigidity)
 		if f.HasLoad {
-			line += fmt.Sprintf("; δe = %s %s, δ = %s %s", report.Number(u.DeflectionOf(f.DeflectionAbs)), u.Deflection, report.Number(u.DeflectionOf(f.Drift.Design)), u.Deflection)
+			line += fmt.Sprintf("; δe = %s %s", report.Number(u.DeflectionOf(f.DeflectionAbs)), u.Deflection)
+			if f.Drift.Missing == "" {
+				line += fmt.Sprintf(", δ = %s %s", report.Number(u.DeflectionOf(f.Drift.Design)), u.Deflection)
+			}
 		}
 		t.Line(line)
 	}
@@ -409,12 +413,17 @@ type jsonUnits struct {
 	Moment     string `json:"moment"`
 }
 
+// jsonDrift is the drift check (docs/method.md §7): without C_d or I_e
+// there is no design drift and no verdict, and missing says which is
+// not given.
 type jsonDrift struct {
-	Design    float64  `json:"design"`
-	Ratio     float64  `json:"ratio"`
-	Allowable *float64 `json:"allowable,omitempty"`
-	Limit     *float64 `json:"limit,omitempty"`
-	OK        bool     `json:"ok"`
+	Design       *float64 `json:"design,omitempty"`
+	Ratio        *float64 `json:"ratio,omitempty"`
+	StoreyHeight float64  `json:"storey_height"` // h_sx in the base length unit (ft or m)
+	Allowable    *float64 `json:"allowable,omitempty"`
+	Limit        *float64 `json:"limit,omitempty"`
+	OK           *bool    `json:"ok,omitempty"`
+	Missing      string   `json:"missing,omitempty"`
 }
 
 type jsonPier struct {
@@ -517,7 +526,13 @@ func toJSON(s *solved) jsonWall {
 			j.Shear = ptr(u.ForceOf(w.Load.Shear))
 			j.Overturning = ptr(u.MomentOf(r.Overturning))
 			j.Deflection = ptr(u.DeflectionOf(r.DeflectionAbs))
-			d := &jsonDrift{Design: u.DeflectionOf(r.Drift.Design), Ratio: r.Drift.Ratio, OK: r.Drift.OK}
+			d := &jsonDrift{StoreyHeight: u.CoordOf(float64(r.Drift.Height)), Missing: r.Drift.Missing}
+			if r.Drift.Missing == "" {
+				d.Design, d.Ratio = ptr(u.DeflectionOf(r.Drift.Design)), ptr(r.Drift.Ratio)
+			}
+			if r.Drift.Judged() {
+				d.OK = &r.Drift.OK
+			}
 			if r.Drift.Allowable > 0 {
 				d.Allowable, d.Limit = ptr(u.DeflectionOf(r.Drift.Allowable)), ptr(w.Drift.Limit)
 			}
