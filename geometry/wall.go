@@ -22,9 +22,9 @@ const (
 type MaterialKind int
 
 const (
-	ConcreteMasonry MaterialKind = iota // E_m = 900 f'm (TMS 402)
-	ClayMasonry                         // E_m = 700 f'm (TMS 402)
-	Concrete                            // E_c = 57,000 √f'c psi (ACI 318)
+	ConcreteMasonry MaterialKind = iota // E_m = 900 f'm (TMS 402-22 §4.2.2, clause number from memory)
+	ClayMasonry                         // E_m = 700 f'm (TMS 402-22 §4.2.2, clause number from memory)
+	Concrete                            // E_c = 57,000 √f'c psi (ACI 318-19 §19.2.2.1)
 	Custom                              // E (and E_v) given by the user
 )
 

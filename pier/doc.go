@@ -33,8 +33,8 @@
 // when the file gives none). Result.Overturning is the wall's base
 // overturning moment.
 //
-// MaterialModuli turns a material into E and E_v by TMS 402 (masonry) or
-// ACI 318 (concrete), with the user's overrides, and says where each value
+// MaterialModuli turns a material into E and E_v by TMS 402-22 (masonry) or
+// ACI 318-19 (concrete), with the user's overrides, and says where each value
 // came from.
 //
 // # Units

@@ -95,8 +95,8 @@ func ParamsFor(w *geometry.Wall, m Moduli) Params {
 
 // Sources of the modulus rules (docs/method.md §2.1).
 const (
-	srcTMS     = "TMS 402 §1.8.2.2"
-	srcACI     = "ACI 318 §19.2.2.1"
+	srcTMS     = "TMS 402-22 §4.2.2, clause number from memory"
+	srcACI     = "ACI 318-19 §19.2.2.1"
 	srcShearCo = "common practice: isotropic, ν = 0.25"
 )
 
@@ -110,8 +110,10 @@ func MaterialModuli(m geometry.Material) (Moduli, error) {
 // MaterialModuliFor returns E and E_v of a material (docs/method.md §3):
 //
 //   - concrete masonry E_m = 900 f'm, clay masonry E_m = 700 f'm, E_v = 0.4 E_m
-//     (TMS 402 §1.8.2.2);
-//   - concrete E_c = 57,000 √f'c psi (US) or 4,700 √f'c MPa (SI), ACI 318;
+//     (TMS 402-22 §4.2.2, clause number from memory; §1.8.2.2 in the 2008
+//     edition);
+//   - concrete E_c = 57,000 √f'c psi (US) or 4,700 √f'c MPa (SI), ACI 318-19
+//     §19.2.2.1;
 //     E_v = 0.4 E_c (common practice, ν = 0.25);
 //   - custom: E given, E_v given or 0.4 E.
 //

@@ -140,13 +140,13 @@ func TestMaterialModuli(t *testing.T) {
 		e, ev  geometry.Stress
 		source string // a piece the Source must contain
 	}{
-		// TMS 402 §1.8.2.2 (as quoted in Taly, 2nd ed.): E_m = 900 f'm for
+		// TMS 402-22 §4.2.2 (clause number from memory; §1.8.2.2 of the 2008 edition as quoted in Taly, 2nd ed.): E_m = 900 f'm for
 		// concrete masonry, E_v = 0.4 E_m; f'm = 2,000 psi gives 1,800 ksi
 		// (Taly Example E7.3).
 		{"concrete masonry", geometry.Material{Kind: geometry.ConcreteMasonry, Strength: 2000 * psi}, geometry.US, 1800 * ksi, 720 * ksi, "900 f'm"},
-		// TMS 402 §1.8.2.2: clay masonry E_m = 700 f'm; 1,500 psi → 1,050 ksi.
+		// TMS 402-22 §4.2.2 (clause number from memory): clay masonry E_m = 700 f'm; 1,500 psi → 1,050 ksi.
 		{"clay masonry", geometry.Material{Kind: geometry.ClayMasonry, Strength: 1500 * psi}, geometry.US, 1050 * ksi, 420 * ksi, "700 f'm"},
-		// ACI 318 §19.2.2.1: E_c = 57,000 √f'c psi; f'c = 4,000 psi gives
+		// ACI 318-19 §19.2.2.1: E_c = 57,000 √f'c psi; f'c = 4,000 psi gives
 		// 3,605 ksi (57,000 × 63.246 psi, hand arithmetic; "about 3,600 ksi"
 		// is the familiar figure, from memory).
 		{"concrete US", geometry.Material{Kind: geometry.Concrete, Strength: 4000 * psi}, geometry.US, 57000 * psi * geometry.Stress(math.Sqrt(4000)), 0.4 * 57000 * psi * geometry.Stress(math.Sqrt(4000)), "57,000"},

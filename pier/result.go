@@ -18,7 +18,7 @@ type Moduli struct {
 	Ev     geometry.Stress // shear modulus E_v (G)
 	Source string          // both sources, "ESource; EvSource", for one-line displays
 
-	ESource  string // where E came from, e.g. "E_m = 900 f'm (TMS 402 §1.8.2.2)"
+	ESource  string // where E came from, e.g. "E_m = 900 f'm (TMS 402-22 §4.2.2, clause number from memory)"
 	EvSource string // where E_v came from
 }
 

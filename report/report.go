@@ -117,6 +117,10 @@ func Wall(out io.Writer, in Input) error {
 		n++
 	}
 
+	w.Section(fmt.Sprintf("%d. References (edition and clause)", n))
+	references(w, WallReferences(wall, res))
+	n++
+
 	w.Section(fmt.Sprintf("%d. Warnings", n))
 	warns := pier.Texts(res.Warnings)
 	if in.FE != nil {
