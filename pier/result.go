@@ -210,7 +210,7 @@ const (
 	WarnSlender      = "slender pier"
 	WarnSlenderWall  = "slender wall"
 	WarnNearEdge     = "opening near base or top"
-	WarnFixedPiers   = "fixed piers"
+	WarnFixedPiers   = "fixed piers" // no longer raised per wall: see FixedPiersAssumption
 	WarnFixedTop     = "fixed top"
 	WarnOnePier      = "one pier in its band"
 	WarnMergedEdges  = "merged opening edges" // SnapEdges
@@ -222,6 +222,11 @@ const (
 	WarnDriftStoreys = "drift over storeys"
 	WarnDriftGross   = "drift on gross sections"
 )
+
+// FixedPiersAssumption is the method's rigid-spandrel assumption, which
+// every wall with openings shares: the help and the report's assumptions
+// state it once (docs/method.md §2.6) rather than a warning on every wall.
+const FixedPiersAssumption = "Piers marked fixed are assumed held against rotation at top and bottom by rigid spandrels; hand methods of this kind tend to overestimate the rigidity of walls with large openings (often by tens of percent): compare with the finite-element check."
 
 // LayoutWarning reports whether a warning kind comes from the layout of the
 // openings (where they are) weakening the method's assumptions, rather than

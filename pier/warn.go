@@ -18,6 +18,15 @@ const (
 	SliverLength = 2.0
 	// sliverRatio stands in for SliverLength when the thickness is unknown.
 	sliverRatio = 10.0
+	// SpandrelRatio: a spandrel (or the solid between two bands) shallower
+	// than this fraction of the height of the piers it is assumed to fix
+	// is shallow. Basis, measured with the finite-element model
+	// (docs/method.md §2.6; TestSpandrelThreshold in pier/fe): on walls with
+	// two windows between three piers, below half the pier height the
+	// spandrel alone adds more than fe.WarnDifference (25 %) to the classic
+	// method's overestimate of the rigidity, against the same wall with a
+	// spandrel 1.5 times the pier height; at 0.75 it adds 12–23 %.
+	SpandrelRatio = 0.5
 )
 
 // warn records a warning once (the first of equal texts).
@@ -39,12 +48,12 @@ func (s *solver) spandrels(rect geometry.Rect, bands []band, bi int, region stri
 	if bi+1 < len(bands) {
 		top = bands[bi+1].y0
 	}
-	if depth := top - b.y1; depth > s.eps && depth < h-s.eps {
-		s.warn(WarnSpandrel, SeverityCaution, s.bandNames(b, ops), fmt.Sprintf("in %s the spandrel above %s is %.2f times as deep as the piers beside %s are tall: it is assumed to keep them from rotating, which a shallow spandrel does not do, so their rigidity is overestimated",
-			where(region), s.openingsPhrase(b, ops), depth/h, themOrIt(b)))
+	if depth := top - b.y1; depth > s.eps && depth < SpandrelRatio*h-s.eps {
+		s.warn(WarnSpandrel, SeverityCaution, s.bandNames(b, ops), fmt.Sprintf("in %s the spandrel above %s is %.2f times as deep as the piers beside %s are tall: it is assumed to keep them from rotating, which a spandrel shallower than %.1f times the piers' height does not do, so their rigidity is overestimated (docs/method.md §2.6)",
+			where(region), s.openingsPhrase(b, ops), depth/h, themOrIt(b), SpandrelRatio))
 	}
 	if bi > 0 {
-		if depth := b.y0 - bands[bi-1].y1; depth < h-s.eps {
+		if depth := b.y0 - bands[bi-1].y1; depth < SpandrelRatio*h-s.eps {
 			s.warn(WarnSolidBetween, SeverityCaution, s.bandNames(b, ops), fmt.Sprintf("in %s the solid between %s and %s below is %.2f times as deep as the piers above it are tall: it is assumed rigid, which it is not",
 				where(region), s.openingsPhrase(b, ops), s.bandNames(bands[bi-1], ops), depth/h))
 		}
@@ -83,13 +92,9 @@ func (s *solver) bandNames(b band, ops []opening) string {
 
 // assumptions adds the warnings that look at the finished decomposition.
 func (s *solver) assumptions(w *geometry.Wall, ops []opening) {
-	anyFixed := false
 	for _, p := range s.res.Piers {
 		if p.Cut || len(ops) == 0 {
 			continue // a solid wall's one pier is the wall, which has its own warning
-		}
-		if p.Support == geometry.Fixed {
-			anyFixed = true
 		}
 		ratio := p.Ratio()
 		switch {
@@ -105,9 +110,6 @@ func (s *solver) assumptions(w *geometry.Wall, ops []opening) {
 		s.warn(WarnSlenderWall, SeverityCaution, "wall", fmt.Sprintf("the wall is slender (h/L = %.1f > %g): it acts as a column rather than a shear wall, and the formulas are meant for wall proportions", ratio, SlenderRatio))
 	}
 	s.edges(w, ops)
-	if anyFixed && len(ops) > 0 {
-		s.warn(WarnFixedPiers, SeverityInfo, "wall", "piers marked fixed are assumed held against rotation at top and bottom by rigid spandrels; hand methods of this kind tend to overestimate the rigidity of walls with large openings: compare with the finite-element check")
-	}
 	if w.Support == geometry.Fixed {
 		s.warn(WarnFixedTop, SeverityInfo, "wall", "the wall's top is assumed held against rotation (fixed-fixed): the structure above must provide that restraint")
 	}

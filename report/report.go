@@ -99,6 +99,10 @@ func Wall(out io.Writer, in Input) error {
 
 	w.Section("3. Classic method (relative deflections in units of 1/(E·t))")
 	steps(w, res, wall)
+	if len(wall.Openings()) > 0 {
+		w.Blank()
+		w.Wrapped("  Assumption: ", strings.TrimSuffix(pier.FixedPiersAssumption, ".")+" (docs/method.md §2.6).")
+	}
 
 	w.Section("4. Piers")
 	pierTable(w, res, wall)
