@@ -278,7 +278,7 @@ func Analyse(s *Storey, walls []*geometry.Wall) (*Analysis, error) {
 	}
 	var feRes []*fe.Result
 	var feErr []error
-	if s.Basis == geometry.BasisFE {
+	if s.Basis == geometry.BasisFE || s.CompareFE {
 		feRes, feErr = solveFE(walls)
 	}
 	names := map[string]int{}
@@ -344,6 +344,9 @@ func Analyse(s *Storey, walls []*geometry.Wall) (*Analysis, error) {
 				relWall = i
 			}
 		} else {
+			if s.CompareFE && feErr[i] == nil {
+				sw.FE = feRes[i] // for the classic-vs-FE difference only
+			}
 			if err != nil {
 				wallErr(i, "file", "%s: %v", wallWhere(ref, w, err), err)
 				a.Walls = append(a.Walls, sw)

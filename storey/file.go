@@ -19,6 +19,12 @@ import (
 // forces newtons whatever Units says; Units decides how they are read and
 // shown.
 type Storey struct {
+	// CompareFE is not read from the file: set by the caller (the storey
+	// report), it asks Analyse to solve each wall's finite-element model on
+	// the classic basis too, for the classic-vs-FE difference of each wall
+	// (docs/method.md §9).
+	CompareFE bool
+
 	Path       string // the storey file as given
 	Title      string
 	Units      geometry.System

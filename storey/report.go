@@ -17,8 +17,16 @@ import (
 // writes the storey report. Errors in the files are returned before anything
 // is written. version is the program's, for the title block ("" when not
 // known).
+//
+// Each wall's finite-element model is solved too (Storey.CompareFE), so that
+// the report states the classic method's difference from it for every wall.
 func WriteReport(out io.Writer, path string, now time.Time, version string) error {
-	a, err := Load(path)
+	s, walls, err := LoadFiles(path)
+	if err != nil {
+		return err
+	}
+	s.CompareFE = true
+	a, err := Analyse(s, walls)
 	if err != nil {
 		return err
 	}
@@ -40,6 +48,16 @@ func Report(out io.Writer, a *Analysis, now time.Time, version string) error {
 	w.KV("Units", unitsLine(s.Units, u))
 	w.KV("Method", methodLine(s))
 
+	// The storey's warnings come before the numbers they bear on; each
+	// wall's own are with it in the walls section.
+	w.Section("Warnings (the storey's; each wall's own are with it below)")
+	if len(a.Warnings) == 0 {
+		w.Line("  none")
+	}
+	for _, msg := range a.Warnings {
+		w.Wrapped("  - ", msg)
+	}
+
 	w.Section("1. Inputs")
 	w.KV("Shear", geometry.FormatForce(s.Shear, s.Units)+", applied along x and along y in turn")
 	w.KV("Mass centre", fmt.Sprintf("x = %s %s, y = %s %s", coord(u, s.MassCenter[0]), u.Coord, coord(u, s.MassCenter[1]), u.Coord))
@@ -50,7 +68,7 @@ func Report(out io.Writer, a *Analysis, now time.Time, version string) error {
 		basisName = "finite-element model, basis fe"
 	}
 	if a.Absolute {
-		w.KV("Rigidities", "R = E·t/d of each wall ("+basisName+"), "+u.Rigidity)
+		w.KV("Rigidities", "R = E·t/Δ of each wall, Δ its relative deflection ("+basisName+"), "+u.Rigidity)
 	} else {
 		w.KV("Rigidities", "relative rigidity × thickness (one E assumed for every wall; "+basisName+")")
 	}
@@ -110,12 +128,17 @@ func Report(out io.Writer, a *Analysis, now time.Time, version string) error {
 		t.Add(string(WallKey(i)), dir, line, from, rel, rigidity(a, u, wl.Rigidity))
 	}
 	t.Write(w, "  ")
-	w.Line("  line: y of an x-wall, x of a y-wall (x, y of a point on an angled wall's")
-	w.Line("  line); from: where it begins along its line; R rel: relative rigidity,")
-	w.Line("  1/(E·t) units; given: the wall is given by its rigidity")
-	if s.Basis == geometry.BasisFE {
+	w.Line("  dir: the direction the wall resists; line: y of an x-wall, x of a y-wall")
+	w.Line("  (x, y of a point on an angled wall's line); from: where it begins along its")
+	w.Line("  line; R rel: relative rigidity, in units of E·t; given: the wall is given")
+	w.Line("  by its rigidity")
+	if anyFE(a) {
 		w.Blank()
-		w.Line("  Rigidity by each model (the distribution uses the finite-element one):")
+		which := "classic"
+		if s.Basis == geometry.BasisFE {
+			which = "finite-element"
+		}
+		w.Wrapped("  ", "Rigidity by each model (the distribution uses the "+which+" one); classic - FE is the classic method's difference from the finite-element model, its uncertainty for each wall (docs/method.md §4, §5):")
 		t := &report.Table{
 			Head:  []string{"key", "wall", "classic " + rigUnit(a, u), "FE " + rigUnit(a, u), "classic - FE"},
 			Right: []bool{false, false, true, true, true},
@@ -143,8 +166,9 @@ func Report(out io.Writer, a *Analysis, now time.Time, version string) error {
 	w.Section("3. Centre of rigidity and torsional rigidity (rigid diaphragm)")
 	w.KV("x_R", fmt.Sprintf("%s %s  (Σ R·x / Σ R over the y-walls, Σ R = %s %s)", num(u.CoordOf(d.CenterOfRigidity[X]), 2), u.Coord, rigidity(a, u, d.SumRigidity[Y]), rigUnit(a, u)))
 	w.KV("y_R", fmt.Sprintf("%s %s  (Σ R·y / Σ R over the x-walls, Σ R = %s %s)", num(u.CoordOf(d.CenterOfRigidity[Y]), 2), u.Coord, rigidity(a, u, d.SumRigidity[X]), rigUnit(a, u)))
-	w.KV("J", fmt.Sprintf("%s  (Σ R·d², all walls)", torsional(a, u, d.J)))
-	w.Wrapped("  ", "The diaphragm is solved as a stiffness problem in u_x, u_y and θ; about the centre of rigidity it uncouples, and each wall's shear is the direct part V·R/ΣR plus the torsional part V·e·d·R/J, as tabulated below.")
+	w.KV("J", fmt.Sprintf("%s  (Σ R·arm², all walls)", torsional(a, u, d.J)))
+	w.Wrapped("  ", "The diaphragm is solved as a stiffness problem in u_x, u_y and θ; about the centre of rigidity it uncouples, and each wall's shear is the direct part V·R/ΣR plus the torsional part V·e·arm·R/J, as tabulated below.")
+	w.Wrapped("  Signs: ", "x points east, y north, rotation counter-clockwise positive seen from above. arm is a wall's signed distance from the centre of rigidity across its line: y − y_R for an x-wall, x − x_R for a y-wall. The eccentricity e is the mass centre's distance from the centre of rigidity across the load, y_m − y_R for a load along +x and x_m − x_R for a load along +y, plus (case +acc) or minus (case −acc) the accidental part. The torque V·e turns the plan clockwise under a load along +x and counter-clockwise under a load along +y when e is positive. Shears are along the wall's own positive axis under a load along the positive axis: the torsional shear is +V·e·arm·R/J for a wall parallel to the load and −V·e·arm·R/J for a wall across it; positive adds to the direct shear.")
 
 	for _, c := range d.Cases {
 		across := c.Load.other()
@@ -160,10 +184,10 @@ func Report(out io.Writer, a *Analysis, now time.Time, version string) error {
 			w.KV("A_x", fmt.Sprintf("%.3f: the accidental part is amplified (ASCE 7-22 §12.8.4.3)", c.Torsion.Amplification))
 		}
 		w.KV("V·e", fmt.Sprintf("%s %s", num(u.MomentOf(c.Torque), 1), u.Moment))
-		w.KV("Shears", u.Force+"; d from the centre of rigidity across the wall's line")
+		w.KV("Shears", u.Force+"; arm from the centre of rigidity across the wall's line, "+u.Coord)
 		w.Blank()
 		t := &report.Table{
-			Head:  []string{"key", "wall", "dir", "d " + u.Coord, "direct", "torsion", "total"},
+			Head:  []string{"key", "wall", "dir", "arm " + u.Coord, "direct", "torsion", "total"},
 			Right: []bool{false, false, false, true, true, true, true},
 		}
 		for i, wl := range a.Walls {
@@ -241,6 +265,15 @@ func Report(out io.Writer, a *Analysis, now time.Time, version string) error {
 			w.Line("   the classic method cannot solve this layout: no piers (see the wall's own report)")
 			continue
 		}
+		// The wall's own warnings come before the numbers they bear on.
+		for _, msg := range res.Warnings {
+			w.Wrapped("   ! ", msg.Text)
+		}
+		if wl.FE != nil && s.Basis == geometry.BasisFE {
+			for _, msg := range wl.FE.Warnings {
+				w.Wrapped("   ! ", msg)
+			}
+		}
 		w.Blank()
 		w.Lines(sketch.Elevation(wl.Wall, res, 60, 12).String(), "   ")
 		w.Blank()
@@ -265,17 +298,9 @@ func Report(out io.Writer, a *Analysis, now time.Time, version string) error {
 		if line := DriftLine(res, u); line != "" && s.Basis == geometry.BasisClassic {
 			w.Wrapped("   ", line)
 		}
-		for _, msg := range res.Warnings {
-			w.Wrapped("   ! ", msg.Text)
-		}
-		if wl.FE != nil {
-			for _, msg := range wl.FE.Warnings {
-				w.Wrapped("   ! ", msg)
-			}
-		}
 	}
 
-	w.Section(fmt.Sprintf("%d. Warnings (each wall's own are listed with it above)", n))
+	w.Section(fmt.Sprintf("%d. Diaphragm assumption", n))
 	closing := "The diaphragm is assumed rigid; a flexible diaphragm shares the shear by tributary area instead."
 	switch s.Diaphragm {
 	case Flexible:
@@ -283,7 +308,7 @@ func Report(out io.Writer, a *Analysis, now time.Time, version string) error {
 	case Envelope:
 		closing = "Each wall takes the larger of its rigid- and flexible-diaphragm shares (envelope)."
 	}
-	w.Close(append(append([]string(nil), a.Warnings...), closing))
+	w.Close([]string{closing})
 	return w.Err()
 }
 
@@ -498,4 +523,15 @@ func torsional(a *Analysis, u report.Units, j float64) string {
 		return report.Grouped(u.MomentOf(j)) + " " + u.Moment + " per radian"
 	}
 	return fmt.Sprintf("%.4g (relative × t) %s³", u.CoordOf(u.CoordOf(u.CoordOf(j))), u.Coord)
+}
+
+// anyFE reports whether some wall has both a classic and a finite-element
+// rigidity, so that the report can state their difference.
+func anyFE(a *Analysis) bool {
+	for _, wl := range a.Walls {
+		if wl.FE != nil && wl.ClassicRigidity > 0 {
+			return true
+		}
+	}
+	return false
 }

@@ -446,8 +446,8 @@ func (s *storeyScreen) tableView(w, h int) string {
 	for _, wl := range a.Walls {
 		nameW = max(nameW, len([]rune(geometry.Visible(wl.Name))))
 	}
-	nameW = min(nameW, max(w-38, 8))
-	head := fmt.Sprintf("  %-*s %s %7s %8s %6s %-8s", nameW, "wall", "d", "R rel", "design", "of V", "case")
+	nameW = min(nameW, max(w-40, 8))
+	head := fmt.Sprintf("  %-*s %-3s %7s %8s %6s %-8s", nameW, "wall", "dir", "R rel", "design", "of V", "case")
 	lines = append(lines, st.dim.Render(truncate(head, w)))
 	for i, wl := range a.Walls {
 		mark := " "
@@ -465,7 +465,7 @@ func (s *storeyScreen) tableView(w, h int) string {
 		case wl.Unit != nil:
 			rel = fmt.Sprintf("%7.4f", wl.Unit.Rigidity)
 		}
-		row := fmt.Sprintf("%c%s%-*s %s %s %8.2f %5.1f%% %-8s", storey.WallKey(i), mark, nameW, truncate(geometry.Visible(wl.Name), nameW), dir,
+		row := fmt.Sprintf("%c%s%-*s %-3s %s %8.2f %5.1f%% %-8s", storey.WallKey(i), mark, nameW, truncate(geometry.Visible(wl.Name), nameW), dir,
 			rel, u.ForceOf(geometry.Force(wl.Design.Shear)),
 			100*wl.Design.Shear/float64(s.st.Shear), storey.CaseName(d, wl.Design.Case))
 		row = truncate(row, w)
