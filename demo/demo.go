@@ -20,6 +20,7 @@ func Wall() *geometry.Wall {
 	wide[3] = geometry.Opening{Name: "D2", X: 30 * ft, Sill: 0, Width: 8 * ft, Height: 8 * ft}
 	return &geometry.Wall{
 		Title:     "Library annex, east wall (demo)",
+		Project:   geometry.Project{Name: "Library annex (invented)", Job: "DEMO-01"},
 		Units:     geometry.US,
 		Length:    40 * ft,
 		Height:    14 * ft,

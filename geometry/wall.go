@@ -68,6 +68,46 @@ type Drift struct {
 	StoreyHeight Length
 }
 
+// Project is the heading of a calculation package: the [project] table of
+// a wall or a storey file, shown in the reports' headers. Every field is
+// free text; empty means not given.
+type Project struct {
+	Name     string // the project
+	Job      string // the job number
+	Engineer string // who did the calculation
+	Checker  string // who checked it
+}
+
+// Entries returns the given fields as label and value pairs, in the order
+// project, job, engineer, checker.
+func (p Project) Entries() [][2]string {
+	var out [][2]string
+	for _, e := range [][2]string{{"project", p.Name}, {"job", p.Job}, {"engineer", p.Engineer}, {"checker", p.Checker}} {
+		if e[1] != "" {
+			out = append(out, e)
+		}
+	}
+	return out
+}
+
+// ProjectKeys are the keys of a [project] table, in the order written.
+var ProjectKeys = []string{"name", "job", "engineer", "checker"}
+
+// Field returns a pointer to the field that key (one of ProjectKeys) names.
+func (p *Project) Field(key string) *string {
+	switch key {
+	case "name":
+		return &p.Name
+	case "job":
+		return &p.Job
+	case "engineer":
+		return &p.Engineer
+	case "checker":
+		return &p.Checker
+	}
+	panic("geometry: unknown project key " + key)
+}
+
 // LineLoad is a force per length along the top of a wall, in N/m.
 type LineLoad float64
 
@@ -140,6 +180,7 @@ type Layout struct {
 // one that is solved, drawn and reported.
 type Wall struct {
 	Title     string
+	Project   Project
 	Units     System
 	Length    Length
 	Height    Length

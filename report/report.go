@@ -6,6 +6,7 @@
 package report
 
 import (
+	"bytes"
 	"fmt"
 	"io"
 	"math"
@@ -45,14 +46,26 @@ type Input struct {
 	Drawing string // the SVG drawing written beside the report, "" for none
 }
 
-// Wall writes the text report of one wall layout.
+// Wall writes the text report of one wall layout, in sheets of SheetLines
+// lines headed by the wall's [project] table and "sheet k of n".
 func Wall(out io.Writer, in Input) error {
+	var body bytes.Buffer
+	if err := wallBody(&body, in); err != nil {
+		return err
+	}
+	return Paginate(out, body.String(), Heading{Project: in.Wall.Project, Subject: "wall report: " + orDefault(in.Wall.Title, orDefault(filePart(in.Path), "built-in demo wall"))})
+}
+
+func wallBody(out io.Writer, in Input) error {
 	w := NewText(out)
 	wall := in.Wall
 	u := UnitsFor(wall.Units)
 
 	w.Title("PIERWISE WALL REPORT")
 	w.KV("Title", orDash(wall.Title))
+	for _, e := range wall.Project.Entries() {
+		w.KV(strings.ToUpper(e[0][:1])+e[0][1:], e[1])
+	}
 	w.KV("File", orDefault(filePart(in.Path), "(built-in demo wall)"))
 	w.KV("Layout", layoutLine(wall))
 	w.KV("Date", in.Now.Format("2006-01-02 15:04 MST"))

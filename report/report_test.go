@@ -231,3 +231,33 @@ func TestReportShowsControlCharactersEscaped(t *testing.T) {
 		t.Errorf("escapes not shown: %q", out)
 	}
 }
+
+// A report is cut into sheets of SheetLines lines, each headed by the
+// project and "sheet k of n", separated by form feeds.
+func TestWallReportSheets(t *testing.T) {
+	w := demo.Wall()
+	res, err := pier.Solve(w)
+	if err != nil {
+		t.Fatal(err)
+	}
+	var b strings.Builder
+	if err := Wall(&b, Input{Wall: w, Result: res, Now: time.Date(2026, 1, 2, 3, 4, 0, 0, time.UTC), Version: "test"}); err != nil {
+		t.Fatal(err)
+	}
+	sheets := strings.Split(b.String(), "\f")
+	if len(sheets) < 2 {
+		t.Fatalf("%d sheet(s), want the demo report on several", len(sheets))
+	}
+	for k, s := range sheets {
+		lines := strings.Split(strings.TrimSuffix(s, "\n"), "\n")
+		if len(lines) > SheetLines {
+			t.Errorf("sheet %d has %d lines, more than %d", k+1, len(lines), SheetLines)
+		}
+		if want := fmt.Sprintf("sheet %d of %d", k+1, len(sheets)); !strings.HasSuffix(lines[1], want) {
+			t.Errorf("sheet %d heading %q, want it to end with %q", k+1, lines[1], want)
+		}
+		if !strings.Contains(lines[0], "project Library annex (invented) · job DEMO-01") {
+			t.Errorf("sheet %d project line %q", k+1, lines[0])
+		}
+	}
+}

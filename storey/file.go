@@ -5,6 +5,7 @@ import (
 	"fmt"
 	"math"
 	"path/filepath"
+	"slices"
 	"sort"
 	"strconv"
 	"strings"
@@ -27,6 +28,7 @@ type Storey struct {
 
 	Path       string // the storey file as given
 	Title      string
+	Project    geometry.Project // the [project] table: the report's heading
 	Units      geometry.System
 	Shear      geometry.Force
 	MassCenter [2]geometry.Length // (x, y) from the plan's south-west corner
@@ -118,12 +120,25 @@ func Parse(filename string, data []byte) (*Storey, error) {
 
 	for _, k := range sortedKeys(m) {
 		switch k {
-		case "title", "units", "storey", "wall":
+		case "title", "units", "storey", "wall", "project":
 		default:
-			p.errorf(k, "unknown key (the storey file has title, units, [storey] and [[wall]])")
+			p.errorf(k, "unknown key (the storey file has title, units, [project], [storey] and [[wall]])")
 		}
 	}
 	s.Title = p.str(m, "title", "title")
+	if v, ok := m["project"]; ok {
+		pt, isTable := v.(map[string]any)
+		if !isTable {
+			p.errorf("project", "must be a table: [project]")
+		}
+		for _, k := range sortedKeys(pt) {
+			if !slices.Contains(geometry.ProjectKeys, k) {
+				p.errorf("project."+k, "unknown key (a [project] table has %s)", strings.Join(geometry.ProjectKeys, ", "))
+				continue
+			}
+			*s.Project.Field(k) = p.str(pt, k, "project."+k)
+		}
+	}
 	if u, ok := m["units"]; ok {
 		text, isStr := u.(string)
 		sys, known := geometry.ParseSystem(text)

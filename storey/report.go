@@ -1,6 +1,7 @@
 package storey
 
 import (
+	"bytes"
 	"fmt"
 	"io"
 	"math"
@@ -33,8 +34,22 @@ func WriteReport(out io.Writer, path string, now time.Time, version string) erro
 	return Report(out, a, now, version)
 }
 
-// Report writes the text report of an analysed storey.
+// Report writes the text report of an analysed storey, in sheets of
+// report.SheetLines lines headed by the storey's [project] table and
+// "sheet k of n".
 func Report(out io.Writer, a *Analysis, now time.Time, version string) error {
+	var body bytes.Buffer
+	if err := reportBody(&body, a, now, version); err != nil {
+		return err
+	}
+	subject := a.Storey.Title
+	if subject == "" {
+		subject = a.Storey.Path
+	}
+	return report.Paginate(out, body.String(), report.Heading{Project: a.Storey.Project, Subject: "storey report: " + subject})
+}
+
+func reportBody(out io.Writer, a *Analysis, now time.Time, version string) error {
 	s := a.Storey
 	u := report.UnitsFor(s.Units)
 	d := a.Distribution
@@ -42,6 +57,9 @@ func Report(out io.Writer, a *Analysis, now time.Time, version string) error {
 
 	w.Title("PIERWISE STOREY REPORT")
 	w.KV("Title", orDash(s.Title))
+	for _, e := range s.Project.Entries() {
+		w.KV(strings.ToUpper(e[0][:1])+e[0][1:], e[1])
+	}
 	w.KV("File", s.Path)
 	w.KV("Date", now.Format("2006-01-02 15:04 MST"))
 	w.KV("Program", report.Program(version))
