@@ -44,6 +44,10 @@ type Input struct {
 	Now     time.Time
 	Version string
 	Drawing string // the SVG drawing written beside the report, "" for none
+
+	// Unsaved is set when the wall has changes not yet saved to Path (an
+	// editor snapshot): the report then says so in its header.
+	Unsaved bool
 }
 
 // Wall writes the text report of one wall layout, in sheets of SheetLines
@@ -53,7 +57,11 @@ func Wall(out io.Writer, in Input) error {
 	if err := wallBody(&body, in); err != nil {
 		return err
 	}
-	return Paginate(out, body.String(), Heading{Project: in.Wall.Project, Subject: "wall report: " + orDefault(in.Wall.Title, orDefault(filePart(in.Path), "built-in demo wall"))})
+	subject := "wall report: " + orDefault(in.Wall.Title, orDefault(filePart(in.Path), "built-in demo wall"))
+	if in.Unsaved {
+		subject += " (unsaved changes)"
+	}
+	return Paginate(out, body.String(), Heading{Project: in.Wall.Project, Subject: subject})
 }
 
 func wallBody(out io.Writer, in Input) error {
@@ -66,7 +74,11 @@ func wallBody(out io.Writer, in Input) error {
 	for _, e := range wall.Project.Entries() {
 		w.KV(strings.ToUpper(e[0][:1])+e[0][1:], e[1])
 	}
-	w.KV("File", orDefault(filePart(in.Path), "(built-in demo wall)"))
+	file := orDefault(filePart(in.Path), "(built-in demo wall)")
+	if in.Unsaved {
+		file += " — UNSAVED CHANGES: this report is of the wall as edited, not as saved"
+	}
+	w.KV("File", file)
 	w.KV("Layout", layoutLine(wall))
 	w.KV("Date", in.Now.Format("2006-01-02 15:04 MST"))
 	w.KV("Program", Program(in.Version))

@@ -82,6 +82,24 @@ func (d *document) amend(f func(w *geometry.Wall) error) error {
 	return nil
 }
 
+// view makes layout i the one shown, edited and solved. Viewing is not a
+// change: a clean document stays clean, there is no undo step, and the file
+// keeps the active layout it names (keepOwnActive), so that a bare
+// pierwise solve FILE solves the same layout before and after.
+func (d *document) view(i int) {
+	if d.own == nil {
+		d.keepOwnActive(d.wall.Layouts[d.wall.Active].Name, d.wall.Active)
+	}
+	clean := !d.dirty()
+	w := d.wall.Clone()
+	w.Active = i
+	d.wall, d.version = w, d.next
+	d.next++
+	if clean {
+		d.saved = d.version
+	}
+}
+
 // undoChange and redoChange step through the history; they report whether
 // there was anything to step to.
 func (d *document) undoChange() bool { return d.travel(&d.undo, &d.redo) }

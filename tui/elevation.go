@@ -52,7 +52,9 @@ type elevation struct {
 
 	ask    *choice // the open question (modeAsk)
 	page   *helpPage
-	saving bool // a save command is under way
+	warns  *warnPage
+	rows   scroller // the pier table's first row shown (pgup, pgdown)
+	saving bool     // a save command is under way
 	drag   drag
 }
 
@@ -62,13 +64,15 @@ const (
 	modeNormal elevationMode = iota
 	modeHelp
 	modeForm
-	modeAsk // a question in the status line (choice)
+	modeAsk      // a question in the status line (choice)
+	modeWarnings // every warning, most severe first (warnPage)
 )
 
 func newElevation(c *common) *elevation {
 	e := &elevation{c: c, keys: newKeyMap(), help: help.New(), sel: -1}
 	e.help.ShortSeparator = "  "
 	e.page = &helpPage{keys: e.keys, close: []key.Binding{e.keys.Help, c.keys.Back, e.keys.Quit}}
+	e.warns = &warnPage{close: []key.Binding{e.keys.Warnings, c.keys.Back, e.keys.Quit}}
 	e.fe.on = true
 	e.bs.basis, e.bs.file = c.doc.wall.Analysis.Basis, c.doc.wall.Analysis.Basis
 	c.basis = e.bs.basis
@@ -188,7 +192,7 @@ func (e *elevation) update(msg tea.Msg) (screen, tea.Cmd) {
 		e.mode, e.ask = modeNormal, nil
 		e.say("not saved")
 		return e, nil
-	case helpClosedMsg:
+	case helpClosedMsg, warnClosedMsg:
 		e.mode = modeNormal
 		return e, nil
 	case saveAsMsg:
@@ -201,7 +205,13 @@ func (e *elevation) update(msg tea.Msg) (screen, tea.Cmd) {
 	case tea.KeyMsg:
 		switch e.mode {
 		case modeHelp:
+			l := e.layout()
+			e.page.fitTo(l.bodyH, len(e.page.content(e.c.styles, e.width, e.wall().Units)))
 			return e, e.page.update(msg)
+		case modeWarnings:
+			l := e.layout()
+			e.warns.fitTo(l.bodyH, len(e.warns.content(e.c.styles, e.width, e.warnings())))
+			return e, e.warns.update(msg)
 		case modeForm:
 			ev, cmd := e.form.update(msg)
 			done, applied := e.formEvent(ev)
@@ -290,6 +300,22 @@ func (e *elevation) programKey(msg tea.KeyMsg) (tea.Cmd, bool) {
 		e.askQuit()
 	case key.Matches(msg, k.Help):
 		e.mode = modeHelp
+	case key.Matches(msg, k.Warnings):
+		if len(e.warnings()) == 0 {
+			e.say("no warnings")
+		} else {
+			e.mode = modeWarnings
+		}
+	case key.Matches(msg, k.RowsUp, k.RowsDown):
+		l := e.layout()
+		if e.res != nil {
+			e.rows.fitTo(l.tableH-1, len(e.res.Piers))
+		}
+		if key.Matches(msg, k.RowsUp) {
+			e.rows.off = max(e.rows.off-max(1, l.tableH-2), 0)
+		} else {
+			e.rows.off = min(e.rows.off+max(1, l.tableH-2), e.rows.last())
+		}
 	case key.Matches(msg, k.Undo):
 		if !e.c.doc.undoChange() {
 			e.refuse("nothing to undo")
@@ -483,12 +509,33 @@ func nextName(w *geometry.Wall, door bool) string { return w.NextOpeningName(w.A
 
 func (e *elevation) add(door bool) {
 	w := e.wall()
-	o, ok := w.FreeSpot(newOpening(w, door))
+	o, ok := e.place(newOpening(w, door))
 	if !ok {
 		e.refuse("no free place for a %s: make room or edit its size (e)", kindName(door))
 		return
 	}
 	e.insert(o)
+}
+
+// place finds where a new opening goes: in the widest solid piece with at
+// least one masonry module of pier each side (8 in, 200 mm; the current
+// step for concrete), on the grid of the current step
+// (geometry.PlaceNew); where no piece is wide enough, anywhere it does not
+// overlap another opening (FreeSpot).
+func (e *elevation) place(o geometry.Opening) (geometry.Opening, bool) {
+	w := e.wall()
+	margin := e.stepLength()
+	switch w.Material.Kind {
+	case geometry.ConcreteMasonry, geometry.ClayMasonry:
+		margin = 8 * geometry.Inch // the nominal module of a concrete masonry unit
+		if w.Units == geometry.SI {
+			margin = 200 * geometry.Millimetre
+		}
+	}
+	if p, ok := w.PlaceNew(o, margin, e.stepLength()); ok {
+		return p, true
+	}
+	return w.FreeSpot(o)
 }
 
 func (e *elevation) insert(o geometry.Opening) {
@@ -523,7 +570,7 @@ func (e *elevation) duplicate() {
 	o := w.Openings()[e.sel]
 	o.Name = nextName(w, o.IsDoor())
 	o.X += o.Width
-	o, ok := w.FreeSpot(o)
+	o, ok := e.place(o)
 	if !ok {
 		e.refuse("no free place for a copy of %s", w.Openings()[e.sel].Name)
 		return
@@ -558,7 +605,7 @@ func (e *elevation) switchLayout(d int) {
 		return
 	}
 	next := ((w.Active+d)%n + n) % n
-	_ = e.c.doc.change(func(w *geometry.Wall) error { w.Active = next; return nil })
+	e.c.doc.view(next)
 	e.sel = 0
 	e.say("layout %s", quoteVisible(e.wall().Layouts[next].Name))
 }
@@ -609,7 +656,7 @@ func (e *elevation) deleteLayout() {
 // background.
 func (e *elevation) snapshot() tea.Cmd {
 	d := e.c.doc
-	in := report.Input{Path: d.path, Wall: d.wall, Result: e.res, Err: e.solveErr, Now: e.c.now(), Version: e.c.version}
+	in := report.Input{Path: d.path, Wall: d.wall, Result: e.res, Err: e.solveErr, Now: e.c.now(), Version: e.c.version, Unsaved: d.dirty()}
 	if e.fe.on && !e.fe.running && !e.fe.stale() {
 		in.FE, in.FEErr = e.fe.res, e.fe.err
 	}
@@ -622,6 +669,9 @@ func (e *elevation) snapshot() tea.Cmd {
 	}
 	draw := drawing.WallInput{Path: d.path, Wall: d.wall, Basis: "classic strip method", Piers: drawing.LeafPiers(e.bs.shown),
 		Now: in.Now, Version: e.c.version}
+	for _, p := range d.wall.Project.Entries() {
+		draw.Project = append(draw.Project, drawing.Entry{Key: p[0], Value: p[1]})
+	}
 	if e.onFE() {
 		draw.Basis = "plane-stress finite-element model"
 	}

@@ -382,7 +382,7 @@ func near(a, b float64) bool { return a-b < 1e-9 && b-a < 1e-9 }
 func TestUndoRedo(t *testing.T) {
 	ed := newEditor(t, annex(), "", 100, 30)
 	start := ed.wall().Clone()
-	keys := []tea.Msg{keyTab, runes("l"), runes("K"), runes("w"), runes("l"), runes("d"), runes("x"), runes("c"), runes("n"), runes("]"), runes("X")}
+	keys := []tea.Msg{keyTab, runes("l"), runes("K"), runes("w"), runes("l"), runes("d"), runes("x"), runes("c"), runes("n"), runes("X")} // ] views a layout: not an edit (TestViewLayoutIsNoChange)
 	var states []*geometry.Wall
 	for _, k := range keys {
 		v := ed.m.c.doc.version
@@ -842,5 +842,45 @@ func TestWallFormImportanceFactor(t *testing.T) {
 	d := ed.elev().res.Drift
 	if want := 3.5 * float64(d.Elastic) / 1.25; !near(float64(d.Design), want) {
 		t.Errorf("design drift %v, want Cd·δe/Ie = %v", d.Design, want)
+	}
+}
+
+// Viewing another layout (]) is not a change: a clean wall stays clean, no
+// undo step is taken, and the file keeps the active layout it names, so a
+// bare pierwise solve FILE solves the same layout before and after.
+func TestViewLayoutIsNoChange(t *testing.T) {
+	ed := newEditor(t, annex(), "", 100, 30)
+	d := ed.elev().c.doc
+	undo := len(d.undo)
+	ed.press(runes("]"))
+	if ed.wall().Active != 1 {
+		t.Fatalf("] shows layout %d, want 1", ed.wall().Active)
+	}
+	if d.dirty() || len(d.undo) != undo {
+		t.Errorf("viewing a layout: dirty %v, undo steps %d, want clean and %d", d.dirty(), len(d.undo), undo)
+	}
+	if got := d.onDisk().Active; got != 0 {
+		t.Errorf("the file would name layout %d active, want 0 (as opened)", got)
+	}
+	ed.press(runes("l")) // an edit in the viewed layout is a change
+	if !d.dirty() {
+		t.Error("an edit after viewing is not marked unsaved")
+	}
+}
+
+// A snapshot of a wall with unsaved changes says so in its header.
+func TestSnapshotSaysUnsaved(t *testing.T) {
+	var b strings.Builder
+	w := annex()
+	res, err := pier.Solve(w)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if err := report.Wall(&b, report.Input{Path: "annex.toml", Wall: w, Result: res, Unsaved: true}); err != nil {
+		t.Fatal(err)
+	}
+	head := strings.SplitN(b.String(), "\n", 3)[1]
+	if !strings.Contains(head, "(unsaved changes)") || !strings.Contains(b.String(), "UNSAVED CHANGES") {
+		t.Errorf("heading %q does not say unsaved changes", head)
 	}
 }

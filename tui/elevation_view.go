@@ -11,6 +11,7 @@ import (
 	"github.com/charmbracelet/lipgloss"
 
 	"pierwise/geometry"
+	"pierwise/pier"
 	"pierwise/pier/fe"
 	"pierwise/report"
 	"pierwise/sketch"
@@ -83,7 +84,9 @@ func (e *elevation) view() string {
 	var body string
 	switch e.mode {
 	case modeHelp:
-		body = e.page.view(e.c.styles, e.width, e.wall().Units)
+		body = e.page.view(e.c.styles, e.width, l.bodyH, e.wall().Units)
+	case modeWarnings:
+		body = e.warns.view(e.c.styles, e.width, l.bodyH, e.warnings())
 	case modeForm:
 		body = e.form.view(st, e.width, l.bodyH)
 	default:
@@ -324,25 +327,39 @@ func (e *elevation) summaryView(l elevLayout) string {
 		if r.Moduli.E > 0 {
 			kvExtra("E, E_v", geometry.FormatStress(r.Moduli.E, w.Units)+", "+geometry.FormatStress(r.Moduli.Ev, w.Units))
 		}
-		if w.Load.Shear > 0 {
+		switch {
+		case e.shear > 0: // opened from the storey screen
+			kv("shear V", geometry.FormatForce(e.shear, w.Units)+st.dim.Render(" storey design"))
+		case w.Load.Shear > 0:
 			kvExtra("shear V", geometry.FormatForce(w.Load.Shear, w.Units))
 		}
 	}
 	fe := e.feLines(l)
+	// The count of warnings always shows, before the FE answer; ! lists
+	// them all on a page of their own.
+	ws := bySeverity(e.warnings())
+	var count []string
+	if len(ws) > 0 {
+		worst := ws[0].Severity
+		style := st.note
+		if worst == pier.SeveritySerious {
+			style = st.fail
+		}
+		count = []string{style.Render(fmt.Sprintf("! %d warning%s (worst %s): key !", len(ws), plural(len(ws)), worst))}
+	}
 	// On a short panel the inputs echoed above give way to the FE answer.
-	for k := len(extra) - 1; k >= 0 && len(lines)+1+len(fe) > l.topH; k-- {
+	for k := len(extra) - 1; k >= 0 && len(lines)+1+len(count)+len(fe) > l.topH; k-- {
 		i, n := extra[k][0], extra[k][1]
 		lines = append(lines[:i], lines[i+n:]...)
 	}
+	lines = append(lines, count...)
 	lines = append(lines, "")
 	lines = append(lines, fe...)
-	// Warnings last: on a small screen they are what gets cut (the report
-	// has them all).
-	if r := e.bs.shown; r != nil {
-		for _, warn := range r.Warnings {
-			lines = append(lines, "")
-			lines = append(lines, wrap("! "+warn.Text, l.sumW)...)
-		}
+	// Then the warnings themselves, most severe first, as far as they fit
+	// (the ! page and the report have them all).
+	for _, warn := range ws {
+		lines = append(lines, "")
+		lines = append(lines, wrap("! "+warn.Text, l.sumW)...)
 	}
 	return strings.Join(lines, "\n")
 }
@@ -412,8 +429,8 @@ func (e *elevation) feLines(l elevLayout) []string {
 	return lines
 }
 
-// tableView is the pier table: every pier when there is room, else the
-// leaf piers (the ones that carry forces).
+// tableView is the pier table: every pier, scrolled by pgup and pgdown
+// (e.rows) when they do not fit.
 func (e *elevation) tableView(l elevLayout) string {
 	st := e.c.styles
 	r := e.bs.shown
@@ -427,9 +444,6 @@ func (e *elevation) tableView(l elevLayout) string {
 	u := report.UnitsFor(w.Units)
 	fl := func(x float64) string { return geometry.FormatLength(geometry.Length(x), w.Units) }
 	piers := r.Piers
-	if len(piers)+1 > l.tableH {
-		piers = r.Leaves()
-	}
 	head := []string{"pier", "h", "L", "h/L", "support", "share", "V " + u.Force, "M " + u.Moment, "bend/shear", "FE share"}
 	left := []bool{true, false, false, false, true, true, false, false, false, false}
 	feShare := map[string]float64{}
@@ -510,17 +524,23 @@ func (e *elevation) tableView(l elevLayout) string {
 		return strings.TrimRight(b.String(), " ")
 	}
 	lines := []string{st.heading.Render(line(head))}
-	room := l.tableH - 1
-	for k, p := range piers {
-		if len(lines) >= room && k < len(piers)-1 {
-			lines = append(lines, st.dim.Render(fmt.Sprintf("... %d more piers (p writes the full report)", len(piers)-k)))
-			break
-		}
+	room := l.tableH - 1 // rows below the header
+	first, last := 0, len(piers)
+	if len(piers) > room && room >= 2 {
+		// One row says where the window is; the rest show piers from the
+		// scroller's offset, clamped as the key handler clamps it.
+		first = min(max(e.rows.off, 0), len(piers)-(room-1))
+		last = first + room - 1
+	}
+	for k := first; k < last; k++ {
 		text := line(rows[k])
-		if !p.Leaf {
+		if !piers[k].Leaf {
 			text = st.dim.Render(text)
 		}
 		lines = append(lines, text)
+	}
+	if last-first < len(piers) {
+		lines = append(lines, st.dim.Render(fmt.Sprintf("piers %d–%d of %d: pgup pgdown scroll", first+1, last, len(piers))))
 	}
 	return strings.Join(lines, "\n")
 }
@@ -635,4 +655,11 @@ func wrap(s string, w int) []string {
 		lines = append(lines, cur)
 	}
 	return lines
+}
+
+func plural(n int) string {
+	if n == 1 {
+		return ""
+	}
+	return "s"
 }

@@ -18,6 +18,8 @@ type KeyMap struct {
 	FE                                 key.Binding // the finite-element check on/off
 	Basis                              key.Binding // the basis: classic method or finite-element model
 	Snapshot                           key.Binding // write a text report next to the file
+	Warnings                           key.Binding // every warning, most severe first
+	RowsUp, RowsDown                   key.Binding // scroll the pier table
 	Help, Quit                         key.Binding
 
 	screens []key.Binding // keys of registered screens
@@ -57,6 +59,9 @@ func newKeyMap() KeyMap {
 		FE:           b("finite-element check on/off", "f"),
 		Basis:        b("basis classic/fe", "b"),
 		Snapshot:     b("write report snapshot", "p"),
+		Warnings:     b("list the warnings", "!"),
+		RowsUp:       key.NewBinding(key.WithKeys("pgup"), key.WithHelp("pgup", "pier table up")),
+		RowsDown:     key.NewBinding(key.WithKeys("pgdown"), key.WithHelp("pgdown", "pier table down")),
 		Help:         b("help", "?"),
 		Quit:         key.NewBinding(key.WithKeys("q"), key.WithHelp("q", "quit")),
 	}
@@ -69,7 +74,7 @@ func newKeyMap() KeyMap {
 // ShortHelp is the hint line at the bottom of the elevation, in short
 // words, help and quit first so that a narrow window still shows them.
 func (k KeyMap) ShortHelp() []key.Binding {
-	return []key.Binding{short(k.Help, "help"), short(k.Quit, "quit"), short(k.Next, "select"), k.moveHint(), k.resizeHint(),
+	return []key.Binding{short(k.Help, "help"), short(k.Quit, "quit"), short(k.Warnings, "warnings"), short(k.Next, "select"), k.moveHint(), k.resizeHint(),
 		short(k.Step, "step"), short(k.AddWindow, "window"), short(k.AddDoor, "door"), short(k.Delete, "delete"),
 		short(k.EditOpening, "edit"), short(k.EditWall, "wall"), short(k.Undo, "undo"), short(k.Save, "save")}
 }
@@ -84,7 +89,7 @@ func (k KeyMap) FullHelp() [][]key.Binding {
 	groups := [][]key.Binding{
 		{k.Next, k.Prev, k.Left, k.Right, k.Up, k.Down, k.Narrower, k.Wider, k.Taller, k.Shorter, k.Step},
 		{k.AddDoor, k.AddWindow, k.Delete, k.Copy, k.EditOpening, k.EditWall, k.Undo, k.Redo},
-		{k.Save, k.SaveAs, k.NextLayout, k.PrevLayout, k.NewLayout, k.RenameLayout, k.DelLayout, k.FE, k.Basis, k.Snapshot, k.Help, k.Quit},
+		{k.Save, k.SaveAs, k.NextLayout, k.PrevLayout, k.NewLayout, k.RenameLayout, k.DelLayout, k.FE, k.Basis, k.Snapshot, k.Warnings, k.RowsUp, k.RowsDown, k.Help, k.Quit},
 	}
 	if len(k.screens) > 0 {
 		groups = append(groups, k.screens)

@@ -44,6 +44,15 @@ func tintLevel(share float64) int {
 	return len(tintBounds) - 1
 }
 
+// tintColors are the share tints, palest (least shear) first.
+var tintColors = [5]lipgloss.AdaptiveColor{
+	{Light: "#eeeeee", Dark: "#303030"},
+	{Light: "#ffd7af", Dark: "#5f3a00"},
+	{Light: "#ffaf5f", Dark: "#875f00"},
+	{Light: "#ff8700", Dark: "#af5f00"},
+	{Light: "#d75f00", Dark: "#d78700"},
+}
+
 func newStyles(r *lipgloss.Renderer) *styles {
 	if r == nil {
 		r = lipgloss.DefaultRenderer()
@@ -62,15 +71,10 @@ func newStyles(r *lipgloss.Renderer) *styles {
 	st.errText = ns().Bold(true).Foreground(lipgloss.AdaptiveColor{Light: "#b3261e", Dark: "#ff7b72"})
 	st.note = ns().Foreground(lipgloss.AdaptiveColor{Light: "#5a5a5a", Dark: "#b0b0b0"})
 	st.focus = ns().Bold(true)
-	// Warmer means more of the wall shear: from pale to deep orange.
-	bg := []lipgloss.AdaptiveColor{
-		{Light: "#f4f1ea", Dark: "#2a2a2a"},
-		{Light: "#fbe3c2", Dark: "#4a3a22"},
-		{Light: "#f8c98a", Dark: "#6b4a1c"},
-		{Light: "#f2a24e", Dark: "#8c5a12"},
-		{Light: "#e0761b", Dark: "#b0650a"},
-	}
-	for i, c := range bg {
+	// Warmer means more of the wall shear: from pale to deep orange. The
+	// colours are entries of the xterm 256-colour palette, so a 256-colour
+	// terminal shows five distinct tints too (TestTintsDistinctIn256).
+	for i, c := range tintColors {
 		st.tint[i] = ns().Background(c).Foreground(lipgloss.AdaptiveColor{Light: "#000000", Dark: "#ffffff"})
 	}
 	return st

@@ -1,6 +1,7 @@
 package tui
 
 import (
+	"fmt"
 	"io"
 	"strings"
 	"testing"
@@ -39,6 +40,25 @@ func TestMonochromeReads(t *testing.T) {
 	for _, label := range []string{"P1.2.1 37%", "P1.1 13%", "PASS"} {
 		if !strings.Contains(ansi.Strip(mono), label) || !strings.Contains(ansi.Strip(colour), label) {
 			t.Errorf("%q not in both views", label)
+		}
+	}
+}
+
+// The five share tints stay five colours in a 256-colour terminal, light and
+// dark (the 10–25 % and 25–40 % tints once mapped to one entry).
+func TestTintsDistinctIn256(t *testing.T) {
+	for _, dark := range []bool{false, true} {
+		seen := map[string]int{}
+		for i, c := range tintColors {
+			hex := c.Light
+			if dark {
+				hex = c.Dark
+			}
+			got := fmt.Sprint(termenv.ANSI256.Color(hex))
+			if j, dup := seen[got]; dup {
+				t.Errorf("dark %v: tints %d and %d are both %s in 256 colours", dark, j, i, got)
+			}
+			seen[got] = i
 		}
 	}
 }
