@@ -135,7 +135,7 @@ var Settings = []Setting{
 		Get: func(w *Wall) Value { return Value{Num: float64(w.Load.Shear)} }, Set: func(w *Wall, v Value) { w.Load.Shear = Force(v.Num) },
 		Check: checkShear},
 
-	{Key: "stiffness.flexure", Kind: KindNumber, Label: "stiffness flexure", Help: "x I_g; e.g. 0.35 cracked (ACI 318-14 6.6.3.1.1)",
+	{Key: "stiffness.flexure", Kind: KindNumber, Label: "stiffness flexure", Help: "x I_g; e.g. 0.35 cracked (ACI 318-19 Table 6.6.3.1.1(a))",
 		Default: Value{Num: 1}, Write: WriteWithTable, Form: 140,
 		Get: func(w *Wall) Value { return Value{Num: w.Stiffness.Flexure} }, Set: func(w *Wall, v Value) { w.Stiffness.Flexure = v.Num },
 		Check: checkModifier},
