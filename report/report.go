@@ -133,7 +133,7 @@ func wallBody(out io.Writer, in Input) error {
 	pierTable(w, res, wall)
 
 	w.Section("5. Results")
-	results(w, res, wall, u)
+	results(w, res, wall, u, in.FE)
 
 	n := 6
 	if in.FE != nil || in.FEErr != nil {
@@ -237,7 +237,7 @@ func steps(w *Text, res *pier.Result, wall *geometry.Wall) {
 		width = max(width, utf8.RuneCountInString(r.label))
 	}
 	for _, r := range rows {
-		w.Line(fmt.Sprintf("%-*s %s %8.4f", width, r.label, r.sign, r.value))
+		w.Line(fmt.Sprintf("%-*s %s %8s", width, r.label, r.sign, Sig(r.value)))
 	}
 }
 
@@ -273,7 +273,7 @@ func pierTable(w *Text, res *pier.Result, wall *geometry.Wall) {
 	}
 	var cut, nested bool
 	for _, p := range res.Piers {
-		rel, split := fmt.Sprintf("%.4f", p.Rigidity), "-"
+		rel, split := Sig(p.Rigidity), "-"
 		if d := p.Parts.Total(); d > 0 {
 			split = fmt.Sprintf("%.0f/%.0f %%", 100*p.Parts.Bending/d, 100*p.Parts.Shear/d)
 		}
@@ -282,9 +282,9 @@ func pierTable(w *Text, res *pier.Result, wall *geometry.Wall) {
 		}
 		nested = nested || (!p.Leaf && !p.Cut)
 		t.Add(name(p), L(p.H()), L(p.L()), fmt.Sprintf("%.2f", p.Ratio()), p.Support.String(), rel)
-		row := []string{name(p), fmt.Sprintf("%.1f %%", 100*p.Share), split}
+		row := []string{name(p), SigPercent(p.Share), split}
 		if res.HasLoad && !p.Cut {
-			row = append(row, fixed2(u.ForceOf(p.Shear)), fixed2(u.MomentOf(p.Moment)), fixed2(u.ForceOf(p.Loads.Lateral.Middle.Axial)))
+			row = append(row, Sig(u.ForceOf(p.Shear)), Sig(u.MomentOf(p.Moment)), Sig(u.ForceOf(p.Loads.Lateral.Middle.Axial)))
 		} else if res.HasLoad {
 			row = append(row, "-", "-", "-")
 		}
@@ -345,21 +345,13 @@ func sectionForces(w *Text, res *pier.Result, wall *geometry.Wall) Units {
 			}
 			row := []string{name, at.name}
 			if res.HasLoad {
-				row = append(row, fixed2(u.ForceOf(at.lat.Shear)), fixed2(u.MomentOf(at.lat.Moment)), fixed2(u.ForceOf(at.lat.Axial)))
+				row = append(row, Sig(u.ForceOf(at.lat.Shear)), Sig(u.MomentOf(at.lat.Moment)), Sig(u.ForceOf(at.lat.Axial)))
 			}
-			t.Add(append(row, fixed2(u.ForceOf(at.dead.Axial)), fixed2(u.ForceOf(at.live.Axial)))...)
+			t.Add(append(row, Sig(u.ForceOf(at.dead.Axial)), Sig(u.ForceOf(at.live.Axial)))...)
 		}
 	}
 	t.Write(w, "  ")
 	return u
-}
-
-// fixed2 prints a force or moment to two decimals, never as -0.00.
-func fixed2(x float64) string {
-	if math.Abs(x) < 0.005 {
-		x = 0
-	}
-	return fmt.Sprintf("%.2f", x)
 }
 
 // gravityLine describes the gravity loads of a wall: the line loads along
@@ -386,9 +378,13 @@ func gravityLine(wall *geometry.Wall) string {
 	return s + fmt.Sprintf("self weight %s lb/ft² of face (%s)", Number(float64(sw.Weight)/psf), how)
 }
 
-func results(w *Text, res *pier.Result, wall *geometry.Wall, u Units) {
-	w.KV("Δ relative", fmt.Sprintf("%.4f /(E·t)", res.Deflection))
-	w.KV("R relative", fmt.Sprintf("%.4f E·t", res.Rigidity))
+func results(w *Text, res *pier.Result, wall *geometry.Wall, u Units, f *fe.Result) {
+	w.KV("Δ relative", Sig(res.Deflection)+" /(E·t)")
+	w.KV("R relative", Sig(res.Rigidity)+" E·t")
+	if f != nil && f.Rigidity > 0 {
+		// The method's uncertainty for this wall (docs/method.md §1, §5).
+		w.KV("Uncertainty", fmt.Sprintf("%+.0f %%: the classic rigidity's difference from the finite-element model's for this wall (the finite-element check below), the method's uncertainty here", 100*f.Difference))
+	}
 	if d := res.Split.Total(); d > 0 {
 		w.KV("Split", fmt.Sprintf("bending %.0f %%, shear %.0f %% of the wall's deflection", 100*res.Split.Bending/d, 100*res.Split.Shear/d))
 	}
@@ -398,7 +394,7 @@ func results(w *Text, res *pier.Result, wall *geometry.Wall, u Units) {
 		if wall.Support == geometry.Fixed {
 			arm = "V·h/2, the top held against rotation"
 		}
-		w.KV("Overturning", fmt.Sprintf("M = %s %s at the base (%s)", Number(u.MomentOf(res.Overturning)), u.Moment, arm))
+		w.KV("Overturning", fmt.Sprintf("M = %s %s at the base (%s)", Sig(u.MomentOf(res.Overturning)), u.Moment, arm))
 	}
 }
 
@@ -410,12 +406,12 @@ func inUnits(w *Text, wall *geometry.Wall, u Units, rigidity float64, loaded boo
 		w.KV("Rigidity", "not known: the material gives no modulus")
 		return
 	}
-	w.KV("Rigidity", fmt.Sprintf("R = %s %s  (R relative × E·t)", Number(u.RigidityOf(rigidity)), u.Rigidity))
+	w.KV("Rigidity", fmt.Sprintf("R = %s %s  (R relative × E·t)", Sig(u.RigidityOf(rigidity)), u.Rigidity))
 	if !loaded {
 		w.KV("Deflection", "no load given")
 		return
 	}
-	w.KV("Deflection", fmt.Sprintf("δe = %s %s under V = %s", Number(u.DeflectionOf(defl)), u.Deflection, geometry.FormatForce(wall.Load.Shear, wall.Units)))
+	w.KV("Deflection", fmt.Sprintf("δe = %s %s under V = %s", Sig(u.DeflectionOf(defl)), u.Deflection, geometry.FormatForce(wall.Load.Shear, wall.Units)))
 	hs := "h_sx = " + geometry.FormatLength(d.Height, wall.Units)
 	if wall.Drift.StoreyHeight == 0 {
 		hs += " (the wall's height; no storey_height given)"
@@ -424,9 +420,9 @@ func inUnits(w *Text, wall *geometry.Wall, u Units, rigidity float64, loaded boo
 		w.KV("Drift", fmt.Sprintf("no design drift and no verdict: %s not given ([drift] cd and ie; ASCE 7-22 §12.8.6: δ = C_d·δe/I_e)", d.Missing))
 		return
 	}
-	w.KV("Drift", fmt.Sprintf("δ = C_d·δe/I_e = %s %s = %s h_sx, %s", Number(u.DeflectionOf(d.Design)), u.Deflection, Fraction(d.Ratio), hs))
+	w.KV("Drift", fmt.Sprintf("δ = C_d·δe/I_e = %s %s = %s h_sx, %s", Sig(u.DeflectionOf(d.Design)), u.Deflection, Fraction(d.Ratio), hs))
 	if d.Allowable > 0 {
-		w.KV("Drift limit", fmt.Sprintf("%s %s (%s h_sx): %s", Number(u.DeflectionOf(d.Allowable)), u.Deflection, Fraction(wall.Drift.Limit), d.Verdict()))
+		w.KV("Drift limit", fmt.Sprintf("%s %s (%s h_sx): %s", Sig(u.DeflectionOf(d.Allowable)), u.Deflection, Fraction(wall.Drift.Limit), d.Verdict()))
 	} else {
 		w.KV("Drift limit", "none set")
 	}
@@ -439,8 +435,8 @@ func feSection(w *Text, r *fe.Result, res *pier.Result, wall *geometry.Wall) {
 		supports = "base fixed; top nodes tied horizontally (collector); deflection = the collector's"
 	}
 	w.KV("Supports", supports)
-	w.KV("Δ relative", fmt.Sprintf("%.4f /(E·t)", r.Deflection))
-	w.KV("R relative", fmt.Sprintf("%.4f E·t", r.Rigidity))
+	w.KV("Δ relative", Sig(r.Deflection)+" /(E·t)")
+	w.KV("R relative", Sig(r.Rigidity)+" E·t")
 	inUnits(w, wall, UnitsFor(wall.Units), r.RigidityAbs, r.HasLoad, r.DeflectionAbs, r.Drift)
 	if res == nil {
 		return
@@ -459,7 +455,7 @@ func feSection(w *Text, r *fe.Result, res *pier.Result, wall *geometry.Wall) {
 		if !ok {
 			continue
 		}
-		t.Add(p.Name, fmt.Sprintf("%.1f %%", 100*p.Share), fmt.Sprintf("%.1f %%", 100*s), fmt.Sprintf("%+.1f pt", 100*(p.Share-s)))
+		t.Add(p.Name, SigPercent(p.Share), SigPercent(s), fmt.Sprintf("%+.1f pt", 100*(p.Share-s)))
 	}
 	t.Write(w, "  ")
 }

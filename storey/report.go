@@ -139,9 +139,9 @@ func reportBody(out io.Writer, a *Analysis, now time.Time, version string) error
 		rel := "given"
 		switch {
 		case s.Basis == geometry.BasisFE && wl.FE != nil:
-			rel = fmt.Sprintf("%.4f", wl.FE.Rigidity)
+			rel = report.Sig(wl.FE.Rigidity)
 		case wl.Unit != nil:
-			rel = fmt.Sprintf("%.4f", wl.Unit.Rigidity)
+			rel = report.Sig(wl.Unit.Rigidity)
 		}
 		t.Add(string(WallKey(i)), dir, line, from, rel, rigidity(a, u, wl.Rigidity))
 	}
@@ -201,7 +201,7 @@ func reportBody(out io.Writer, a *Analysis, now time.Time, version string) error
 		if c.Torsion.Amplification > 1 {
 			w.KV("A_x", fmt.Sprintf("%.3f: the accidental part is amplified (ASCE 7-22 §12.8.4.3)", c.Torsion.Amplification))
 		}
-		w.KV("V·e", fmt.Sprintf("%s %s", num(u.MomentOf(c.Torque), 1), u.Moment))
+		w.KV("V·e", fmt.Sprintf("%s %s", report.Sig(u.MomentOf(c.Torque)), u.Moment))
 		w.KV("Shears", u.Force+"; arm from the centre of rigidity across the wall's line, "+u.Coord)
 		w.Blank()
 		t := &report.Table{
@@ -212,10 +212,10 @@ func reportBody(out io.Writer, a *Analysis, now time.Time, version string) error
 			sh := c.Shares[i]
 			direct := "-"
 			if wl.Ref.Direction == c.Load || sh.Direct != 0 {
-				direct = num(u.ForceOf(geometry.Force(sh.Direct)), 2)
+				direct = report.Sig(u.ForceOf(geometry.Force(sh.Direct)))
 			}
 			t.Add(string(WallKey(i)), wl.Name, wl.Ref.Direction.String(), num(u.CoordOf(d.Distance[i]), 2), direct,
-				num(u.ForceOf(geometry.Force(sh.Torsional)), 2), num(u.ForceOf(geometry.Force(sh.Total())), 2))
+				report.Sig(u.ForceOf(geometry.Force(sh.Torsional))), report.Sig(u.ForceOf(geometry.Force(sh.Total()))))
 		}
 		t.Write(w, "  ")
 	}
@@ -238,13 +238,13 @@ func reportBody(out io.Writer, a *Analysis, now time.Time, version string) error
 		t.Right = []bool{false, false, false, true, true, true, false}
 	}
 	for i, wl := range a.Walls {
-		design := []string{num(u.ForceOf(geometry.Force(wl.Design.Shear)), 2), CaseName(d, wl.Design.Case), fmt.Sprintf("%.1f %%", 100*wl.Design.Shear/float64(s.Shear))}
+		design := []string{report.Sig(u.ForceOf(geometry.Force(wl.Design.Shear))), CaseName(d, wl.Design.Case), report.SigPercent(wl.Design.Shear / float64(s.Shear))}
 		if s.Diaphragm == Envelope {
-			t.Add(append([]string{string(WallKey(i)), wl.Name, dirName(wl.Ref), num(u.ForceOf(geometry.Force(wl.Rigid.Shear)), 2),
-				num(u.ForceOf(geometry.Force(wl.Flexible)), 2)}, design[:2]...)...)
+			t.Add(append([]string{string(WallKey(i)), wl.Name, dirName(wl.Ref), report.Sig(u.ForceOf(geometry.Force(wl.Rigid.Shear))),
+				report.Sig(u.ForceOf(geometry.Force(wl.Flexible)))}, design[:2]...)...)
 			continue
 		}
-		t.Add(append([]string{string(WallKey(i)), wl.Name, dirName(wl.Ref), num(u.ForceOf(geometry.Force(wl.Design.Direct)), 2)}, design...)...)
+		t.Add(append([]string{string(WallKey(i)), wl.Name, dirName(wl.Ref), report.Sig(u.ForceOf(geometry.Force(wl.Design.Direct)))}, design...)...)
 	}
 	t.Write(w, "  ")
 	if s.Diaphragm == Envelope {
@@ -275,7 +275,7 @@ func reportBody(out io.Writer, a *Analysis, now time.Time, version string) error
 		}
 		if wl.Wall == nil {
 			if a.Absolute && wl.Rigidity > 0 {
-				w.Line(fmt.Sprintf("   displacement under the design shear: %s %s (elastic)", num(u.DeflectionOf(geometry.Length(wl.Design.Shear/wl.Rigidity)), 4), u.Deflection))
+				w.Line(fmt.Sprintf("   displacement under the design shear: %s %s (elastic)", report.Sig(u.DeflectionOf(geometry.Length(wl.Design.Shear/wl.Rigidity))), u.Deflection))
 			}
 			continue
 		}
@@ -305,13 +305,13 @@ func reportBody(out io.Writer, a *Analysis, now time.Time, version string) error
 			}
 			for _, p := range leaves {
 				t.Add(p.Name, geometry.FormatLength(geometry.Length(p.H()), s.Units), geometry.FormatLength(geometry.Length(p.L()), s.Units),
-					fmt.Sprintf("%.2f", p.Ratio()), p.Support.String(), fmt.Sprintf("%.1f %%", 100*p.Share),
-					num(u.ForceOf(p.Shear), 2), num(u.MomentOf(p.Moment), 1))
+					fmt.Sprintf("%.2f", p.Ratio()), p.Support.String(), report.SigPercent(p.Share),
+					report.Sig(u.ForceOf(p.Shear)), report.Sig(u.MomentOf(p.Moment)))
 			}
 			t.Write(w, "   ")
 		}
 		if a.Absolute && wl.Rigidity > 0 {
-			w.Line(fmt.Sprintf("   top deflection under the design shear: %s %s (elastic)", num(u.DeflectionOf(geometry.Length(wl.Design.Shear/wl.Rigidity)), 4), u.Deflection))
+			w.Line(fmt.Sprintf("   top deflection under the design shear: %s %s (elastic)", report.Sig(u.DeflectionOf(geometry.Length(wl.Design.Shear/wl.Rigidity))), u.Deflection))
 		}
 		if line := DriftLine(res, u); line != "" && s.Basis == geometry.BasisClassic {
 			w.Wrapped("   ", line)
@@ -415,7 +415,7 @@ func flexibleSection(w *report.Text, a *Analysis, u report.Units) {
 				keys = append(keys, string(WallKey(i)))
 			}
 			t.Add(num(u.CoordOf(ln.Position), 2), num(u.CoordOf(ln.Tributary[0]), 2)+" to "+num(u.CoordOf(ln.Tributary[1]), 2),
-				num(u.ForceOf(geometry.Force(ln.Shear)), 2), strings.Join(keys, " "))
+				report.Sig(u.ForceOf(geometry.Force(ln.Shear))), strings.Join(keys, " "))
 		}
 		t.Write(w, "  ")
 	}
@@ -434,13 +434,13 @@ func driftSection(w *report.Text, a *Analysis, u report.Units, n int) {
 	row := func(t *report.Table, name string, dr Drift) {
 		verdict, lim := "-", "-"
 		if dr.Allowable > 0 {
-			lim = num(u.DeflectionOf(geometry.Length(dr.Allowable)), 3)
+			lim = report.Sig(u.DeflectionOf(geometry.Length(dr.Allowable)))
 			verdict = "OK"
 			if !dr.OK {
 				verdict = "EXCEEDS"
 			}
 		}
-		t.Add(name, num(u.DeflectionOf(geometry.Length(dr.Elastic)), 4), num(u.DeflectionOf(geometry.Length(dr.Design)), 4), fmt.Sprintf("%.5f", dr.Ratio), lim, verdict)
+		t.Add(name, report.Sig(u.DeflectionOf(geometry.Length(dr.Elastic))), report.Sig(u.DeflectionOf(geometry.Length(dr.Design))), fmt.Sprintf("%.5f", dr.Ratio), lim, verdict)
 	}
 	head := []string{"where", "δe " + u.Deflection, "δ " + u.Deflection, "δ/h", "limit " + u.Deflection, "check"}
 	right := []bool{false, true, true, true, true, false}
@@ -531,9 +531,9 @@ func rigUnit(a *Analysis, u report.Units) string {
 // or relative × thickness in the base unit of length.
 func rigidity(a *Analysis, u report.Units, r float64) string {
 	if a.Absolute {
-		return num(u.RigidityOf(r), 0)
+		return report.Sig(u.RigidityOf(r))
 	}
-	return num(u.CoordOf(r), 4)
+	return report.Sig(u.CoordOf(r))
 }
 
 func torsional(a *Analysis, u report.Units, j float64) string {

@@ -609,32 +609,14 @@ func unitName(s geometry.System) string {
 }
 
 // num3 formats a result with three significant digits.
-func num3(v float64) string {
-	if v == 0 || math.IsNaN(v) || math.IsInf(v, 0) || math.Abs(v) >= 1000 {
-		return num(v)
-	}
-	d := 2 - int(math.Floor(math.Log10(math.Abs(v))))
-	return fmt.Sprintf("%.*f", max(0, d), v)
-}
+func num3(v float64) string { return report.Sig(v) }
 
 // input formats a value the user typed, as typed.
 func input(v float64) string { return strconv.FormatFloat(v, 'g', -1, 64) }
 
-// num formats a result with four significant digits.
-func num(v float64) string {
-	if v == 0 || math.IsNaN(v) || math.IsInf(v, 0) {
-		return fmt.Sprint(v)
-	}
-	a := math.Abs(v)
-	switch {
-	case a >= 10000:
-		return fmt.Sprintf("%.0f", v)
-	case a >= 0.001:
-		d := 3 - int(math.Floor(math.Log10(a)))
-		return fmt.Sprintf("%.*f", max(0, d), v)
-	}
-	return fmt.Sprintf("%.3g", v)
-}
+// num formats a method-level result to three significant figures, as the
+// reports do (report.Sig, docs/method.md §1).
+func num(v float64) string { return report.Sig(v) }
 
 // wrap breaks s into lines of at most w cells at spaces.
 func wrap(s string, w int) []string {
