@@ -345,7 +345,7 @@ func (e *elevation) summaryView(l elevLayout) string {
 		if worst == pier.SeveritySerious {
 			style = st.fail
 		}
-		count = []string{style.Render(fmt.Sprintf("! %d warning%s (worst %s): key !", len(ws), plural(len(ws)), worst))}
+		count = []string{style.Render(fmt.Sprintf("! %d warning%s (%s): key !", len(ws), plural(len(ws)), worst))}
 	}
 	// On a short panel the inputs echoed above give way to the FE answer.
 	for k := len(extra) - 1; k >= 0 && len(lines)+1+len(count)+len(fe) > l.topH; k-- {

@@ -2,6 +2,8 @@ package tui
 
 import (
 	"cmp"
+	"fmt"
+	"math"
 	"slices"
 	"strings"
 
@@ -9,6 +11,7 @@ import (
 	tea "github.com/charmbracelet/bubbletea"
 
 	"pierwise/pier"
+	"pierwise/pier/fe"
 )
 
 // warnPage lists every warning of the wall, most severe first, as a
@@ -79,6 +82,10 @@ func (e *elevation) warnings() []pier.Warning {
 		ws = append(ws, e.res.Warnings...)
 	}
 	if e.fe.on && e.fe.res != nil && !e.fe.stale() {
+		if d := e.fe.res.Difference; e.res != nil && math.Abs(d) > fe.WarnDifference {
+			ws = append(ws, pier.Warning{Kind: "finite-element difference", Severity: pier.SeverityCaution, Subject: "wall",
+				Text: fmt.Sprintf("the classic method's rigidity differs from the finite-element model's by %+.0f %% (more than ±%.0f %%): the piers are not as well fixed as the method assumes; prefer the finite-element rigidity for distributing shear, or justify the difference", 100*d, 100*fe.WarnDifference)})
+		}
 		for _, t := range e.fe.res.Warnings {
 			ws = append(ws, pier.Warning{Kind: "finite-element", Severity: pier.SeverityCaution, Subject: "wall", Text: "FE check: " + t})
 		}

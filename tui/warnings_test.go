@@ -39,7 +39,7 @@ func TestWarningsPageAt80x24(t *testing.T) {
 			t.Fatalf("warnings not most severe first: %v", pier.Texts(ws))
 		}
 	}
-	if !strings.Contains(ed.view(), "warnings (worst") {
+	if !strings.Contains(ed.view(), "warnings (caution): key !") {
 		t.Errorf("the panel does not count the warnings:\n%s", ed.view())
 	}
 	ed.press(runes("!"))
