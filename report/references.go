@@ -55,6 +55,29 @@ func WallReferences(w *geometry.Wall, res *pier.Result) []Reference {
 	return refs
 }
 
+// StoreyReferences lists the published sources of the storey report, with
+// edition and clause (docs/method.md §9, §12); each wall's own report lists
+// those of its wall.
+func StoreyReferences(drift, sdc bool) []Reference {
+	refs := []Reference{
+		{"ASCE/SEI 7-22", "§12.8.4.1, §12.8.4.2", "inherent and accidental torsion, 5 % of the plan dimension"},
+		{"ASCE/SEI 7-22", "Table 12.3-1 (Types 1a, 1b)", "torsional irregularity"},
+		{"ASCE/SEI 7-22", "§12.3.1", "diaphragm flexibility"},
+		{"Taly, Design of Reinforced Masonry Structures, 2nd ed. (2010)", "§7.9", "centre of rigidity, direct and torsional shears"},
+	}
+	if sdc {
+		refs = append(refs, Reference{"ASCE/SEI 7-22", "§12.8.4.3, §11.6", "amplification A_x of accidental torsion; seismic design category"})
+	}
+	if drift {
+		refs = append(refs, refDrift, refDriftLimit)
+	}
+	return refs
+}
+
+// References writes a table of sources, one numbered entry each (the
+// storey report's; the wall report writes its own through it too).
+func References(w *Text, refs []Reference) { references(w, refs) }
+
 // references writes the table of sources, one numbered entry each:
 // source, clause: use (the long titles wrap, which columns would not).
 func references(w *Text, refs []Reference) {

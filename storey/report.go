@@ -318,6 +318,10 @@ func reportBody(out io.Writer, a *Analysis, now time.Time, version string) error
 		}
 	}
 
+	w.Section(fmt.Sprintf("%d. References (edition and clause)", n))
+	report.References(w, report.StoreyReferences(s.Cd > 0, s.SDC != ""))
+	n++
+
 	w.Section(fmt.Sprintf("%d. Diaphragm assumption", n))
 	closing := "The diaphragm is assumed rigid; a flexible diaphragm shares the shear by tributary area instead."
 	switch s.Diaphragm {
