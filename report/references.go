@@ -60,7 +60,7 @@ func WallReferences(w *geometry.Wall, res *pier.Result) []Reference {
 // those of its wall.
 func StoreyReferences(drift, sdc bool) []Reference {
 	refs := []Reference{
-		{"ASCE/SEI 7-22", "§12.8.4.1, §12.8.4.2", "inherent and accidental torsion, 5 % of the plan dimension"},
+		{"ASCE/SEI 7-22", "§12.8.4.1, §12.8.4.2", "inherent and accidental torsion (five per cent of the plan dimension)"},
 		{"ASCE/SEI 7-22", "Table 12.3-1 (Types 1a, 1b)", "torsional irregularity"},
 		{"ASCE/SEI 7-22", "§12.3.1", "diaphragm flexibility"},
 		{"Taly, Design of Reinforced Masonry Structures, 2nd ed. (2010)", "§7.9", "centre of rigidity, direct and torsional shears"},
