@@ -461,13 +461,13 @@ func (s *storeyScreen) tableView(w, h int) string {
 		rel := "  given"
 		switch {
 		case wl.FE != nil && s.st.Basis == geometry.BasisFE:
-			rel = fmt.Sprintf("%7.4f", wl.FE.Rigidity)
+			rel = padLeft(report.Sig(wl.FE.Rigidity), 7)
 		case wl.Unit != nil:
-			rel = fmt.Sprintf("%7.4f", wl.Unit.Rigidity)
+			rel = padLeft(report.Sig(wl.Unit.Rigidity), 7)
 		}
-		row := fmt.Sprintf("%c%s%-*s %-3s %s %8.2f %5.1f%% %-8s", storey.WallKey(i), mark, nameW, truncate(geometry.Visible(wl.Name), nameW), dir,
-			rel, u.ForceOf(geometry.Force(wl.Design.Shear)),
-			100*wl.Design.Shear/float64(s.st.Shear), storey.CaseName(d, wl.Design.Case))
+		row := fmt.Sprintf("%c%s%-*s %-3s %s %8s %5s%% %-8s", storey.WallKey(i), mark, nameW, truncate(geometry.Visible(wl.Name), nameW), dir,
+			rel, report.Sig(u.ForceOf(geometry.Force(wl.Design.Shear))),
+			report.Sig(100*wl.Design.Shear/float64(s.st.Shear)), storey.CaseName(d, wl.Design.Case))
 		row = truncate(row, w)
 		if i == s.sel {
 			row = st.selected.Render(padRight(row, w))
@@ -508,8 +508,8 @@ func (s *storeyScreen) tableView(w, h int) string {
 	lines = append(lines, "")
 	sel := a.Walls[s.sel]
 	lines = append(lines, st.heading.Render(truncate(geometry.Visible(sel.Name), w)))
-	lines = append(lines, truncate(fmt.Sprintf("direct %.2f, design %.2f %s (%s)", u.ForceOf(geometry.Force(sel.Design.Direct)),
-		u.ForceOf(geometry.Force(sel.Design.Shear)), u.Force, storey.CaseName(d, sel.Design.Case)), w))
+	lines = append(lines, truncate(fmt.Sprintf("direct %s, design %s %s (%s)", report.Sig(u.ForceOf(geometry.Force(sel.Design.Direct))),
+		report.Sig(u.ForceOf(geometry.Force(sel.Design.Shear))), u.Force, storey.CaseName(d, sel.Design.Case)), w))
 	if sel.Drift.Checked {
 		verdict := ""
 		if sel.Drift.Allowable > 0 {
@@ -541,8 +541,8 @@ func (s *storeyScreen) tableView(w, h int) string {
 			break
 		}
 		support := p.Support.String()
-		lines = append(lines, truncate(fmt.Sprintf("%-7s %5.2f %-10s %5.1f%% %8.2f %9.1f", p.Name, p.Ratio(), support, 100*p.Share,
-			u.ForceOf(p.Shear), u.MomentOf(p.Moment)), w))
+		lines = append(lines, truncate(fmt.Sprintf("%-7s %5.2f %-10s %5s%% %8s %9s", p.Name, p.Ratio(), support, report.Sig(100*p.Share),
+			report.Sig(u.ForceOf(p.Shear)), report.Sig(u.MomentOf(p.Moment))), w))
 	}
 	return strings.Join(lines, "\n")
 }
