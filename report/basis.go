@@ -37,7 +37,7 @@ func wallFE(w *Text, in Input) error {
 	if err := b.Err(); err != nil {
 		w.Wrapped("  ", fmt.Sprintf("The finite-element model has no answer for this layout: %v.", b.FEErr))
 		if b.Classic != nil {
-			w.Wrapped("  ", fmt.Sprintf("The classic method would give a relative rigidity of %.4f E·t; run the report on the classic basis (--basis classic) for its numbers.", b.Classic.Rigidity))
+			w.Wrapped("  ", fmt.Sprintf("The classic method would give a relative rigidity of %s E·t; run the report on the classic basis (--basis classic) for its numbers.", Sig(b.Classic.Rigidity)))
 		}
 		w.Section("4. Warnings")
 		w.Close(nil)
@@ -56,23 +56,23 @@ func wallFE(w *Text, in Input) error {
 	}
 
 	w.Section(fmt.Sprintf("%d. Results", n))
-	w.KV("Δ relative", fmt.Sprintf("%.4f /(E·t)", b.Deflection()))
-	w.KV("R relative", fmt.Sprintf("%.4f E·t", b.Rigidity()))
+	w.KV("Δ relative", Sig(b.Deflection())+" /(E·t)")
+	w.KV("R relative", Sig(b.Rigidity())+" E·t")
 	inUnits(w, wall, u, b.RigidityAbs(), b.HasLoad(), b.DeflectionAbs(), b.Drift())
 	if wall.Load.Shear > 0 {
 		arm := "V·h"
 		if wall.Support == geometry.Fixed {
 			arm = "V·h/2, the top held against rotation"
 		}
-		w.KV("Overturning", fmt.Sprintf("M = %s %s at the base (%s)", Number(u.MomentOf(b.Overturning())), u.Moment, arm))
+		w.KV("Overturning", fmt.Sprintf("M = %s %s at the base (%s)", Sig(u.MomentOf(b.Overturning())), u.Moment, arm))
 	}
 	n++
 
 	w.Section(fmt.Sprintf("%d. Check: the classic method", n))
 	if c, ok := b.Check(); ok {
-		w.KV("R relative", fmt.Sprintf("%.4f E·t (classic method)", c.Rigidity))
+		w.KV("R relative", Sig(c.Rigidity)+" E·t (classic method)")
 		if c.RigidityAbs > 0 {
-			w.KV("Rigidity", fmt.Sprintf("R = %s %s (classic method)", Number(u.RigidityOf(c.RigidityAbs)), u.Rigidity))
+			w.KV("Rigidity", fmt.Sprintf("R = %s %s (classic method)", Sig(u.RigidityOf(c.RigidityAbs)), u.Rigidity))
 		}
 		w.KV("Difference", "the classic rigidity is "+ClassicVersusFE(c.Difference)+" the finite-element rigidity")
 	} else {
@@ -111,9 +111,9 @@ func piersFE(w *Text, b *basis.Result, u Units) {
 			name += "*"
 			nested = true
 		}
-		row := []string{name, L(p.H()), L(p.L()), fmt.Sprintf("%.2f", p.Ratio()), p.Support.String(), fmt.Sprintf("%.1f %%", 100*p.Share), fmt.Sprintf("%.1f %%", 100*p.Classic.Share)}
+		row := []string{name, L(p.H()), L(p.L()), fmt.Sprintf("%.2f", p.Ratio()), p.Support.String(), SigPercent(p.Share), SigPercent(p.Classic.Share)}
 		if loaded && !p.Cut {
-			row = append(row, fixed2(u.ForceOf(p.Shear)), fixed2(u.MomentOf(p.Moment)))
+			row = append(row, Sig(u.ForceOf(p.Shear)), Sig(u.MomentOf(p.Moment)))
 		} else if loaded {
 			row = append(row, "-", "-")
 		}

@@ -99,7 +99,14 @@ func toJSONFE(s *solved) jsonWall {
 	if r.HasLoad() {
 		d := r.Drift()
 		j.Deflection = ptr(u.DeflectionOf(r.DeflectionAbs()))
-		jd := &jsonDrift{Design: u.DeflectionOf(d.Design), Ratio: d.Ratio, OK: d.OK}
+		jd := &jsonDrift{StoreyHeight: u.CoordOf(float64(d.Height)), Missing: d.Missing}
+		if d.Missing == "" {
+			jd.Design, jd.Ratio = ptr(u.DeflectionOf(d.Design)), ptr(d.Ratio)
+		}
+		if d.Judged() {
+			ok := d.OK
+			jd.OK = &ok
+		}
 		if d.Allowable > 0 {
 			jd.Allowable, jd.Limit = ptr(u.DeflectionOf(d.Allowable)), ptr(w.Drift.Limit)
 		}

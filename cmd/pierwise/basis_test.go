@@ -158,7 +158,7 @@ func TestReportAndTableFEBasis(t *testing.T) {
 	if code != exitOK {
 		t.Fatalf("exit %d: %s", code, errs)
 	}
-	for _, want := range []string{"Basis:       finite-element model", "Check: the classic method", "0.1315 E·t (classic method)", "local codes govern"} {
+	for _, want := range []string{"Basis:       finite-element model", "Check: the classic method", "0.131 E·t (classic method)", "local codes govern"} {
 		if !strings.Contains(out, want) {
 			t.Errorf("report lacks %q", want)
 		}
