@@ -186,18 +186,7 @@ func writeSolveTableFE(out io.Writer, s *solved) {
 		t.Wrapped("  ", fmt.Sprintf("check: the classic method has no answer: %v", s.err))
 	}
 	if r.HasLoad() {
-		d := r.Drift()
-		t.Line(fmt.Sprintf("  V = %s: δe = %s %s; δ = Cd·δe/Ie = %s %s = %s h", geometry.FormatForce(w.Load.Shear, w.Units),
-			report.Number(u.DeflectionOf(r.DeflectionAbs())), u.Deflection, report.Number(u.DeflectionOf(d.Design)), u.Deflection, report.Fraction(d.Ratio)))
-		check := "  drift limit: none set"
-		if d.Allowable > 0 {
-			verdict := "OK"
-			if !d.OK {
-				verdict = "EXCEEDED"
-			}
-			check = fmt.Sprintf("  drift limit %s h = %s %s: %s", report.Fraction(w.Drift.Limit), report.Number(u.DeflectionOf(d.Allowable)), u.Deflection, verdict)
-		}
-		t.Line(check)
+		driftLines(t, w, r.DeflectionAbs(), r.Drift())
 	}
 	if w.Load.Shear > 0 {
 		t.Line(fmt.Sprintf("  overturning moment at the base %s %s", report.Number(u.MomentOf(r.Overturning())), u.Moment))

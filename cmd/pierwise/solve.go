@@ -265,19 +265,7 @@ func writeSolveTable(out io.Writer, s *solved) {
 		t.Line(fmt.Sprintf("  E = %s, E_v = %s; rigidity %s %s", geometry.FormatStress(r.Moduli.E, w.Units), geometry.FormatStress(r.Moduli.Ev, w.Units), report.Number(u.RigidityOf(r.RigidityAbs)), u.Rigidity))
 	}
 	if r.HasLoad {
-		d := r.Drift
-		if d.Missing != "" {
-			t.Line(fmt.Sprintf("  V = %s: δe = %s %s; no design drift: %s not given", geometry.FormatForce(w.Load.Shear, w.Units),
-				report.Number(u.DeflectionOf(r.DeflectionAbs)), u.Deflection, d.Missing))
-		} else {
-			t.Line(fmt.Sprintf("  V = %s: δe = %s %s; δ = Cd·δe/Ie = %s %s = %s h_sx", geometry.FormatForce(w.Load.Shear, w.Units),
-				report.Number(u.DeflectionOf(r.DeflectionAbs)), u.Deflection, report.Number(u.DeflectionOf(d.Design)), u.Deflection, report.Fraction(d.Ratio)))
-		}
-		check := "  drift limit: none set"
-		if d.Allowable > 0 {
-			check = fmt.Sprintf("  drift limit %s h_sx = %s %s: %s", report.Fraction(w.Drift.Limit), report.Number(u.DeflectionOf(d.Allowable)), u.Deflection, d.Verdict())
-		}
-		t.Line(check)
+		driftLines(t, w, r.DeflectionAbs, r.Drift)
 	}
 	if r.HasLoad {
 		t.Line(fmt.Sprintf("  overturning moment at the base %s %s", report.Number(u.MomentOf(r.Overturning)), u.Moment))
@@ -288,6 +276,25 @@ func writeSolveTable(out io.Writer, s *solved) {
 		t.Wrapped("  warning: ", warn.Text)
 	}
 	writeFETable(t, s)
+}
+
+// driftLines writes the top deflection δe under the wall's shear and the
+// drift check of either basis: no design drift (and no verdict) when C_d or
+// I_e is not given (docs/method.md §7).
+func driftLines(t *report.Text, w *geometry.Wall, elastic geometry.Length, d pier.DriftCheck) {
+	u := report.UnitsFor(w.Units)
+	if d.Missing != "" {
+		t.Line(fmt.Sprintf("  V = %s: δe = %s %s; no design drift: %s not given", geometry.FormatForce(w.Load.Shear, w.Units),
+			report.Number(u.DeflectionOf(elastic)), u.Deflection, d.Missing))
+	} else {
+		t.Line(fmt.Sprintf("  V = %s: δe = %s %s; δ = Cd·δe/Ie = %s %s = %s h_sx", geometry.FormatForce(w.Load.Shear, w.Units),
+			report.Number(u.DeflectionOf(elastic)), u.Deflection, report.Number(u.DeflectionOf(d.Design)), u.Deflection, report.Fraction(d.Ratio)))
+	}
+	check := "  drift limit: none set"
+	if d.Allowable > 0 {
+		check = fmt.Sprintf("  drift limit %s h_sx = %s %s: %s", report.Fraction(w.Drift.Limit), report.Number(u.DeflectionOf(d.Allowable)), u.Deflection, d.Verdict())
+	}
+	t.Line(check)
 }
 
 // pierRows writes the pier table of the solve command: * marks a pier with
