@@ -1,0 +1,49 @@
+package design
+
+import (
+	"pierwise/geometry"
+	"pierwise/pier"
+)
+
+// SettingsOf returns the design settings of a wall file: its [design] table
+// and its load kind, the code from the material when the file gives none.
+// A wall without a [design] table gets the defaults (ordinary class, S_DS 0,
+// ρ 1).
+func SettingsOf(w *geometry.Wall) Settings {
+	s := Settings{Code: w.DesignCode(), Kind: w.Load.Kind}
+	if d := w.Design; d != nil {
+		s.Class, s.SDS, s.Rho, s.Mortar = d.Class, d.SDS, d.Rho, d.Mortar
+	}
+	return s
+}
+
+// InputOf is the one place a wall and its piers' forces become the checks'
+// input (docs/method.md §8). The piers come from the model the analysis is
+// based on: ClassicPiers for the classic method; a finite-element basis
+// gives its own []PierInput from its pier section forces.
+func InputOf(w *geometry.Wall, piers []PierInput) Input {
+	return Input{Wall: WallOf(w), Reinforcement: w.Reinforcement, Settings: SettingsOf(w), Piers: piers}
+}
+
+// ClassicPiers returns the leaf piers of a classic result with their section
+// forces by load case. Cut piers (no load path) are left out.
+func ClassicPiers(res *pier.Result) []PierInput {
+	var out []PierInput
+	for _, p := range res.Leaves() {
+		if p.Cut {
+			continue
+		}
+		out = append(out, PierInput{Name: p.Name, Rect: p.Rect, Loads: classicLoads(p)})
+	}
+	return out
+}
+
+// CheckClassic checks a wall whose file has a [design] table, from the classic
+// result; ok is false when the wall has none.
+func CheckClassic(w *geometry.Wall, res *pier.Result) (r Result, ok bool, err error) {
+	if w.Design == nil {
+		return Result{}, false, nil
+	}
+	r, err = CheckWall(InputOf(w, ClassicPiers(res)))
+	return r, err == nil, err
+}
