@@ -202,8 +202,8 @@ type Wall struct {
 	Design        *Design
 	barText       map[string]string // bars a file gave that could not be read, by key
 
-	Layouts   []Layout // at least one; Layouts[0] holds the file's top-level openings
-	Active    int      // index into Layouts
+	Layouts []Layout // at least one; Layouts[0] holds the file's top-level openings
+	Active  int      // index into Layouts
 }
 
 // Openings returns the openings of the active layout.
