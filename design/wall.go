@@ -26,14 +26,16 @@ func InputOf(w *geometry.Wall, piers []PierInput) Input {
 }
 
 // ClassicPiers returns the leaf piers of a classic result with their section
-// forces by load case. Cut piers (no load path) are left out.
+// forces by load case (docs/method.md §6): the lateral shear, moment and
+// overturning axial force, and the tributary dead and live axial forces.
+// Cut piers (no load path) are left out. A solid wall is one pier P1.
 func ClassicPiers(res *pier.Result) []PierInput {
 	var out []PierInput
 	for _, p := range res.Leaves() {
 		if p.Cut {
 			continue
 		}
-		out = append(out, PierInput{Name: p.Name, Rect: p.Rect, Loads: classicLoads(p)})
+		out = append(out, PierInput{Name: p.Name, Rect: p.Rect, Loads: p.Loads})
 	}
 	return out
 }
