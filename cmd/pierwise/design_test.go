@@ -23,9 +23,8 @@ func TestSolveDesignJSON(t *testing.T) {
 			Caution        string  `json:"caution"`
 		} `json:"design"`
 		Piers []struct {
-			Name   string  `json:"name"`
-			Leaf   bool    `json:"leaf"`
-			X0, X1 float64 `json:"x0"`
+			Name   string `json:"name"`
+			Leaf   bool   `json:"leaf"`
 			Bars   []struct{ X, Area float64 }
 			Design *struct {
 				Checks []struct {
