@@ -56,6 +56,9 @@ type elevation struct {
 	rows   scroller // the pier table's first row shown (pgup, pgdown)
 	saving bool     // a save command is under way
 	drag   drag
+
+	design designState // the pier design of res (docs/method.md §8)
+	ratios bool        // draw demand/capacity ratios instead of shares
 }
 
 type elevationMode int
@@ -127,6 +130,7 @@ func (e *elevation) resolve() {
 		w = &loaded
 	}
 	e.res, e.solveErr = pier.Solve(w)
+	e.design = checkDesign(w, e.res)
 	e.version = e.c.doc.version
 	n := len(w.Openings())
 	if e.sel >= n {
@@ -407,6 +411,8 @@ func (e *elevation) wallKey(msg tea.KeyMsg) (tea.Cmd, bool) {
 		e.openRenameForm()
 	case key.Matches(msg, k.DelLayout):
 		e.deleteLayout()
+	case key.Matches(msg, k.Ratios):
+		e.toggleRatios()
 	default:
 		return nil, false
 	}
