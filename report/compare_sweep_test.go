@@ -148,7 +148,7 @@ func TestSweepTableDesign(t *testing.T) {
 		t.Errorf("%d passes marks for %d passing positions:\n%s", got, passes, out)
 	}
 	best := pts[study.BestIndex(pts)]
-	if !strings.Contains(out, Ratio(best.Ratio)+" "+best.RatioPier) || !strings.Contains(out, "Best: the lowest governing ratio") ||
+	if !strings.Contains(out, Ratio(best.Ratio)+" "+best.RatioPier) || !strings.Contains(out, "D/C is the wall's governing") ||
 		!strings.Contains(out, "amendments govern") {
 		t.Errorf("table lacks the best ratio, the rule or the caution:\n%s", out)
 	}
