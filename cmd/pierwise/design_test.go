@@ -5,6 +5,11 @@ import (
 	"math"
 	"strings"
 	"testing"
+
+	"pierwise/design"
+	"pierwise/geometry"
+	"pierwise/pier"
+	"pierwise/storey"
 )
 
 // solve --json of the reinforced example wall: every leaf pier has its bars
@@ -86,5 +91,30 @@ func TestSolveDesignJSON(t *testing.T) {
 	code, out, _ = runCLI("solve", "../../testdata/walls/cmu-reinforced.toml")
 	if code != exitOK || !strings.Contains(out, "design: tms402-22, intermediate; governing "+w.Design.GoverningPier) {
 		t.Errorf("solve table lacks the governing line:\n%s", out)
+	}
+}
+
+// draw --show ratios draws the reinforced wall's ratios; the storey's hook
+// gives each wall with [design] its governing pier.
+func TestDrawRatiosAndStoreyHook(t *testing.T) {
+	code, out, errs := runCLI("draw", "../../testdata/walls/cmu-reinforced.toml", "--show", "ratios")
+	if code != exitOK || !strings.Contains(out, "<svg") {
+		t.Fatalf("exit %d: %s", code, errs)
+	}
+	w, err := geometry.LoadFile("../../testdata/walls/cmu-reinforced.toml")
+	if err != nil {
+		t.Fatal(err)
+	}
+	res, err := pier.Solve(w)
+	if err != nil {
+		t.Fatal(err)
+	}
+	g, err := storey.PierDesign(w, res, nil)
+	if err != nil || g == nil {
+		t.Fatalf("storey hook: %v %v", g, err)
+	}
+	d, _, _ := design.CheckClassic(w, res)
+	if g.Pier != d.Piers[d.Governing].Name || math.Abs(g.Ratio-d.Ratio) > 1e-12 {
+		t.Errorf("storey hook %+v, design %s %.4f", g, d.Piers[d.Governing].Name, d.Ratio)
 	}
 }
