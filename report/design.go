@@ -72,7 +72,7 @@ func GoverningLine(r *design.Result) string {
 func designInputs(w *Text, wall *geometry.Wall, r *design.Result) {
 	sys := wall.Units
 	rf := wall.Reinforcement
-	if !rf.Reinforced() && rf != nil && rf.Horizontal.Spacing == 0 || rf == nil {
+	if rf == nil || (!rf.Reinforced() && rf.Horizontal.Spacing == 0) {
 		w.KV("Bars", "none (unreinforced)")
 	} else {
 		var parts []string
