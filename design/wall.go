@@ -3,6 +3,7 @@ package design
 import (
 	"pierwise/geometry"
 	"pierwise/pier"
+	"pierwise/pier/fe"
 )
 
 // SettingsOf returns the design settings of a wall file: its [design] table
@@ -48,4 +49,18 @@ func CheckClassic(w *geometry.Wall, res *pier.Result) (r Result, ok bool, err er
 	}
 	r, err = CheckWall(InputOf(w, ClassicPiers(res)))
 	return r, err == nil, err
+}
+
+// FEPiers returns the leaf piers of a finite-element result with the
+// model's section forces by load case (docs/method.md §4, §6): the same
+// piers as ClassicPiers, their forces from the plane-stress model. A basis
+// switch hands these to InputOf in place of ClassicPiers.
+func FEPiers(r *fe.Result) []PierInput {
+	var out []PierInput
+	for _, p := range r.Forces {
+		if p.Leaf {
+			out = append(out, PierInput{Name: p.Name, Rect: p.Rect, Loads: p.Loads})
+		}
+	}
+	return out
 }
