@@ -205,3 +205,61 @@ func TestPMPlotMarks(t *testing.T) {
 		t.Fatal("NaN ratio")
 	}
 }
+
+// D edits the pier design: a wall without one gets it, a bad bar is refused
+// on its field with the reason, and the ratios follow at once; applying the
+// form of the example wall unchanged keeps its inputs.
+func TestDesignForm(t *testing.T) {
+	ed := newEditor(t, annex(), "", 100, 30)
+	ed.press(runes("D"))
+	if ed.elev().mode != modeForm || !strings.Contains(ed.view(), "Pier design") {
+		t.Fatalf("D opens no form:\n%s", ed.view())
+	}
+	ed.typeText("yes")
+	for range dfFy {
+		ed.press(keyTab)
+	}
+	ed.typeText("60ksi")
+	ed.press(keyTab)
+	ed.typeText("#13@48in")
+	ed.press(keyEnter)
+	if ed.elev().mode != modeForm || !strings.Contains(ed.view(), "unknown bar size") {
+		t.Fatalf("bad bar accepted:\n%s", ed.view())
+	}
+	ed.typeText("#5@48in")
+	ed.press(keyTab)
+	ed.typeText("1#5")
+	ed.press(keyEnter)
+	if ed.elev().mode != modeNormal {
+		t.Fatalf("good bars refused:\n%s", ed.view())
+	}
+	w := ed.wall()
+	if w.Design == nil || w.Reinforcement == nil || w.Reinforcement.Vertical.Size.Name != "#5" || w.Reinforcement.Jamb.Count != 1 {
+		t.Fatalf("design inputs not set: %+v %+v", w.Design, w.Reinforcement)
+	}
+	if ed.elev().design.res == nil {
+		t.Fatalf("no checks after the form: %v", ed.elev().design.err)
+	}
+	ed.press(runes("R"))
+	if !ed.elev().showRatios() {
+		t.Error("R after the form shows no ratios")
+	}
+	// Unchanged, the example wall's inputs survive the form.
+	ed = newEditor(t, reinforced(t), "", 100, 30)
+	before := ed.wall().Clone()
+	ed.press(runes("D"), keyEnter)
+	if *ed.wall().Design != *before.Design || *ed.wall().Reinforcement != *before.Reinforcement || ed.wall().Load != before.Load {
+		t.Errorf("form applied unchanged changed the inputs:\n%+v\n%+v", ed.wall().Reinforcement, before.Reinforcement)
+	}
+	// "no" turns the design off (and undo brings it back).
+	ed.press(runes("D"))
+	ed.typeText("no")
+	ed.press(keyEnter)
+	if ed.wall().Design != nil || ed.elev().design.on {
+		t.Error("no left the design on")
+	}
+	ed.press(runes("u"))
+	if ed.wall().Design == nil {
+		t.Error("undo did not bring the design back")
+	}
+}

@@ -413,6 +413,8 @@ func (e *elevation) wallKey(msg tea.KeyMsg) (tea.Cmd, bool) {
 		e.deleteLayout()
 	case key.Matches(msg, k.Ratios):
 		e.toggleRatios()
+	case key.Matches(msg, k.DesignForm):
+		e.openDesignForm()
 	default:
 		return nil, false
 	}

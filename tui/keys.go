@@ -21,6 +21,7 @@ type KeyMap struct {
 	Warnings                           key.Binding // every warning, most severe first
 	RowsUp, RowsDown                   key.Binding // scroll the pier table
 	Ratios                             key.Binding // pier demand/capacity ratios instead of shares
+	DesignForm                         key.Binding // the pier design inputs
 	Help, Quit                         key.Binding
 
 	screens []key.Binding // keys of registered screens
@@ -64,6 +65,7 @@ func newKeyMap() KeyMap {
 		RowsUp:       key.NewBinding(key.WithKeys("pgup"), key.WithHelp("pgup", "pier table up")),
 		RowsDown:     key.NewBinding(key.WithKeys("pgdown"), key.WithHelp("pgdown", "pier table down")),
 		Ratios:       b("pier design ratios on/off", "R"),
+		DesignForm:   b("edit pier design (bars, code, S_DS)", "D"),
 		Help:         b("help", "?"),
 		Quit:         key.NewBinding(key.WithKeys("q"), key.WithHelp("q", "quit")),
 	}
@@ -90,7 +92,7 @@ func short(b key.Binding, desc string) key.Binding {
 func (k KeyMap) FullHelp() [][]key.Binding {
 	groups := [][]key.Binding{
 		{k.Next, k.Prev, k.Left, k.Right, k.Up, k.Down, k.Narrower, k.Wider, k.Taller, k.Shorter, k.Step},
-		{k.AddDoor, k.AddWindow, k.Delete, k.Copy, k.EditOpening, k.EditWall, k.Undo, k.Redo},
+		{k.AddDoor, k.AddWindow, k.Delete, k.Copy, k.EditOpening, k.EditWall, k.DesignForm, k.Undo, k.Redo},
 		{k.Save, k.SaveAs, k.NextLayout, k.PrevLayout, k.NewLayout, k.RenameLayout, k.DelLayout, k.FE, k.Basis, k.Snapshot, k.Ratios, k.Warnings, k.RowsUp, k.RowsDown, k.Help, k.Quit},
 	}
 	if len(k.screens) > 0 {
