@@ -64,8 +64,8 @@ func newKeyMap() KeyMap {
 		Warnings:     b("list the warnings", "!"),
 		RowsUp:       key.NewBinding(key.WithKeys("pgup"), key.WithHelp("pgup", "pier table up")),
 		RowsDown:     key.NewBinding(key.WithKeys("pgdown"), key.WithHelp("pgdown", "pier table down")),
-		Ratios:       b("pier design ratios on/off", "R"),
-		DesignForm:   b("edit pier design (bars, code, S_DS)", "D"),
+		Ratios:       b("ratios on/off", "R"),
+		DesignForm:   b("pier design inputs", "D"),
 		Help:         b("help", "?"),
 		Quit:         key.NewBinding(key.WithKeys("q"), key.WithHelp("q", "quit")),
 	}
