@@ -121,8 +121,8 @@ func barSpacingText(b BarSpacing, sys System) string {
 var designSettings = []Setting{
 	{Key: "load.kind", Kind: KindChoice, Label: "load kind", Help: "seismic or wind", Noun: "load kind",
 		Choices: []string{Seismic: "seismic", Wind: "wind"}, Default: Value{Text: "seismic"},
-		Get: func(w *Wall) Value { return Value{Text: w.Load.Kind.String()} },
-		Set: func(w *Wall, v Value) { w.Load.Kind, _ = ParseLoadKind(v.Text) },
+		Get:   func(w *Wall) Value { return Value{Text: w.Load.Kind.String()} },
+		Set:   func(w *Wall, v Value) { w.Load.Kind, _ = ParseLoadKind(v.Text) },
 		Check: func(*Setting, *Wall, *ErrorList) {}},
 
 	{Key: "reinforcement.grout", Kind: KindChoice, Label: "grout", Noun: "grout", Choices: []string{FullGrout: "full", PartialGrout: "partial"},

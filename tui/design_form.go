@@ -81,7 +81,8 @@ func (e *elevation) openDesignForm() {
 	// Only the fields the user changed are read back, so an unchanged
 	// value keeps its exact number (a stress shown rounded stays as typed
 	// in the file).
-	e.openForm(newForm("Pier design", specs, func(vals []string, changed []bool) formResult {
+	e.openForm(newForm("Pier design", specs), func(sub formSubmitted) formResult {
+		vals, changed := sub.vals, sub.changed
 		res := formResult{fields: map[int]string{}}
 		n := w.Clone()
 		if k, ok := geometry.ParseLoadKind(vals[dfKind]); ok {
@@ -198,5 +199,5 @@ func (e *elevation) openDesignForm() {
 		_ = e.c.doc.change(func(w *geometry.Wall) error { *w = *n; return nil })
 		e.say("pier design updated")
 		return res
-	}))
+	})
 }
