@@ -29,7 +29,9 @@ func InputOf(w *geometry.Wall, piers []PierInput) Input {
 // ClassicPiers returns the leaf piers of a classic result with their section
 // forces by load case (docs/method.md §6): the lateral shear, moment and
 // overturning axial force, and the tributary dead and live axial forces.
-// Cut piers (no load path) are left out. A solid wall is one pier P1.
+// Cut piers (no load path) are left out. A solid wall is one pier P1. A
+// basis.Result's View on the fe basis has the same shape with the model's
+// section forces, so it passes here too.
 func ClassicPiers(res *pier.Result) []PierInput {
 	var out []PierInput
 	for _, p := range res.Leaves() {

@@ -25,13 +25,14 @@ type designState struct {
 }
 
 // designInput is the editor's one place where a wall and its piers' forces
-// become the checks' input (docs/method.md §8): from the classic result
-// today; a finite-element basis would hand its own []design.PierInput here.
+// become the checks' input (docs/method.md §8): res is what the elevation
+// shows, the classic result or, on the fe basis, the basis view whose piers
+// carry the model's section forces.
 func designInput(w *geometry.Wall, res *pier.Result) design.Input {
 	return design.InputOf(w, design.ClassicPiers(res))
 }
 
-// checkDesign checks the piers of w from its classic result.
+// checkDesign checks the piers of w from the result shown.
 func checkDesign(w *geometry.Wall, res *pier.Result) designState {
 	if w.Design == nil || res == nil {
 		return designState{}

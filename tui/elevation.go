@@ -130,7 +130,6 @@ func (e *elevation) resolve() {
 		w = &loaded
 	}
 	e.res, e.solveErr = pier.Solve(w)
-	e.design = checkDesign(w, e.res)
 	e.version = e.c.doc.version
 	n := len(w.Openings())
 	if e.sel >= n {

@@ -9,6 +9,7 @@ import (
 	"github.com/charmbracelet/bubbles/key"
 	tea "github.com/charmbracelet/bubbletea"
 
+	"pierwise/basis"
 	"pierwise/design"
 	"pierwise/geometry"
 	"pierwise/pier"
@@ -72,7 +73,9 @@ func newPierView(c *common) *pierView {
 func (v *pierView) load() {
 	v.wall = v.c.doc.wall
 	v.ver = v.c.doc.version
-	v.res, _ = pier.Solve(v.wall)
+	// On the editor's basis: the model's pier forces on the fe basis.
+	b := basis.Solve(v.wall, v.c.basis, basis.Options{})
+	v.res = b.View()
 	v.design = checkDesign(v.wall, v.res)
 	if r := v.design.res; r != nil && v.sel >= len(r.Piers) {
 		v.sel = max(0, len(r.Piers)-1)

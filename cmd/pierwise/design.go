@@ -13,13 +13,17 @@ import (
 
 // designInput is the one place the commands turn a solved wall into the
 // checks' input (docs/method.md §8): the piers and their forces come from
-// the classic result; a basis switch feeds them from the finite-element
-// result here instead.
+// the chosen basis (its View: the classic result, or on the fe basis the
+// model's section forces on the classic piers).
 func designInput(s *solved) (design.Input, bool) {
-	if s.wall.Design == nil || s.res == nil {
+	res := s.res
+	if s.b != nil {
+		res = s.b.View()
+	}
+	if s.wall.Design == nil || res == nil {
 		return design.Input{}, false
 	}
-	return design.InputOf(s.wall, design.ClassicPiers(s.res)), true
+	return design.InputOf(s.wall, design.ClassicPiers(res)), true
 }
 
 // checkDesign fills the solved wall's pier design when its file has a

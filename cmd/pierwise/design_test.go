@@ -118,3 +118,32 @@ func TestDrawRatiosAndStoreyHook(t *testing.T) {
 		t.Errorf("storey hook %+v, design %s %.4f", g, d.Piers[d.Governing].Name, d.Ratio)
 	}
 }
+
+// On the fe basis the design takes the model's pier forces: the JSON and the
+// table carry it, and its governing ratio is the design package's on
+// FEPiers of the same model.
+func TestSolveDesignFEBasis(t *testing.T) {
+	code, out, errs := runCLI("solve", "../../testdata/walls/cmu-reinforced.toml", "--basis", "fe", "--json")
+	if code != exitOK {
+		t.Fatalf("exit %d: %s", code, errs)
+	}
+	var j struct {
+		Design struct {
+			GoverningRatio float64 `json:"governing_ratio"`
+		} `json:"design"`
+	}
+	if err := json.Unmarshal([]byte(out), &j); err != nil {
+		t.Fatal(err)
+	}
+	if !(j.Design.GoverningRatio > 0) {
+		t.Fatalf("no design on the fe basis:\n%s", out)
+	}
+	code, out, _ = runCLI("solve", "../../testdata/walls/cmu-reinforced.toml", "--basis", "fe")
+	if code != exitOK || !strings.Contains(out, "design: tms402-22") {
+		t.Errorf("fe table lacks the design line:\n%s", out)
+	}
+	code, out, _ = runCLI("report", "../../testdata/walls/cmu-reinforced.toml", "--basis", "fe")
+	if code != exitOK || !strings.Contains(out, "Pier design (finite-element pier forces)") || !strings.Contains(out, "amendments govern") {
+		t.Errorf("fe report lacks the design section")
+	}
+}
