@@ -7,6 +7,7 @@ import (
 
 	"pierwise/geometry"
 	"pierwise/pier"
+	"pierwise/pier/fe"
 )
 
 // lateralLoads builds a leaf pier's lateral load case from the classic
@@ -85,5 +86,40 @@ func TestExampleWalls(t *testing.T) {
 		if out.Governing >= 0 {
 			t.Logf("%s: %d piers, governing %s ratio %.2f", filepath.Base(f), len(out.Piers), out.Piers[out.Governing].Name, out.Ratio)
 		}
+	}
+}
+
+// The finite-element piers feed the same checks: the reinforced example
+// wall checked on either basis has the same piers, finite ratios, and the
+// same zero-load invariant.
+func TestFEPiers(t *testing.T) {
+	w, err := geometry.LoadFile("../testdata/walls/cmu-reinforced.toml")
+	if err != nil {
+		t.Fatal(err)
+	}
+	res, err := pier.Solve(w)
+	if err != nil {
+		t.Fatal(err)
+	}
+	fr, err := fe.Solve(w, res, fe.Options{Mesh: 6 * geometry.Inch})
+	if err != nil {
+		t.Fatal(err)
+	}
+	cl, err := CheckWall(InputOf(w, ClassicPiers(res)))
+	if err != nil {
+		t.Fatal(err)
+	}
+	fd, err := CheckWall(InputOf(w, FEPiers(fr)))
+	if err != nil {
+		t.Fatal(err)
+	}
+	if len(cl.Piers) != len(fd.Piers) {
+		t.Fatalf("classic %d piers, fe %d", len(cl.Piers), len(fd.Piers))
+	}
+	for i := range cl.Piers {
+		if cl.Piers[i].Name != fd.Piers[i].Name || math.IsNaN(fd.Piers[i].Ratio) || math.IsInf(fd.Piers[i].Ratio, 0) {
+			t.Errorf("pier %d: classic %s, fe %s ratio %v", i, cl.Piers[i].Name, fd.Piers[i].Name, fd.Piers[i].Ratio)
+		}
+		t.Logf("%s: classic ratio %.3f, fe ratio %.3f", cl.Piers[i].Name, cl.Piers[i].Ratio, fd.Piers[i].Ratio)
 	}
 }

@@ -477,6 +477,7 @@ func (p *fileParser) wall(raw map[string]*toml.Primitive) *Wall {
 		}
 		p.setting(s, t, t != nil, w)
 	}
+	designTablesGiven(w, func(table string) bool { return tables[table] != nil })
 	name := DefaultLayout
 	if s, ok := p.str(raw, "layout", "layout"); ok {
 		name = s

@@ -45,6 +45,7 @@ func (w *Wall) validate(l *ErrorList) {
 	for i := range Settings {
 		Settings[i].check(w, l)
 	}
+	w.validateDesign(l)
 	w.validateLayouts(l)
 }
 
@@ -256,6 +257,14 @@ func (w *Wall) FreeSpot(o Opening) (Opening, bool) {
 // openings leaves the original as it was.
 func (w *Wall) Clone() *Wall {
 	c := *w
+	if w.Reinforcement != nil {
+		r := *w.Reinforcement
+		c.Reinforcement = &r
+	}
+	if w.Design != nil {
+		d := *w.Design
+		c.Design = &d
+	}
 	if w.Layouts != nil {
 		c.Layouts = make([]Layout, len(w.Layouts))
 		for k, lay := range w.Layouts {

@@ -45,6 +45,7 @@ type Material struct {
 // Load is the in-plane shear at the top of the wall; zero means no load given.
 type Load struct {
 	Shear Force
+	Kind  LoadKind // what the shear is: an earthquake or a wind effect (pier design)
 }
 
 // Stiffness holds the user's stiffness modifiers for cracking (default 1 each):
@@ -193,8 +194,16 @@ type Wall struct {
 	Check     Check
 	Analysis  Analysis
 	Gravity   Gravity
-	Layouts   []Layout // at least one; Layouts[0] holds the file's top-level openings
-	Active    int      // index into Layouts
+
+	// Reinforcement is what the engineer drew (nil: none given) and
+	// Design the pier-design settings (nil: the piers are not checked);
+	// docs/method.md §8.
+	Reinforcement *Reinforcement
+	Design        *Design
+	barText       map[string]string // bars a file gave that could not be read, by key
+
+	Layouts []Layout // at least one; Layouts[0] holds the file's top-level openings
+	Active  int      // index into Layouts
 }
 
 // Openings returns the openings of the active layout.

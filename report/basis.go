@@ -80,6 +80,12 @@ func wallFE(w *Text, in Input) error {
 	}
 	n++
 
+	if in.Design != nil || in.DesignErr != nil {
+		w.Section(fmt.Sprintf("%d. Pier design (finite-element pier forces)", n))
+		designSection(w, in.Wall, in.Design, in.DesignErr)
+		n++
+	}
+
 	w.Section(fmt.Sprintf("%d. Warnings", n))
 	warns := append([]string(nil), b.Warnings()...)
 	if c, ok := b.Check(); ok && math.Abs(c.Difference) > fe.WarnDifference {

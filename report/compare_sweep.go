@@ -45,7 +45,12 @@ func SweepTable(out io.Writer, w *geometry.Wall, name string, axis study.Axis, s
 	if w.Load.Shear > 0 && w.Thickness > 0 {
 		stressHead = "max stress (" + u.Stress + ")"
 	}
-	head = append(head, stressHead, "")
+	head = append(head, stressHead)
+	designed := study.Designed(pts)
+	if designed {
+		head = append(head, "D/C")
+	}
+	head = append(head, "")
 	rows := [][]string{head}
 	weak := false
 	for _, p := range pts {
@@ -55,7 +60,11 @@ func SweepTable(out io.Writer, w *geometry.Wall, name string, axis study.Axis, s
 			for range names {
 				r = append(r, "")
 			}
-			r = append(r, "", sweepNoAnswer(p.Err))
+			r = append(r, "")
+			if designed {
+				r = append(r, "")
+			}
+			r = append(r, sweepNoAnswer(p.Err))
 			rows = append(rows, r)
 			continue
 		}
@@ -82,6 +91,18 @@ func SweepTable(out io.Writer, w *geometry.Wall, name string, axis study.Axis, s
 			st = cmpSig(p.StressIndex*float64(w.Units.BaseLength()), 3) + " " + p.StressPier
 		}
 		var marks []string
+		if designed {
+			dc := "-"
+			if p.Designed {
+				dc = Ratio(p.Ratio) + " " + p.RatioPier
+				if p.Passes {
+					marks = append(marks, "passes")
+				}
+			}
+			st += "  " // the D/C column follows
+			r = append(r, st)
+			st = dc
+		}
 		if p.Current {
 			marks = append(marks, "current")
 		}
@@ -100,11 +121,14 @@ func SweepTable(out io.Writer, w *geometry.Wall, name string, axis study.Axis, s
 	if !(w.Load.Shear > 0 && w.Thickness > 0) {
 		best = "Best: the lowest highest pier share/L_i (the wall has no load or thickness, so no stress)."
 	}
+	if designed {
+		best = "D/C is the wall's governing demand/capacity ratio of the pier design (docs/method.md §8) and the pier that has it; passes marks a position where every pier passes every check. Best: the lowest governing ratio."
+	}
 	if weak {
 		best += " ! marks a position where the classic method warns of something it does not at the current position (solve that layout to read the warning); such a position is not taken as best."
 	}
 	_, err := fmt.Fprintln(out, "\n"+wrapText("R rel is the wall's relative rigidity (E = 1, t = 1) and change its change from the current position. Shares are fractions of the wall shear; each column follows one pier, named by the openings on either side of it (end: the wall's end), whatever its number at that position. "+best, 78)+"\n"+
-		wrapText("Results support, and do not replace, the judgement of a licensed engineer; local codes govern.", 78))
+		wrapText(sweepCaution(designed), 78))
 	return err
 }
 
@@ -166,4 +190,11 @@ func sweepAlign(out io.Writer, rows [][]string) {
 		}
 		fmt.Fprintln(out, strings.TrimRight(b.String(), " "))
 	}
+}
+
+func sweepCaution(designed bool) string {
+	if designed {
+		return "Results support, and do not replace, the judgement of a licensed engineer. " + DesignCaution
+	}
+	return "Results support, and do not replace, the judgement of a licensed engineer; local codes govern."
 }

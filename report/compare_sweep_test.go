@@ -120,3 +120,36 @@ func TestSweepTableNoAnswerReason(t *testing.T) {
 		t.Errorf("%d reasons for %d points:\n%s", n, len(pts), b.String())
 	}
 }
+
+// With a pier design the sweep table has the governing ratio of every
+// position, marks where every pier passes, and says what best means.
+func TestSweepTableDesign(t *testing.T) {
+	w, err := geometry.LoadFile("../testdata/walls/cmu-reinforced.toml")
+	if err != nil {
+		t.Fatal(err)
+	}
+	w.Load.Shear = 50 * geometry.Kip
+	pts, err := study.Sweep(w, "W1", study.AlongX, geometry.Foot)
+	if err != nil {
+		t.Fatal(err)
+	}
+	var b strings.Builder
+	if err := SweepTable(&b, w, "W1", study.AlongX, geometry.Foot, pts); err != nil {
+		t.Fatal(err)
+	}
+	out := b.String()
+	passes := 0
+	for _, p := range pts {
+		if p.Passes {
+			passes++
+		}
+	}
+	if got := strings.Count(out, "  passes"); got != passes {
+		t.Errorf("%d passes marks for %d passing positions:\n%s", got, passes, out)
+	}
+	best := pts[study.BestIndex(pts)]
+	if !strings.Contains(out, Ratio(best.Ratio)+" "+best.RatioPier) || !strings.Contains(out, "D/C is the wall's governing") ||
+		!strings.Contains(out, "amendments govern") {
+		t.Errorf("table lacks the best ratio, the rule or the caution:\n%s", out)
+	}
+}

@@ -17,6 +17,7 @@ import (
 	"unicode"
 	"unicode/utf8"
 
+	"pierwise/design"
 	"pierwise/geometry"
 	"pierwise/pier"
 	"pierwise/pier/fe"
@@ -40,7 +41,13 @@ type Input struct {
 	FEErr  error
 	// Basis is the answer of the chosen basis (its Classic and FE are
 	// Result and FE above); nil is the classic basis.
-	Basis   *basis.Result
+	Basis *basis.Result
+
+	// Design is the pier design when the wall has a [design] table;
+	// DesignErr says why it could not be made.
+	Design    *design.Result
+	DesignErr error
+
 	Now     time.Time
 	Version string
 	Drawing string // the SVG drawing written beside the report, "" for none
@@ -136,6 +143,11 @@ func wallBody(out io.Writer, in Input) error {
 	results(w, res, wall, u, in.FE)
 
 	n := 6
+	if in.Design != nil || in.DesignErr != nil {
+		w.Section(fmt.Sprintf("%d. Pier design", n))
+		designSection(w, wall, in.Design, in.DesignErr)
+		n++
+	}
 	if in.FE != nil || in.FEErr != nil {
 		w.Section(fmt.Sprintf("%d. Finite-element check", n))
 		if in.FE != nil {

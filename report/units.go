@@ -18,6 +18,7 @@ type Units struct {
 	Moment     string
 	Coord      string
 	Stress     string
+	Area       string // bar areas: in² or mm²
 
 	force      geometry.Force
 	deflection geometry.Length
@@ -25,16 +26,24 @@ type Units struct {
 	coord      geometry.Length
 }
 
+// AreaOf converts an area in m² to the report unit (in² or mm²).
+func (u Units) AreaOf(a float64) float64 {
+	if u.Coord == "m" {
+		return a / float64(geometry.Millimetre*geometry.Millimetre)
+	}
+	return a / float64(geometry.Inch*geometry.Inch)
+}
+
 // UnitsFor returns the report units of a unit system.
 func UnitsFor(sys geometry.System) Units {
 	if sys == geometry.SI {
 		return Units{
-			Force: "kN", Deflection: "mm", Rigidity: "kN/mm", Moment: "kN·m", Coord: "m", Stress: "MPa",
+			Force: "kN", Deflection: "mm", Rigidity: "kN/mm", Moment: "kN·m", Coord: "m", Stress: "MPa", Area: "mm²",
 			force: geometry.Kilonewton, deflection: geometry.Millimetre, moment: 1000, coord: geometry.Metre,
 		}
 	}
 	return Units{
-		Force: "kip", Deflection: "in", Rigidity: "kip/in", Moment: "kip·ft", Coord: "ft", Stress: "psi",
+		Force: "kip", Deflection: "in", Rigidity: "kip/in", Moment: "kip·ft", Coord: "ft", Stress: "psi", Area: "in²",
 		force: geometry.Kip, deflection: geometry.Inch, moment: float64(geometry.Kip) * float64(geometry.Foot), coord: geometry.Foot,
 	}
 }

@@ -52,6 +52,13 @@ var blank = Cell{Ch: ' ', Kind: Empty, Pier: -1, Opening: -1}
 // of the same wall and layout. A wall that does not fit at all (a box
 // smaller than 3 × 3, or a wall without size) gives an empty grid.
 func Elevation(w *geometry.Wall, res *pier.Result, cols, rows int) *Grid {
+	return ElevationLabeled(w, res, cols, rows, nil)
+}
+
+// ElevationLabeled is Elevation with each leaf pier's figure given by value
+// (i indexes res.Piers) instead of its share: a demand/capacity ratio, say.
+// A nil value gives the share.
+func ElevationLabeled(w *geometry.Wall, res *pier.Result, cols, rows int, value func(i int, p pier.Pier) string) *Grid {
 	g := &Grid{}
 	if w == nil || cols < 3 || rows < 3 || !(w.Length > 0) || !(w.Height > 0) ||
 		math.IsInf(float64(w.Length), 0) || math.IsInf(float64(w.Height), 0) {
@@ -114,7 +121,7 @@ func Elevation(w *geometry.Wall, res *pier.Result, cols, rows int) *Grid {
 	if res != nil {
 		for i, p := range res.Piers {
 			if p.Leaf {
-				g.labelPier(i, p)
+				g.labelPier(i, p, value)
 			}
 		}
 	}
@@ -271,9 +278,12 @@ func (g *Grid) labelBeside(i int, o geometry.Opening) bool {
 // labelPier writes the pier's name and share inside it where they fit:
 // "P1 34%" on one line, else on two lines, else the share alone, else the
 // name alone.
-func (g *Grid) labelPier(i int, p pier.Pier) {
+func (g *Grid) labelPier(i int, p pier.Pier, value func(int, pier.Pier) string) {
 	c0, c1, r0, r1 := g.box(p.Rect)
 	pct := fmt.Sprintf("%.0f%%", 100*p.Share)
+	if value != nil {
+		pct = value(i, p)
+	}
 	free := func(c Cell) bool { return c.Kind == PierFill && c.Pier == i }
 	mid := (r0 + r1) / 2
 	// Rows from the middle outwards.

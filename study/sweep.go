@@ -10,6 +10,7 @@ import (
 	"strings"
 
 	"pierwise/basis"
+	"pierwise/design"
 	"pierwise/geometry"
 	"pierwise/pier"
 	"pierwise/pier/fe"
@@ -70,8 +71,21 @@ type Point struct {
 	StressIndex float64
 	MaxStress   geometry.Stress
 
+	// The pier design here, when the wall has a [design] table
+	// (docs/method.md §8): Designed is set when the checks were made,
+	// Ratio is the wall's governing demand/capacity ratio, RatioPier the
+	// pier that has it, Passes that every pier passes every check.
+	Designed  bool
+	Ratio     float64
+	RatioPier string
+	Passes    bool
+	DesignErr error // the checks could not be made here
+
 	Current bool // the opening's position in the wall as given
-	Best    bool // the lowest StressIndex of the sweep (first such point), preferring points without Weak
+	// Best is the position an engineer would try first (first such point),
+	// preferring points without Weak: with a pier design the lowest
+	// governing ratio, else the lowest StressIndex.
+	Best bool
 
 	// Weak lists the kinds of layout warnings (pier.LayoutWarning) the
 	// classic method gives here but not at the current position: a sliver
@@ -278,26 +292,57 @@ func solvePoint(w *geometry.Wall, o geometry.Opening, current bool, opt SweepOpt
 	if p.StressIndex < 0 {
 		p.StressIndex = 0
 	}
+	if w.Design != nil {
+		d, ok, err := design.CheckClassic(w, res)
+		switch {
+		case err != nil:
+			p.DesignErr = err
+		case ok:
+			p.Designed, p.Ratio, p.Passes = true, d.Ratio, d.OK
+			if d.Governing >= 0 {
+				p.RatioPier = d.Piers[d.Governing].Name
+			}
+		}
+	}
 	return p
 }
 
-// markBest sets Best on the first solved point with the lowest StressIndex,
-// among the points without Weak when there are any.
+// Designed reports whether the sweep's points carry a pier design.
+func Designed(pts []Point) bool {
+	for _, p := range pts {
+		if p.Designed {
+			return true
+		}
+	}
+	return false
+}
+
+// markBest sets Best on the first solved point with the lowest governing
+// ratio when the points carry a pier design, else with the lowest
+// StressIndex, among the points without Weak when there are any.
 func markBest(pts []Point) {
+	designed := Designed(pts)
+	usable := func(p Point) bool { return p.Err == nil && (!designed || p.Designed) }
 	sound := false
 	for _, p := range pts {
-		if p.Err == nil && len(p.Weak) == 0 {
+		if usable(p) && len(p.Weak) == 0 {
 			sound = true
 			break
 		}
 	}
+	score := func(p Point) float64 {
+		if designed {
+			return p.Ratio
+		}
+		return p.StressIndex
+	}
 	best := -1
 	for i, p := range pts {
-		if p.Err != nil || (sound && len(p.Weak) > 0) {
+		if !usable(p) || (sound && len(p.Weak) > 0) {
 			continue
 		}
 		// A relative tolerance keeps ties (mirror positions) on the first.
-		if best < 0 || p.StressIndex < pts[best].StressIndex*(1-1e-9) {
+		if best < 0 || score(p) < score(pts[best])*(1-1e-9) {
 			best = i
 		}
 	}

@@ -36,6 +36,9 @@ func (e *elevation) onFE() bool { return e.bs.basis == geometry.BasisFE }
 // and the latest finite-element answer. It is called after every solve.
 func (e *elevation) refreshShown() {
 	b := &e.bs
+	// The pier design follows what is shown: the model's pier forces on
+	// the fe basis (docs/method.md §8.7).
+	defer func() { e.design = checkDesign(e.wall(), b.shown) }()
 	if f := e.wall().Analysis.Basis; f != b.file {
 		// The wall's own basis changed (an edit of the wall's settings,
 		// an undo): the editor follows it; b switches the view only.

@@ -56,6 +56,9 @@ type elevation struct {
 	rows   scroller // the pier table's first row shown (pgup, pgdown)
 	saving bool     // a save command is under way
 	drag   drag
+
+	design designState // the pier design of res (docs/method.md §8)
+	ratios bool        // draw demand/capacity ratios instead of shares
 }
 
 type elevationMode int
@@ -407,6 +410,10 @@ func (e *elevation) wallKey(msg tea.KeyMsg) (tea.Cmd, bool) {
 		e.openRenameForm()
 	case key.Matches(msg, k.DelLayout):
 		e.deleteLayout()
+	case key.Matches(msg, k.Ratios):
+		e.toggleRatios()
+	case key.Matches(msg, k.DesignForm):
+		e.openDesignForm()
 	default:
 		return nil, false
 	}

@@ -143,6 +143,9 @@ func paintOf(s lipgloss.Style) paint {
 func (e *elevation) elevationView(l elevLayout) string {
 	st := e.c.styles
 	g := e.grid(l)
+	if e.showRatios() {
+		g = e.designGrid(l)
+	}
 	plain := paint{}
 	wallP := paintOf(st.wall)
 	openP := paintOf(st.opening)
@@ -158,6 +161,9 @@ func (e *elevation) elevationView(l elevLayout) string {
 		r := e.bs.shown
 		if r == nil || p < 0 || p >= len(r.Piers) {
 			return 0
+		}
+		if e.showRatios() {
+			return e.ratioLevelOf(r.Piers[p].Name)
 		}
 		return tintLevel(r.Piers[p].Share)
 	}
@@ -197,7 +203,13 @@ func (e *elevation) elevationView(l elevLayout) string {
 					p = selP
 				}
 			case sketch.PierFill:
-				if st.mono {
+				if e.showRatios() && level(cell.Pier) == len(ratioBounds)-1 {
+					// A failing pier reads without colour too.
+					ch, p = failFill, tintP[len(tintP)-1]
+					if st.mono {
+						p = plain
+					}
+				} else if st.mono {
 					ch = tintTexture[level(cell.Pier)]
 					// Keep a blank beside a label so it stands out of the texture.
 					if g.At(c-1, r).Kind == sketch.PierLabel || g.At(c+1, r).Kind == sketch.PierLabel {
@@ -353,6 +365,10 @@ func (e *elevation) summaryView(l elevLayout) string {
 		lines = append(lines[:i], lines[i+n:]...)
 	}
 	lines = append(lines, count...)
+	if dl := e.designLines(l); dl != nil {
+		lines = append(lines, "")
+		lines = append(lines, dl...)
+	}
 	lines = append(lines, "")
 	lines = append(lines, fe...)
 	// Then the warnings themselves, most severe first, as far as they fit
@@ -508,6 +524,12 @@ func (e *elevation) tableView(l elevLayout) string {
 	for k, p := range piers {
 		n := int(math.Round(p.Share * float64(barW)))
 		rows[k][5] = fmt.Sprintf("%3.0f%% ", 100*p.Share) + strings.Repeat("#", n) + strings.Repeat(".", barW-n)
+		if e.showRatios() {
+			rows[k][5] = e.ratioCell(p.Name, barW)
+		}
+	}
+	if e.showRatios() {
+		head[5], widths[5] = "D/C", 6+barW
 	}
 	line := func(cells []string) string {
 		var b strings.Builder

@@ -20,6 +20,8 @@ type KeyMap struct {
 	Snapshot                           key.Binding // write a text report next to the file
 	Warnings                           key.Binding // every warning, most severe first
 	RowsUp, RowsDown                   key.Binding // scroll the pier table
+	Ratios                             key.Binding // pier demand/capacity ratios instead of shares
+	DesignForm                         key.Binding // the pier design inputs
 	Help, Quit                         key.Binding
 
 	screens []key.Binding // keys of registered screens
@@ -62,6 +64,8 @@ func newKeyMap() KeyMap {
 		Warnings:     b("list the warnings", "!"),
 		RowsUp:       key.NewBinding(key.WithKeys("pgup"), key.WithHelp("pgup", "pier table up")),
 		RowsDown:     key.NewBinding(key.WithKeys("pgdown"), key.WithHelp("pgdown", "pier table down")),
+		Ratios:       b("ratios on/off", "R"),
+		DesignForm:   b("pier design inputs", "D"),
 		Help:         b("help", "?"),
 		Quit:         key.NewBinding(key.WithKeys("q"), key.WithHelp("q", "quit")),
 	}
@@ -88,8 +92,8 @@ func short(b key.Binding, desc string) key.Binding {
 func (k KeyMap) FullHelp() [][]key.Binding {
 	groups := [][]key.Binding{
 		{k.Next, k.Prev, k.Left, k.Right, k.Up, k.Down, k.Narrower, k.Wider, k.Taller, k.Shorter, k.Step},
-		{k.AddDoor, k.AddWindow, k.Delete, k.Copy, k.EditOpening, k.EditWall, k.Undo, k.Redo},
-		{k.Save, k.SaveAs, k.NextLayout, k.PrevLayout, k.NewLayout, k.RenameLayout, k.DelLayout, k.FE, k.Basis, k.Snapshot, k.Warnings, k.RowsUp, k.RowsDown, k.Help, k.Quit},
+		{k.AddDoor, k.AddWindow, k.Delete, k.Copy, k.EditOpening, k.EditWall, k.DesignForm, k.Undo, k.Redo},
+		{k.Save, k.SaveAs, k.NextLayout, k.PrevLayout, k.NewLayout, k.RenameLayout, k.DelLayout, k.FE, k.Basis, k.Snapshot, k.Ratios, k.Warnings, k.RowsUp, k.RowsDown, k.Help, k.Quit},
 	}
 	if len(k.screens) > 0 {
 		groups = append(groups, k.screens)

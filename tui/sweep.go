@@ -277,6 +277,9 @@ func (s *sweepScreen) view() string {
 			"every position is so marked. A series follows one physical pier,",
 			"named by the openings on either side of it (end-W1: between the",
 			"wall's left end and W1), whatever its number (P1, P2...) there.",
+			"With a pier design ([design] in the wall file) the top plot is the",
+			"wall's governing demand/capacity ratio D/C (dotted: 1.00), = under",
+			"the axis marks where every pier passes, and B the lowest D/C.",
 			"", "Any key closes this help.")
 		return fit(strings.Join(lines, "\n"), s.width, s.height)
 	}
@@ -294,7 +297,12 @@ func (s *sweepScreen) view() string {
 
 	// Fixed rows: title, controls, axis, marks, axis ends, two info lines,
 	// legend, message, help = 10; the plots share the rest, 2:3.
-	plotRows := max(6, s.height-10)
+	designed := study.Designed(s.pts)
+	fixed := 10
+	if designed {
+		fixed++ // the passes row
+	}
+	plotRows := max(6, s.height-fixed)
 	rigRows := max(3, plotRows*2/5)
 	shareRows := max(3, plotRows-rigRows)
 	switch {
@@ -303,7 +311,7 @@ func (s *sweepScreen) view() string {
 	case len(s.pts) == 0 && !s.running:
 		lines = append(lines, "The opening fits nowhere along this axis.")
 	case len(s.pts) > 0:
-		lines = append(lines, sweepPlot(st, s.pts, s.axis, w.Units, s.cursor, s.width, rigRows, shareRows)...)
+		lines = append(lines, sweepPlot(st, s.pts, s.axis, w.Units, s.cursor, s.width, rigRows, shareRows, designed)...)
 		lines = append(lines, s.info()...)
 	}
 	for len(lines) < s.height-2 {
@@ -341,7 +349,16 @@ func (s *sweepScreen) info() []string {
 	if len(p.Weak) > 0 {
 		where += "! "
 	}
-	line1 := where + fmt.Sprintf("rigidity %.4f", p.Rigidity)
+	line1 := where
+	if p.Designed {
+		// The design first: it is what the engineer asks of a position.
+		verdict := "FAILS"
+		if p.Passes {
+			verdict = "passes"
+		}
+		line1 += fmt.Sprintf("D/C %s %s, %s  ", report.Ratio(p.Ratio), p.RatioPier, verdict)
+	}
+	line1 += fmt.Sprintf("rigidity %.4f", p.Rigidity)
 	if c := study.CurrentIndex(s.pts); c >= 0 && s.pts[c].Err == nil {
 		if ch := report.ComparePct(s.pts[c].Rigidity, p.Rigidity); ch != "" {
 			line1 += " (" + ch + ")"
@@ -417,7 +434,11 @@ func sweepLegend(pts []study.Point, width int) string {
 // sweepPlot draws the two plots, the position axis and the marks row:
 // relative rigidity as a braille line (rigRows rows) and each pier's share
 // as digits (shareRows rows), against the swept position.
-func sweepPlot(st *styles, pts []study.Point, axis study.Axis, sys geometry.System, cursor, width, rigRows, shareRows int) []string {
+//
+// With a pier design (designed) the top plot is the wall's governing
+// demand/capacity ratio instead, with the 1.00 level dotted, and a row under
+// the axis marks with = the positions where every pier passes.
+func sweepPlot(st *styles, pts []study.Point, axis study.Axis, sys geometry.System, cursor, width, rigRows, shareRows int, designed bool) []string {
 	const margin = 9 // y labels: "  0.4732 " then the axis line
 	pw := max(10, width-margin-1)
 	p0, p1 := float64(pts[0].Pos(axis)), float64(pts[len(pts)-1].Pos(axis))
@@ -428,15 +449,25 @@ func sweepPlot(st *styles, pts []study.Point, axis study.Axis, sys geometry.Syst
 		return int(math.Round((float64(pos) - p0) / (p1 - p0) * float64(cells-1)))
 	}
 
-	// Rigidity: a braille canvas of pw×rigRows cells, 2×4 dots each.
+	// Rigidity (or the governing ratio): a braille canvas of pw×rigRows
+	// cells, 2×4 dots each.
+	value := func(p study.Point) float64 { return p.Rigidity }
+	valid := func(p study.Point) bool { return p.Err == nil }
+	if designed {
+		value = func(p study.Point) float64 { return math.Min(p.Ratio, sweepRatioTop) }
+		valid = func(p study.Point) bool { return p.Err == nil && p.Designed }
+	}
 	lo, hi := math.Inf(1), math.Inf(-1)
 	for _, p := range pts {
-		if p.Err == nil {
-			lo, hi = math.Min(lo, p.Rigidity), math.Max(hi, p.Rigidity)
+		if valid(p) {
+			lo, hi = math.Min(lo, value(p)), math.Max(hi, value(p))
 		}
 	}
 	if math.IsInf(lo, 0) {
 		lo, hi = 0, 1
+	}
+	if designed {
+		lo, hi = 0, math.Max(hi*1.05, 1.2)
 	}
 	if hi-lo < 1e-9*math.Max(hi, 1e-12) {
 		lo, hi = lo*0.99, hi*1.01+1e-12
@@ -455,8 +486,15 @@ func sweepPlot(st *styles, pts []study.Point, axis study.Axis, sys geometry.Syst
 	}
 	dot := func(p study.Point) (int, int) {
 		x := col(p.Pos(axis), dotsW)
-		y := int(math.Round((hi - p.Rigidity) / (hi - lo) * float64(dotsH-1)))
+		y := int(math.Round((hi - value(p)) / (hi - lo) * float64(dotsH-1)))
 		return x, y
+	}
+	if designed {
+		// The 1.00 level, dotted: below it the piers pass.
+		y := int(math.Round((hi - 1) / (hi - lo) * float64(dotsH-1)))
+		for x := 0; x < dotsW; x += 3 {
+			set(x, y)
+		}
 	}
 	// Positions more than a step and a half apart have another opening
 	// between them: the line breaks there.
@@ -467,7 +505,7 @@ func sweepPlot(st *styles, pts []study.Point, axis study.Axis, sys geometry.Syst
 	prevOK := false
 	var px, py int
 	for i, p := range pts {
-		if p.Err != nil {
+		if !valid(p) {
 			prevOK = false
 			continue
 		}
@@ -508,7 +546,11 @@ func sweepPlot(st *styles, pts []study.Point, axis study.Axis, sys geometry.Syst
 			}
 			b.WriteRune(ch)
 		}
-		out = append(out, ylab(r, rigRows, fmt.Sprintf("%.4f", hi), fmt.Sprintf("%.4f", lo), "rigidity")+"|"+b.String())
+		top, bottom, name := fmt.Sprintf("%.4f", hi), fmt.Sprintf("%.4f", lo), "rigidity"
+		if designed {
+			top, bottom, name = fmt.Sprintf("%.2f", hi), "0", "D/C"
+		}
+		out = append(out, ylab(r, rigRows, top, bottom, name)+"|"+b.String())
 	}
 
 	// Shares: 0 to the largest share, rounded up to 10 %.
@@ -576,9 +618,22 @@ func sweepPlot(st *styles, pts []study.Point, axis study.Axis, sys geometry.Syst
 	ends := []rune(strings.Repeat(" ", margin+1))
 	row := string(ends) + string(marks)
 	out = append(out, row)
+	if designed {
+		pass := []rune(strings.Repeat(" ", pw))
+		for _, p := range pts {
+			if p.Designed && p.Passes && p.Err == nil {
+				pass[col(p.Pos(axis), pw)] = '='
+			}
+		}
+		out = append(out, fmt.Sprintf("%8s ", "passes")+" "+string(pass))
+	}
 	out = append(out, padRight(strings.Repeat(" ", margin+1)+left, margin+1+pw-len([]rune(right)))+right)
 	return out
 }
+
+// sweepRatioTop caps the ratios the sweep plots, so one position far over
+// capacity does not flatten the rest.
+const sweepRatioTop = 3.0
 
 // sweepLine draws a straight line of dots (Bresenham).
 func sweepLine(x0, y0, x1, y1 int, set func(x, y int)) {

@@ -149,6 +149,7 @@ func toJSONFE(s *solved) jsonWall {
 	f.Warnings = append(f.Warnings, m.Warnings...)
 	f.Notes = m.Notes
 	j.Check = checkJSON(s, u)
+	designJSON(s, &j)
 	return j
 }
 
@@ -223,6 +224,7 @@ func writeSolveTableFE(out io.Writer, s *solved) {
 			t.Wrapped("  ", "V at mid-height, M the larger of the bottom and top moments, N at mid-height under the wall shear (compression positive), each the resultant of the model's nodal forces along the section")
 		}
 	}
+	writeDesignLine(t, s)
 	for _, warn := range r.Warnings() {
 		t.Wrapped("  warning: ", warn)
 	}

@@ -62,7 +62,7 @@ func TestDrawCommandErrors(t *testing.T) {
 		say  string
 	}{
 		{[]string{"draw"}, exitUsage, "draw needs one FILE"},
-		{[]string{"draw", "../../testdata/walls/nested.toml", "--show", "ratios"}, exitUsage, "pier design is not available yet"},
+		{[]string{"draw", "../../testdata/walls/nested.toml", "--show", "ratios"}, exitUsage, "has no pier design"},
 		{[]string{"draw", "../../testdata/walls/nested.toml", "--show", "colour"}, exitUsage, "unknown value"},
 		{[]string{"draw", "../../testdata/walls/nested.toml", "--basis", "fem"}, exitUsage, "unknown basis"},
 		{[]string{"draw", "../../testdata/storey/workshop.toml", "--basis", "fe"}, exitUsage, "not to the storey file"},

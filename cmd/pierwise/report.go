@@ -65,7 +65,7 @@ func runReport(e *env, args []string) error {
 		if err != nil {
 			return err
 		}
-		in := report.Input{Path: arg, Wall: s.wall, Result: s.res, Err: s.err, FE: s.fe, FEErr: s.feErr, Basis: s.b, Now: now, Version: version}
+		in := report.Input{Path: arg, Wall: s.wall, Result: s.res, Err: s.err, FE: s.fe, FEErr: s.feErr, Basis: s.b, Design: s.design, DesignErr: s.designErr, Now: now, Version: version}
 		if err := report.Wall(&buf, in); err != nil {
 			return err
 		}

@@ -11,6 +11,7 @@ import (
 
 	"pierwise/basis"
 	"pierwise/demo"
+	"pierwise/design"
 	"pierwise/geometry"
 	"pierwise/pier"
 	"pierwise/pier/fe"
@@ -93,6 +94,9 @@ type solved struct {
 	fe    *fe.Result
 	feErr error
 	b     *basis.Result // the answer of the chosen basis; res, err, fe and feErr are its parts
+
+	design    *design.Result // the pier design when the file has [design]
+	designErr error
 }
 
 // solveArg loads FILE[:LAYOUT] (the demo for "") and solves it.
@@ -121,6 +125,7 @@ func solveArg(arg string, ff *feFlags) (*solved, error) {
 	s.b = basis.Solve(w, b, opt)
 	s.res, s.err = s.b.Classic, locate(arg, w, s.b.ClassicErr)
 	s.fe, s.feErr = s.b.FE, s.b.FEErr
+	checkDesign(s)
 	return s, nil
 }
 
@@ -272,6 +277,7 @@ func writeSolveTable(out io.Writer, s *solved) {
 	}
 	t.Blank()
 	pierRows(t, r, w)
+	writeDesignLine(t, s)
 	for _, warn := range r.Warnings {
 		t.Wrapped("  warning: ", warn.Text)
 	}
@@ -370,25 +376,26 @@ func writeFETable(t *report.Text, s *solved) {
 // JSON output (README: the command line). Lengths in the base unit (ft or m); forces,
 // rigidities, deflections and moments in the report units, named in "units".
 type jsonWall struct {
-	File               string     `json:"file"`
-	Title              string     `json:"title"`
-	Layout             string     `json:"layout"`
-	Basis              string     `json:"basis"` // "classic" or "fe": every number below is of this basis
-	Units              jsonUnits  `json:"units"`
-	Inputs             jsonInputs `json:"inputs"`
-	Error              string     `json:"error,omitempty"`
-	DeflectionRelative *float64   `json:"deflection_relative,omitempty"`
-	RigidityRelative   *float64   `json:"rigidity_relative,omitempty"`
-	BendingFraction    *float64   `json:"bending_fraction,omitempty"`
-	Rigidity           *float64   `json:"rigidity,omitempty"`
-	Deflection         *float64   `json:"deflection,omitempty"`
-	Shear              *float64   `json:"shear,omitempty"`
-	Overturning        *float64   `json:"overturning,omitempty"`
-	Drift              *jsonDrift `json:"drift,omitempty"`
-	Piers              []jsonPier `json:"piers"`
-	Warnings           []string   `json:"warnings"`
-	Check              *jsonCheck `json:"check,omitempty"` // the other basis's rigidity, when it was solved
-	FE                 *jsonFE    `json:"fe,omitempty"`
+	File               string          `json:"file"`
+	Title              string          `json:"title"`
+	Layout             string          `json:"layout"`
+	Basis              string          `json:"basis"` // "classic" or "fe": every number below is of this basis
+	Units              jsonUnits       `json:"units"`
+	Inputs             jsonInputs      `json:"inputs"`
+	Error              string          `json:"error,omitempty"`
+	DeflectionRelative *float64        `json:"deflection_relative,omitempty"`
+	RigidityRelative   *float64        `json:"rigidity_relative,omitempty"`
+	BendingFraction    *float64        `json:"bending_fraction,omitempty"`
+	Rigidity           *float64        `json:"rigidity,omitempty"`
+	Deflection         *float64        `json:"deflection,omitempty"`
+	Shear              *float64        `json:"shear,omitempty"`
+	Overturning        *float64        `json:"overturning,omitempty"`
+	Drift              *jsonDrift      `json:"drift,omitempty"`
+	Piers              []jsonPier      `json:"piers"`
+	Warnings           []string        `json:"warnings"`
+	Check              *jsonCheck      `json:"check,omitempty"` // the other basis's rigidity, when it was solved
+	FE                 *jsonFE         `json:"fe,omitempty"`
+	Design             *jsonWallDesign `json:"design,omitempty"`
 }
 
 // jsonInputs are the wall's settings keyed as in the wall file
@@ -434,23 +441,25 @@ type jsonDrift struct {
 }
 
 type jsonPier struct {
-	Name             string      `json:"name"`
-	Parent           string      `json:"parent,omitempty"`
-	X0               float64     `json:"x0"`
-	X1               float64     `json:"x1"`
-	Y0               float64     `json:"y0"`
-	Y1               float64     `json:"y1"`
-	H                float64     `json:"h"`
-	L                float64     `json:"l"`
-	Support          string      `json:"support"`
-	RigidityRelative *float64    `json:"rigidity_relative,omitempty"` // the classic formula's; not on the fe basis
-	Share            float64     `json:"share"`
-	Leaf             bool        `json:"leaf"`
-	Cut              bool        `json:"cut,omitempty"`
-	BendingFraction  *float64    `json:"bending_fraction,omitempty"` // of the classic formula; not on the fe basis
-	Shear            *float64    `json:"shear,omitempty"`
-	Moment           *float64    `json:"moment,omitempty"`
-	Forces           *jsonForces `json:"forces,omitempty"`
+	Name             string          `json:"name"`
+	Parent           string          `json:"parent,omitempty"`
+	X0               float64         `json:"x0"`
+	X1               float64         `json:"x1"`
+	Y0               float64         `json:"y0"`
+	Y1               float64         `json:"y1"`
+	H                float64         `json:"h"`
+	L                float64         `json:"l"`
+	Support          string          `json:"support"`
+	RigidityRelative *float64        `json:"rigidity_relative,omitempty"` // the classic formula's; not on the fe basis
+	Share            float64         `json:"share"`
+	Leaf             bool            `json:"leaf"`
+	Cut              bool            `json:"cut,omitempty"`
+	BendingFraction  *float64        `json:"bending_fraction,omitempty"` // of the classic formula; not on the fe basis
+	Shear            *float64        `json:"shear,omitempty"`
+	Moment           *float64        `json:"moment,omitempty"`
+	Forces           *jsonForces     `json:"forces,omitempty"`
+	Bars             []jsonBar       `json:"bars,omitempty"`
+	Design           *jsonPierDesign `json:"design,omitempty"`
 }
 
 // jsonForces are a pier's section forces (docs/method.md §6), unfactored,
@@ -564,6 +573,7 @@ func toJSON(s *solved) jsonWall {
 			j.Piers = append(j.Piers, jp)
 		}
 		j.Warnings = append(j.Warnings, pier.Texts(r.Warnings)...)
+		designJSON(s, &j)
 	}
 	if s.fe != nil || s.feErr != nil {
 		f := &jsonFE{Piers: []jsonFEShare{}, Warnings: []string{}}

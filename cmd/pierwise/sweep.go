@@ -100,8 +100,12 @@ type sweepPointJSON struct {
 	RigidityRelative *float64        `json:"rigidity_relative"`
 	Piers            []sweepPierJSON `json:"piers"`
 	MaxStressPier    string          `json:"max_stress_pier,omitempty"`
-	MaxStress        *float64        `json:"max_stress,omitempty"` // psi or MPa, with a load
-	Basis            string          `json:"basis"`                // "classic" or "fe": where this point's numbers come from
+	MaxStress        *float64        `json:"max_stress,omitempty"`      // psi or MPa, with a load
+	Basis            string          `json:"basis"`                     // "classic" or "fe": where this point's numbers come from
+	GoverningRatio   *float64        `json:"governing_ratio,omitempty"` // the pier design's, with [design]
+	GoverningPier    string          `json:"governing_pier,omitempty"`
+	Passes           *bool           `json:"passes,omitempty"` // every pier passes every check
+	DesignError      string          `json:"design_error,omitempty"`
 	Current          bool            `json:"current"`
 	Best             bool            `json:"best"`
 	Weak             []string        `json:"weak,omitempty"` // layout warnings here that the current position has not
@@ -129,6 +133,13 @@ func writeSweepJSON(out io.Writer, w *geometry.Wall, pts []study.Point, b geomet
 			}
 			for _, ps := range p.Piers {
 				j.Piers = append(j.Piers, sweepPierJSON{Name: ps.Name, Pier: ps.Key, Share: ps.Share})
+			}
+			if p.Designed {
+				r, ok := p.Ratio, p.Passes
+				j.GoverningRatio, j.GoverningPier, j.Passes = &r, p.RatioPier, &ok
+			}
+			if p.DesignErr != nil {
+				j.DesignError = p.DesignErr.Error()
 			}
 		}
 		list[i] = j
