@@ -5,6 +5,7 @@ import (
 	"fmt"
 	"math"
 	"path/filepath"
+	"pierwise/design"
 	"strconv"
 	"strings"
 
@@ -63,8 +64,8 @@ type Wall struct {
 	// or the rigidities are relative).
 	Drift Drift
 
-	// Governing is the wall's governing pier under its design shear, set
-	// when PierDesign is (nil until pier design exists).
+	// Governing is the wall's governing pier under its design shear
+	// (docs/method.md §8); nil for a wall file without [design].
 	Governing *Governing
 }
 
@@ -88,14 +89,6 @@ type Governing struct {
 	Ratio float64
 	Check string // what governs, e.g. "shear" or "flexure"
 }
-
-// PierDesign is the hook through which the pier design (docs/method.md §8)
-// checks a wall's piers under its storey design shear: loaded is the wall
-// solved under that shear on the classic basis, piers its leaf piers' forces
-// on the storey's basis. It is nil until pier design exists; when set,
-// Analyse fills each wall's Governing and the report, JSON and storey screen
-// show it.
-var PierDesign func(w *geometry.Wall, loaded *pier.Result, piers []PierForce) (*Governing, error)
 
 // Drift is a storey drift check: the elastic displacement δe along the
 // wall (or edge), the design drift δ = Cd·δe/Ie (ASCE 7-22 §12.8.6), its
@@ -501,13 +494,11 @@ func (a *Analysis) loadWall(w *Wall) error {
 		a.Warnings = append(a.Warnings, fmt.Sprintf("%s: under its design shear the drift δ = Cd·δe/Ie = %.3g %s exceeds the limit of its wall file, %.3g %s",
 			w.Name, u.DeflectionOf(res.Drift.Design), u.Deflection, u.DeflectionOf(res.Drift.Allowable), u.Deflection))
 	}
-	if PierDesign != nil {
-		g, err := PierDesign(w.Wall, res, w.Piers)
-		if err != nil {
-			return fmt.Errorf("storey: wall %s: pier design: %w", w.Name, err)
-		}
-		w.Governing = g
+	g, err := PierDesign(w.Wall, res)
+	if err != nil {
+		return fmt.Errorf("storey: wall %s: pier design: %w", w.Name, err)
 	}
+	w.Governing = g
 	return nil
 }
 
@@ -793,3 +784,26 @@ func wallName(ref WallRef, w *geometry.Wall) string {
 
 // Ratio is the pier's h/L.
 func (p PierForce) Ratio() float64 { return p.H() / p.L() }
+
+// PierDesign checks a storey wall's piers under its storey design shear
+// (docs/method.md §8): loaded is the wall solved under that shear on the
+// classic basis, whose section forces by load case the checks combine. A
+// wall file without [design] has no check (nil, nil).
+func PierDesign(w *geometry.Wall, loaded *pier.Result) (*Governing, error) {
+	if w == nil || w.Design == nil || loaded == nil {
+		return nil, nil
+	}
+	r, err := design.CheckWall(design.InputOf(w, design.ClassicPiers(loaded)))
+	if err != nil {
+		return nil, err
+	}
+	if r.Governing < 0 {
+		return nil, nil
+	}
+	p := &r.Piers[r.Governing]
+	check := "requirement"
+	if p.Requirement < 0 && len(p.Checks) > 0 {
+		check = p.GoverningCheck().Governs.String()
+	}
+	return &Governing{Pier: p.Name, Ratio: p.Ratio, Check: check}, nil
+}

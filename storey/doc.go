@@ -39,6 +39,7 @@
 // shears about the centre of rigidity equals the load's.
 //
 // Each wall is then solved under its design shear; its leaf piers take
-// their share of it on the storey's basis (Wall.Piers). PierDesign is the
-// hook through which pier design reports each wall's governing pier.
+// their share of it on the storey's basis (Wall.Piers). PierDesign checks
+// the piers of each wall whose file has [design] and names its governing
+// pier.
 package storey

@@ -5,10 +5,7 @@ import (
 
 	"pierwise/design"
 	"pierwise/drawing"
-	"pierwise/geometry"
-	"pierwise/pier"
 	"pierwise/report"
-	"pierwise/storey"
 )
 
 // designInput is the one place the commands turn a solved wall into the
@@ -166,11 +163,6 @@ func writeDesignLine(t *report.Text, s *solved) {
 	}
 }
 
-func init() {
-	pierRatios = drawRatios
-	storey.PierDesign = storeyPierDesign
-}
-
 // drawRatios gives pierwise draw --show ratios each leaf pier's governing
 // ratio.
 func drawRatios(s *solved) (drawing.RatioFunc, error) {
@@ -185,26 +177,4 @@ func drawRatios(s *solved) (drawing.RatioFunc, error) {
 		by[p.Name] = p.Ratio
 	}
 	return func(name string) (float64, bool) { r, ok := by[name]; return r, ok }, nil
-}
-
-// storeyPierDesign checks a storey wall's piers under its storey design
-// shear, from the classic result of the wall under that shear (its section
-// forces by load case); a wall without [design] has none.
-func storeyPierDesign(w *geometry.Wall, loaded *pier.Result, _ []storey.PierForce) (*storey.Governing, error) {
-	if w.Design == nil || loaded == nil {
-		return nil, nil
-	}
-	r, err := design.CheckWall(design.InputOf(w, design.ClassicPiers(loaded)))
-	if err != nil {
-		return nil, err
-	}
-	if r.Governing < 0 {
-		return nil, nil
-	}
-	p := &r.Piers[r.Governing]
-	check := "requirement"
-	if p.Requirement < 0 && len(p.Checks) > 0 {
-		check = p.GoverningCheck().Governs.String()
-	}
-	return &storey.Governing{Pier: p.Name, Ratio: p.Ratio, Check: check}, nil
 }

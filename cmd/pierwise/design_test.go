@@ -109,7 +109,7 @@ func TestDrawRatiosAndStoreyHook(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	g, err := storey.PierDesign(w, res, nil)
+	g, err := storey.PierDesign(w, res)
 	if err != nil || g == nil {
 		t.Fatalf("storey hook: %v %v", g, err)
 	}

@@ -19,12 +19,6 @@ func init() {
 	})
 }
 
-// pierRatios is where pier design plugs in its demand/capacity ratios for
-// --show ratios (the governing ratio of each leaf pier, by name, e.g. from
-// design.CheckWall's PierResult.Ratio); nil until the design checks read
-// their inputs from the wall file.
-var pierRatios func(s *solved) (drawing.RatioFunc, error)
-
 func runDraw(e *env, args []string) error {
 	fs := newFlags(e, "draw")
 	outPath := fs.String("o", "", "write the SVG to this file (atomically) instead of standard output")
@@ -109,10 +103,7 @@ func runDraw(e *env, args []string) error {
 			classicErr = s.basisErr()
 		}
 		if sh == drawing.Ratios {
-			if pierRatios == nil {
-				return usagef("--show ratios: pier design is not available yet for drawings (the design checks are not yet connected to the wall file's reinforcement and loads), so there are no demand/capacity ratios to draw; use --show shares or --show forces")
-			}
-			if in.Ratio, err = pierRatios(s); err != nil {
+			if in.Ratio, err = drawRatios(s); err != nil {
 				return err
 			}
 		}
