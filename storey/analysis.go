@@ -807,3 +807,13 @@ func PierDesign(w *geometry.Wall, loaded *pier.Result) (*Governing, error) {
 	}
 	return &Governing{Pier: p.Name, Ratio: p.Ratio, Check: check}, nil
 }
+
+// RigidityDifference returns (classic − FE) / FE of the wall's rigidity, and
+// false when one of them is not known or the wall is given by its rigidity
+// (then both are the given value).
+func (w *Wall) RigidityDifference() (float64, bool) {
+	if !(w.ClassicRigidity > 0) || !(w.FERigidity > 0) || w.Ref.HasRigidity {
+		return 0, false
+	}
+	return (w.ClassicRigidity - w.FERigidity) / w.FERigidity, true
+}

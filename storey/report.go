@@ -169,8 +169,8 @@ func reportBody(out io.Writer, a *Analysis, now time.Time, version string) error
 			if wl.FERigidity > 0 {
 				fr = rigidity(a, u, wl.FERigidity)
 			}
-			if wl.ClassicRigidity > 0 && wl.FERigidity > 0 && !wl.Ref.HasRigidity {
-				diff = fmt.Sprintf("%+.1f %%", 100*(wl.ClassicRigidity-wl.FERigidity)/wl.FERigidity)
+			if d, ok := wl.RigidityDifference(); ok {
+				diff = fmt.Sprintf("%+.1f %%", 100*d)
 			}
 			t.Add(string(WallKey(i)), wl.Name, cl, fr, diff)
 		}

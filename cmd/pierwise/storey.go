@@ -117,8 +117,8 @@ func writeStoreyTables(out io.Writer, a *storey.Analysis) {
 			if w.FERigidity > 0 {
 				fr = rigidityText(a, u, w.FERigidity)
 			}
-			if w.ClassicRigidity > 0 && w.FERigidity > 0 && !w.Ref.HasRigidity {
-				diff = fmt.Sprintf("%+.1f%%", 100*(w.ClassicRigidity-w.FERigidity)/w.FERigidity)
+			if d, ok := w.RigidityDifference(); ok {
+				diff = fmt.Sprintf("%+.1f%%", 100*d)
 			}
 			tw.Add(w.Name, dirText(w.Ref), cl, fr, diff)
 		}
