@@ -490,10 +490,13 @@ func (e *elevation) tableView(l elevLayout) string {
 		}
 		sup := p.Support.String()
 		v, m, split := "", "", ""
+		// Every pier carries its V and M (a parent's are those of the
+		// whole pier, which its own piers share); the bending/shear split
+		// is the formula's, so a leaf's only.
+		if r.HasLoad && !p.Cut {
+			v, m = num(u.ForceOf(p.Shear)), num(u.MomentOf(p.Moment))
+		}
 		if p.Leaf {
-			if r.HasLoad {
-				v, m = num(u.ForceOf(p.Shear)), num(u.MomentOf(p.Moment))
-			}
 			if t := p.Parts.Total(); t > 0 {
 				split = fmt.Sprintf("%.0f/%.0f", 100*p.Parts.Bending/t, 100*p.Parts.Shear/t)
 			}
