@@ -1,6 +1,7 @@
 package study
 
 import (
+	"context"
 	"errors"
 	"fmt"
 	"math"
@@ -137,6 +138,14 @@ func Compare(a, b *geometry.Wall) (*Comparison, error) {
 
 // CompareWith is Compare with options.
 func CompareWith(a, b *geometry.Wall, opt Options) (*Comparison, error) {
+	return CompareContext(context.Background(), a, b, opt)
+}
+
+// CompareContext is CompareWith that stops when ctx is done: the
+// finite-element solves run through basis.SolveContext, which looks at ctx
+// inside assembly and factorisation, and the error is then ctx's. The
+// editor cancels a comparison the user has moved on from.
+func CompareContext(ctx context.Context, a, b *geometry.Wall, opt Options) (*Comparison, error) {
 	c := &Comparison{}
 	for i, w := range []*geometry.Wall{a, b} {
 		side := &c.Before
@@ -151,7 +160,10 @@ func CompareWith(a, b *geometry.Wall, opt Options) (*Comparison, error) {
 		}
 		side.Wall = w
 		side.Label = w.Layouts[w.Active].Name
-		b := basis.Solve(w, opt.Basis, basis.Options{FE: opt.FEOptions, Check: opt.FE})
+		b := basis.SolveContext(ctx, w, opt.Basis, basis.Options{FE: opt.FEOptions, Check: opt.FE})
+		if err := ctx.Err(); err != nil && b.FEErr != nil {
+			return nil, err // the model was cut short
+		}
 		side.Basis = b
 		side.Result, side.Err = b.View(), b.ClassicErr // the classic errors as they are, for their types
 		if b.IsFE() {

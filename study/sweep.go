@@ -2,6 +2,7 @@ package study
 
 import (
 	"cmp"
+	"context"
 	"errors"
 	"fmt"
 	"math"
@@ -136,6 +137,13 @@ type SweepOptions struct {
 // that makes more than MaxFEPoints positions is refused with the smallest
 // step that would do.
 func SweepWith(w *geometry.Wall, name string, axis Axis, step geometry.Length, opt SweepOptions) ([]Point, error) {
+	return SweepContext(context.Background(), w, name, axis, step, opt)
+}
+
+// SweepContext is SweepWith that stops when ctx is done, between positions
+// and inside a position's finite-element solve, with ctx's error: the
+// editor cancels a sweep the user has moved on from.
+func SweepContext(ctx context.Context, w *geometry.Wall, name string, axis Axis, step geometry.Length, opt SweepOptions) ([]Point, error) {
 	ops := w.Openings()
 	idx := FindOpening(w, name)
 	if idx < 0 {
@@ -189,6 +197,9 @@ func SweepWith(w *geometry.Wall, name string, axis Axis, step geometry.Length, o
 
 	var pts []Point
 	for k := kmin; k <= kmax; k++ {
+		if err := ctx.Err(); err != nil {
+			return nil, err
+		}
 		pos := math.Min(math.Max(cur+float64(k)*s, 0), span)
 		if k == 0 {
 			pos = cur
@@ -203,7 +214,10 @@ func SweepWith(w *geometry.Wall, name string, axis Axis, step geometry.Length, o
 			continue
 		}
 		moved[idx] = m
-		pts = append(pts, solvePoint(&work, m, k == 0, opt))
+		pts = append(pts, solvePoint(ctx, &work, m, k == 0, opt))
+	}
+	if err := ctx.Err(); err != nil {
+		return nil, err // the last position's model was cut short
 	}
 	markWeak(pts)
 	markBest(pts)
@@ -259,12 +273,12 @@ func FindOpening(w *geometry.Wall, name string) int {
 	return slices.IndexFunc(ops, func(o geometry.Opening) bool { return strings.EqualFold(o.Name, name) })
 }
 
-func solvePoint(w *geometry.Wall, o geometry.Opening, current bool, opt SweepOptions) Point {
+func solvePoint(ctx context.Context, w *geometry.Wall, o geometry.Opening, current bool, opt SweepOptions) Point {
 	p := Point{X: o.X, Y: o.Sill, Current: current}
 	var res *pier.Result
 	var err error
 	if opt.Basis == geometry.BasisFE {
-		b := basis.Solve(w, opt.Basis, basis.Options{FE: opt.FE})
+		b := basis.SolveContext(ctx, w, opt.Basis, basis.Options{FE: opt.FE})
 		if res, err = b.View(), b.Err(); err == nil && res == nil {
 			err = b.ClassicErr // no classic decomposition: no piers to share
 		}

@@ -25,7 +25,7 @@ func TestBasisKey(t *testing.T) {
 	if v := ed.view(); !strings.Contains(v, "basis fe") || !strings.Contains(v, "fe: updating...") {
 		t.Fatalf("fe basis before the model answers:\n%s", v)
 	}
-	ed.press(runFE(context.Background(), make(chan struct{}), e.fe.id, ed.wall(), e.res)())
+	ed.press(runFE(e.fe.id, ed.wall(), e.res)(context.Background()))
 	if e.fe.res == nil {
 		t.Fatalf("FE: %v", e.fe.err)
 	}
@@ -51,7 +51,7 @@ func TestBasisKey(t *testing.T) {
 	if v := ed.view(); !strings.Contains(v, "fe: updating...") || e.bs.shown == nil {
 		t.Errorf("after an edit on the fe basis:\n%s", v)
 	}
-	ed.press(runFE(context.Background(), make(chan struct{}), e.fe.id, ed.wall(), e.res)())
+	ed.press(runFE(e.fe.id, ed.wall(), e.res)(context.Background()))
 	if v := ed.view(); strings.Contains(v, "updating") {
 		t.Errorf("still updating after the answer:\n%s", v)
 	}
@@ -106,7 +106,7 @@ func TestBasisFEStaggered(t *testing.T) {
 	if e.solveErr == nil {
 		t.Fatal("the classic method solved the staggered layout")
 	}
-	ed.press(runFE(context.Background(), make(chan struct{}), e.fe.id, ed.wall(), e.res)())
+	ed.press(runFE(e.fe.id, ed.wall(), e.res)(context.Background()))
 	v := ed.view()
 	if e.fe.res == nil || !strings.Contains(v, "relative    "+num(e.fe.res.Rigidity)) || strings.Contains(v, "No answer") {
 		t.Errorf("the model's answer is not shown:\n%s", v)
@@ -123,7 +123,7 @@ func TestSweepScreenFEBasis(t *testing.T) {
 	c.basis = geometry.BasisFE
 	s := sweepRun(t, c, 80, 24)
 	s.update(cmpKey("tab")) // W1
-	s.update(s.start()())
+	drive(s, s.start())
 	w := c.doc.wall
 	want, err := study.SweepWith(w, "W1", study.AlongX, steps(geometry.US)[defaultStep(geometry.US)],
 		study.SweepOptions{Basis: geometry.BasisFE, FE: fe.Options{Mesh: w.Check.Mesh, Element: w.Check.Element}})

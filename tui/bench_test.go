@@ -116,7 +116,7 @@ func BenchmarkKeyToResultFE(b *testing.B) {
 			k = left
 		}
 		m.Update(k)
-		m.Update(runFE(context.Background(), make(chan struct{}), e.fe.id, e.wall(), e.res)())
+		m.Update(runFE(e.fe.id, e.wall(), e.res)(context.Background()))
 		if e.bs.stale || e.fe.res == nil {
 			b.Fatalf("no current answer: %v", e.fe.err)
 		}

@@ -1,6 +1,7 @@
 package tui
 
 import (
+	"context"
 	"fmt"
 	"io"
 	"strings"
@@ -91,6 +92,9 @@ type compareScreen struct {
 	msgBad bool
 }
 
+// compareStartMsg asks for the FE comparison of request id.
+type compareStartMsg struct{ id int }
+
 // compareFEMsg brings a comparison with the FE check, computed in a command.
 type compareFEMsg struct {
 	id  int
@@ -142,27 +146,46 @@ func (s *compareScreen) recompute() tea.Cmd {
 	}
 	s.feID++
 	s.feRunning = false
-	onFE := s.c.basis == geometry.BasisFE
-	if (!s.feOn && !onFE) || s.err != nil {
+	s.c.gate().stop() // whatever computes now is for an older request
+	if !s.wantsModel() || s.err != nil {
 		return nil
 	}
 	s.feRunning = true
-	// On the fe basis the background answer is the comparison on the
-	// model (docs/method.md §5); the classic one shows until it arrives.
-	id, opt := s.feID, study.Options{FE: s.feOn, Basis: s.c.basis, FEOptions: fe.Options{Mesh: w.Check.Mesh, Element: w.Check.Element}}
-	return func() tea.Msg {
-		c, err := study.CompareWith(a, b, opt)
+	id := s.feID
+	return func() tea.Msg { return compareStartMsg{id} }
+}
+
+// wantsModel reports whether the comparison needs the finite-element
+// model: the check is on, or the basis is fe.
+func (s *compareScreen) wantsModel() bool { return s.feOn || s.c.basis == geometry.BasisFE }
+
+// startFE runs the FE comparison for request id through the program's
+// one background gate: a check still computing is cancelled first, so at
+// most one is in flight however fast the layout keys are pressed. On the
+// fe basis the background answer is the comparison on the model
+// (docs/method.md §5); the classic one shows until it arrives.
+func (s *compareScreen) startFE(id int) tea.Cmd {
+	w := s.c.doc.wall
+	a, b := study.WithLayout(w, s.before), study.WithLayout(w, s.after)
+	opt := study.Options{FE: s.feOn, Basis: s.c.basis, FEOptions: fe.Options{Mesh: w.Check.Mesh, Element: w.Check.Element}}
+	path := s.c.doc.path
+	return s.c.gate().run(compareStartMsg{id}, func(ctx context.Context) tea.Msg {
+		c, err := study.CompareContext(ctx, a, b, opt)
 		if c != nil {
 			c.Before.Path, c.After.Path = path, path
 		}
 		return compareFEMsg{id, c, err}
-	}
+	})
 }
 
 func (s *compareScreen) update(msg tea.Msg) (screen, tea.Cmd) {
 	switch msg := msg.(type) {
 	case resumeMsg:
 		return s, s.recompute()
+	case compareStartMsg:
+		if msg.id == s.feID && s.wantsModel() {
+			return s, s.startFE(msg.id)
+		}
 	case compareFEMsg:
 		if msg.id != s.feID {
 			break // a stale answer
@@ -193,6 +216,7 @@ func (s *compareScreen) update(msg tea.Msg) (screen, tea.Cmd) {
 		}
 		switch {
 		case key.Matches(msg, s.keys.Back):
+			s.c.gate().stop()
 			return s, popScreen()
 		case key.Matches(msg, s.keys.Help):
 			s.showHelp = true
@@ -215,6 +239,7 @@ func (s *compareScreen) update(msg tea.Msg) (screen, tea.Cmd) {
 			if i != s.c.doc.wall.Active {
 				_ = s.c.doc.change(func(w *geometry.Wall) error { w.Active = i; return nil })
 			}
+			s.c.gate().stop()
 			return s, popScreen()
 		case key.Matches(msg, s.keys.Snapshot):
 			if s.cmp == nil {

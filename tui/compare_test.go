@@ -238,7 +238,7 @@ func TestCompareScreenFE(t *testing.T) {
 	if !s.feRunning || s.cmp.Before.FE != nil {
 		t.Fatal("a stale FE answer was taken")
 	}
-	s.update(cmd())
+	drive(s, cmd)
 	if s.feRunning || s.cmp.Before.FE == nil || s.cmp.After.FE == nil {
 		t.Fatalf("no FE answer: %v %v", s.cmp.Before.FEErr, s.cmp.After.FEErr)
 	}

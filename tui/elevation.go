@@ -162,6 +162,12 @@ func (e *elevation) update(msg tea.Msg) (screen, tea.Cmd) {
 			e.resolve()
 			return e, e.scheduleFE()
 		}
+		if e.fe.running {
+			// The awaited answer went to the screen that was on top, or
+			// that screen's own check cancelled it: ask again.
+			e.supersede()
+			return e, e.scheduleFE()
+		}
 		return e, nil
 	case reportDrawnMsg:
 		if msg.err != nil {

@@ -215,7 +215,7 @@ func TestGoldenFE(t *testing.T) {
 func TestFERuns(t *testing.T) {
 	ed := newEditor(t, annex(), "", 160, 48)
 	e := ed.elev()
-	ed.press(runFE(context.Background(), make(chan struct{}), e.fe.id, ed.wall(), e.res)())
+	ed.press(runFE(e.fe.id, ed.wall(), e.res)(context.Background()))
 	if e.fe.err != nil || e.fe.res == nil {
 		t.Fatalf("FE: %v", e.fe.err)
 	}
@@ -586,7 +586,7 @@ func TestStaleFE(t *testing.T) {
 	ed := newEditor(t, annex(), "", 100, 30)
 	e := ed.elev()
 	old := e.fe.id
-	stale := runFE(context.Background(), make(chan struct{}), old, ed.wall(), e.res)()
+	stale := runFE(old, ed.wall(), e.res)(context.Background())
 	ed.press(runes("l"))
 	ed.press(stale)
 	if e.fe.res != nil {
@@ -596,7 +596,7 @@ func TestStaleFE(t *testing.T) {
 	if cmd := ed.press(feStartMsg{id: old}); cmd != nil {
 		t.Fatal("stale FE start ran")
 	}
-	fresh := runFE(context.Background(), make(chan struct{}), e.fe.id, ed.wall(), e.res)()
+	fresh := runFE(e.fe.id, ed.wall(), e.res)(context.Background())
 	ed.press(fresh)
 	if e.fe.res == nil {
 		t.Fatal("current FE answer dropped")

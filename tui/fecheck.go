@@ -87,29 +87,47 @@ func (e *elevation) scheduleFE() tea.Cmd {
 	return e.c.tick(feDelay, func(time.Time) tea.Msg { return feStartMsg{id} })
 }
 
-// startFE starts the check for id once no other check computes: while the
-// superseded one winds down, a command waits for it and asks again.
-func (e *elevation) startFE(id int) tea.Cmd {
-	if e.c.fe == nil {
-		e.c.fe = &feGate{}
-	}
-	g := e.c.fe
+// run returns the command that computes work once no other check
+// computes: while one still runs it is cancelled, and the command waits for
+// it to return and answers retry, so that its screen asks again (and drops
+// the retry when a newer request came meanwhile). Every screen's background
+// solving goes through it (the elevation's FE check, the comparison's, the
+// sweep), so the program holds one model in memory at a time. Call it only
+// from update and return its command: the gate counts it as running.
+func (g *feGate) run(retry tea.Msg, work func(ctx context.Context) tea.Msg) tea.Cmd {
 	if g.busy() {
 		g.stop()
 		done := g.done
-		return func() tea.Msg { <-done; return feStartMsg{id} }
+		return func() tea.Msg { <-done; return retry }
 	}
 	ctx, cancel := context.WithCancel(context.Background())
 	done := make(chan struct{})
 	g.cancel, g.done = cancel, done
-	return runFE(ctx, done, id, e.wall(), e.res)
+	return func() tea.Msg {
+		defer close(done)
+		defer cancel()
+		return work(ctx)
+	}
+}
+
+// gate is the program's one background gate (made on first use).
+func (c *common) gate() *feGate {
+	if c.fe == nil {
+		c.fe = &feGate{}
+	}
+	return c.fe
+}
+
+// startFE starts the check for id once no other check computes: while the
+// superseded one winds down, a command waits for it and asks again.
+func (e *elevation) startFE(id int) tea.Cmd {
+	return e.c.gate().run(feStartMsg{id}, runFE(id, e.wall(), e.res))
 }
 
 // runFE solves the FE model in the background on the wall and classic
 // result of this moment (both are never mutated: edits replace them).
-func runFE(ctx context.Context, done chan struct{}, id int, w *geometry.Wall, classic *pier.Result) tea.Cmd {
-	return func() tea.Msg {
-		defer close(done)
+func runFE(id int, w *geometry.Wall, classic *pier.Result) func(context.Context) tea.Msg {
+	return func(ctx context.Context) tea.Msg {
 		r, err := fe.SolveContext(ctx, w, classic, fe.Options{Mesh: w.Check.Mesh, Element: w.Check.Element})
 		return feDoneMsg{id: id, res: r, err: err}
 	}

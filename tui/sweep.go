@@ -1,6 +1,7 @@
 package tui
 
 import (
+	"context"
 	"fmt"
 	"io"
 	"math"
@@ -101,6 +102,9 @@ type sweepScreen struct {
 	msgBad bool
 }
 
+// sweepStartMsg asks for the sweep of request id.
+type sweepStartMsg struct{ id int }
+
 type sweepDoneMsg struct {
 	id  int
 	pts []study.Point
@@ -144,18 +148,37 @@ func (s *sweepScreen) start() tea.Cmd {
 	}
 	s.opening = min(max(s.opening, 0), len(ops)-1)
 	s.running = true
-	id, w, name, axis, step := s.id, s.wall(), ops[s.opening].Name, s.axis, s.stepLength()
-	opt := study.SweepOptions{Basis: s.c.basis, FE: fe.Options{Mesh: w.Check.Mesh, Element: w.Check.Element}}
-	return func() tea.Msg {
-		pts, err := study.SweepWith(w, name, axis, step, opt)
-		return sweepDoneMsg{id, pts, err}
+	s.c.gate().stop() // whatever computes now is for an older request
+	id := s.id
+	return func() tea.Msg { return sweepStartMsg{id} }
+}
+
+// run sweeps for request id through the program's one background gate: a
+// sweep still computing is cancelled first, so at most one is in flight
+// however fast the keys are pressed (on the fe basis every position is a
+// finite-element solve).
+func (s *sweepScreen) run(id int) tea.Cmd {
+	ops := s.wall().Openings()
+	if len(ops) == 0 {
+		return nil
 	}
+	w, name, axis, step := s.wall(), ops[s.opening].Name, s.axis, s.stepLength()
+	opt := study.SweepOptions{Basis: s.c.basis, FE: fe.Options{Mesh: w.Check.Mesh, Element: w.Check.Element}}
+	return s.c.gate().run(sweepStartMsg{id}, func(ctx context.Context) tea.Msg {
+		pts, err := study.SweepContext(ctx, w, name, axis, step, opt)
+		return sweepDoneMsg{id, pts, err}
+	})
 }
 
 func (s *sweepScreen) update(msg tea.Msg) (screen, tea.Cmd) {
 	switch msg := msg.(type) {
 	case resumeMsg:
 		return s, s.start()
+	case sweepStartMsg:
+		if msg.id == s.id {
+			return s, s.run(msg.id)
+		}
+		return s, nil
 	case sweepDoneMsg:
 		if msg.id != s.id {
 			return s, nil // stale
@@ -178,6 +201,7 @@ func (s *sweepScreen) update(msg tea.Msg) (screen, tea.Cmd) {
 		k := s.keys
 		switch {
 		case key.Matches(msg, k.Back):
+			s.c.gate().stop()
 			return s, popScreen()
 		case key.Matches(msg, k.Help):
 			s.showHelp = true

@@ -25,7 +25,7 @@ func sweepRun(t *testing.T, c *common, w, h int) *sweepScreen {
 	if cmd == nil {
 		t.Fatal("no sweep command")
 	}
-	s.update(cmd())
+	drive(s, cmd)
 	return s
 }
 
@@ -34,7 +34,7 @@ func TestSweepScreenGolden(t *testing.T) {
 		c := cmpCommon("annex.toml")
 		s := sweepRun(t, c, size[0], size[1])
 		s.update(cmpKey("tab")) // W1
-		s.update(s.start()())
+		drive(s, s.start())
 		v := ansi.Strip(s.view())
 		cmpCheckSize(t, v, size[0], size[1])
 		cmpGoldenView(t, fmt.Sprintf("sweep_%dx%d.golden", size[0], size[1]), v)
@@ -45,7 +45,7 @@ func TestSweepScreenPlace(t *testing.T) {
 	c := cmpCommon("annex.toml")
 	s := sweepRun(t, c, 80, 24)
 	s.update(cmpKey("tab")) // W1
-	s.update(s.start()())
+	drive(s, s.start())
 	want, err := study.Sweep(c.doc.wall, "W1", study.AlongX, steps(geometry.US)[defaultStep(geometry.US)])
 	if err != nil {
 		t.Fatal(err)
@@ -65,7 +65,7 @@ func TestSweepScreenPlace(t *testing.T) {
 	if got := c.doc.wall.Openings()[1].X; got != want[best].X || !c.doc.dirty() {
 		t.Errorf("W1 at %g (dirty %v), want %g", got, c.doc.dirty(), want[best].X)
 	}
-	s.update(cmd())
+	drive(s, cmd)
 	if cur := study.CurrentIndex(s.pts); cur < 0 || s.pts[cur].X != want[best].X {
 		t.Errorf("after the move the current point is %d", cur)
 	}
@@ -87,7 +87,7 @@ func TestSweepScreenStaleAndAxis(t *testing.T) {
 	if !s.running {
 		t.Error("a stale answer was taken")
 	}
-	s.update(axis())
+	drive(s, axis)
 	if s.running || len(s.pts) == 0 {
 		t.Fatalf("no points along y")
 	}
@@ -191,7 +191,7 @@ func sweepWeakCase(t *testing.T, w *geometry.Wall, width, height int) {
 	s := newSweepScreen(c)
 	s.setSize(width, height)
 	s.opening, s.axis, s.step = 1, study.AlongY, 2 // W2 up and down by 8 in
-	s.update(s.start()())
+	drive(s, s.start())
 	want, err := study.Sweep(w, "W2", study.AlongY, 8*geometry.Inch)
 	if err != nil {
 		t.Fatal(err)
@@ -244,5 +244,18 @@ func sweepWeakCase(t *testing.T, w *geometry.Wall, width, height int) {
 	}
 	if !strings.Contains(v, "! less reliable") {
 		t.Errorf("%dx%d: the legend does not explain !:\n%s", width, height, v)
+	}
+}
+
+// drive runs cmd and feeds its message to s, then the command that one
+// gives, until none is left: what bubbletea does with one screen's chain
+// of start, run and answer (no batches).
+func drive(s screen, cmd tea.Cmd) {
+	for cmd != nil {
+		msg := cmd()
+		if msg == nil {
+			return
+		}
+		_, cmd = s.update(msg)
 	}
 }
