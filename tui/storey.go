@@ -39,29 +39,58 @@ func newStoreyModel(path string) (*root, error) {
 	if err != nil {
 		return nil, err
 	}
+	files := make([]*wallFile, len(walls))
+	for i, ref := range st.Walls {
+		if ref.HasRigidity {
+			continue
+		}
+		if files[i], err = readWallFile(ref); err != nil {
+			return nil, err
+		}
+		walls[i] = files[i].wall
+	}
 	c := newCommon(nil, nil)
 	s := newStoreyScreen(c, st, walls)
-	if err := s.keepOwnLayouts(); err != nil {
-		return nil, err
+	for i, f := range files {
+		if f != nil {
+			s.docs[i].sum, s.docs[i].own = &f.sum, f.own
+		}
 	}
 	return newRoot(c, s), nil
 }
 
-// keepOwnLayouts remembers, for each wall the storey file opens in a layout
-// of its choice (layout = "..."), the layout its own file names active, so
-// that saving the edited wall leaves the file's active key as it was.
-func (s *storeyScreen) keepOwnLayouts() error {
-	for i, ref := range s.st.Walls {
-		if ref.Layout == "" {
-			continue
-		}
-		w, err := geometry.LoadFile(ref.Path)
-		if err != nil {
-			return err
-		}
-		s.docs[i].keepOwnActive(w.Layouts[w.Active].Name, w.Active)
+// wallFile is a storey's wall file as read: the wall in the storey's layout,
+// the hash of the file's content (a save notices a change made on disk
+// since, docs/method.md §11), and the layout the file itself names active
+// when the storey picks another, so that saving leaves the file's active
+// key as it was.
+type wallFile struct {
+	wall *geometry.Wall
+	sum  geometry.Sum
+	own  *ownActive
+}
+
+// readWallFile reads the wall file of ref; the wall and the hash come from
+// the same bytes.
+func readWallFile(ref storey.WallRef) (*wallFile, error) {
+	data, err := geometry.ReadUserFile(ref.Path)
+	if err != nil {
+		return nil, err
 	}
-	return nil
+	w, err := geometry.Parse(ref.Path, data)
+	if err != nil {
+		return nil, err
+	}
+	f := &wallFile{wall: w, sum: geometry.SumOf(data)}
+	if ref.Layout != "" {
+		k := w.LayoutIndex(ref.Layout)
+		if k < 0 {
+			return nil, fmt.Errorf("%s has no layout %s", geometry.Visible(ref.Path), quoteVisible(ref.Layout))
+		}
+		f.own = &ownActive{name: w.Layouts[w.Active].Name, index: w.Active}
+		w.Active = k
+	}
+	return f, nil
 }
 
 // storeyKeys are the keys of the storey screen; they implement help.KeyMap.
@@ -116,6 +145,10 @@ type storeyScreen struct {
 	sel    int
 	msg    string
 	msgBad bool
+
+	ask         *choice      // a save question, or nil
+	pending     []storeySave // the saves the question holds up
+	pendingQuit bool         // quit when they are done
 }
 
 func newStoreyScreen(c *common, st *storey.Storey, walls []*geometry.Wall) *storeyScreen {
@@ -172,6 +205,12 @@ func (s *storeyScreen) update(msg tea.Msg) (screen, tea.Cmd) {
 		return s, nil
 	case storeySavedMsg:
 		return s, s.saved(msg)
+	case chosenMsg:
+		return s, s.answered(msg)
+	case cancelledMsg:
+		s.ask, s.pending = nil, nil
+		s.say("not saved")
+		return s, nil
 	case storeyReportMsg:
 		if msg.err != nil {
 			s.refuse("no report: %v", msg.err)
@@ -193,6 +232,9 @@ func (s *storeyScreen) update(msg tea.Msg) (screen, tea.Cmd) {
 				s.showHelp = false
 			}
 			return s, nil
+		}
+		if s.ask != nil {
+			return s, s.ask.update(msg)
 		}
 		if s.confirmQuit {
 			return s, s.answerQuit(msg)
@@ -239,7 +281,11 @@ func (s *storeyScreen) answerQuit(msg tea.KeyMsg) tea.Cmd {
 }
 
 // open pushes the elevation editor on wall i's document.
-func (s *storeyScreen) open(i int) tea.Cmd {
+func (s *storeyScreen) open(i int) tea.Cmd { return s.openThen(i, nil) }
+
+// openThen is open with then applied to the editor before it shows (to
+// open its save-as form).
+func (s *storeyScreen) openThen(i int, then func(e *elevation)) tea.Cmd {
 	cc := *s.c
 	cc.doc = s.docs[i]
 	e := newElevation(&cc)
@@ -252,16 +298,22 @@ func (s *storeyScreen) open(i int) tea.Cmd {
 	} else {
 		e.say("%s: esc or q returns to the storey", s.st.Walls[i].File)
 	}
+	if then != nil {
+		then(e)
+	}
 	return tea.Sequence(pushScreen(&storeyWall{e: e}), e.init())
 }
 
 // saveAll saves every changed wall in a command (no file is written inside
-// update); quit closes the program when all were saved.
+// update); quit closes the program when all were saved. Each save is the
+// elevation editor's (save in save.go): a wall file changed on disk since
+// it was read, or one whose comments the save would drop, stops the saves
+// with a question.
 func (s *storeyScreen) saveAll(quit bool) tea.Cmd {
 	var jobs []storeySave
 	for i, d := range s.docs {
 		if d.dirty() {
-			jobs = append(jobs, storeySave{i: i, path: d.path, wall: d.onDisk(), version: d.version})
+			jobs = append(jobs, storeySave{i: i, req: saveRequest{path: d.path, wall: d.onDisk(), version: d.version, known: d.sum, replace: d.sum == nil}})
 		}
 	}
 	if len(jobs) == 0 {
@@ -271,45 +323,130 @@ func (s *storeyScreen) saveAll(quit bool) tea.Cmd {
 		}
 		return nil
 	}
+	return saveWalls(jobs, quit)
+}
+
+// saveWalls saves jobs in order until one fails or asks.
+func saveWalls(jobs []storeySave, quit bool) tea.Cmd {
 	return func() tea.Msg {
-		for k := range jobs {
-			if jobs[k].err = geometry.Save(jobs[k].path, jobs[k].wall); jobs[k].err != nil {
+		out := storeySavedMsg{quit: quit}
+		for k, j := range jobs {
+			a := save(j.req)
+			if a.err != nil || a.ask != 0 {
+				out.stop, out.rest = a, jobs[k:]
 				break
 			}
+			j.sum = a.sum
+			out.done = append(out.done, j)
 		}
-		return storeySavedMsg{jobs: jobs, quit: quit}
+		return out
 	}
 }
 
-// storeySave is one wall file to save, and how it went.
+// storeySave is one wall file to save, and its hash once saved.
 type storeySave struct {
-	i       int
-	path    string
-	wall    *geometry.Wall
-	version int
-	err     error
+	i   int // the wall
+	req saveRequest
+	sum geometry.Sum
 }
 
+// storeySavedMsg is the answer of saveWalls: the walls saved, and the
+// answer that stopped the saves (an error or a question) with the walls
+// left, the first being the one it is about.
 type storeySavedMsg struct {
-	jobs []storeySave
+	done []storeySave
+	stop savedMsg
+	rest []storeySave
 	quit bool
 }
 
-// saved applies the answer of saveAll.
+// saved applies the answer of saveWalls.
 func (s *storeyScreen) saved(msg storeySavedMsg) tea.Cmd {
 	var names []string
-	for _, j := range msg.jobs {
-		if j.err != nil {
-			s.refuse("not saved: %s: %v", s.st.Walls[j.i].File, j.err)
-			return nil
-		}
-		s.docs[j.i].saved = j.version
+	for _, j := range msg.done {
+		d := s.docs[j.i]
+		sum := j.sum
+		d.saved, d.sum = j.req.version, &sum
 		names = append(names, s.st.Walls[j.i].File)
 	}
-	s.say("saved %s", strings.Join(names, ", "))
-	if msg.quit {
-		return tea.Quit
+	if len(msg.rest) == 0 {
+		s.say("saved %s", geometry.Visible(strings.Join(names, ", ")))
+		if msg.quit {
+			return tea.Quit
+		}
+		return nil
 	}
+	j := msg.rest[0]
+	name := geometry.Visible(s.st.Walls[j.i].File)
+	switch msg.stop.ask {
+	case askChanged:
+		s.ask = newChoice(askChanged, name+" changed on disk.",
+			ans("r", "reload", "reload"), ans("o", "overwrite", "overwrite"), ans("S", "save elsewhere", "elsewhere"))
+	case askComments:
+		s.ask = newChoice(askComments, "Saving drops the comments of "+name+" (dotted keys, inline tables or multi-line strings).",
+			ans("y", "save anyway", "save"), ans("S", "save elsewhere", "elsewhere"))
+	case askReplace:
+		s.ask = newChoice(askReplace, fmt.Sprintf("%s exists (%s). Replace it?", name, msg.stop.info),
+			ans("y", "replace", "replace"), ans("n", "keep it", "cancel"))
+	default:
+		s.refuse("not saved: %s: %v", name, msg.stop.err)
+		return nil
+	}
+	s.pending, s.pendingQuit = msg.rest, msg.quit
+	return nil
+}
+
+// answered applies the answer to a save question about s.pending[0]:
+// overwrite (or save anyway) and go on with the walls left; reload the wall
+// from its file (its edits here stay in its undo history); save it
+// elsewhere in its editor's save-as form; or stop.
+func (s *storeyScreen) answered(msg chosenMsg) tea.Cmd {
+	jobs, quit := s.pending, s.pendingQuit
+	s.ask, s.pending = nil, nil
+	if len(jobs) == 0 {
+		return nil
+	}
+	j := jobs[0]
+	name := s.st.Walls[j.i].File
+	switch msg.what {
+	case "overwrite":
+		jobs[0].req.overwrite = true
+	case "save":
+		jobs[0].req.dropComments = true
+	case "replace":
+		jobs[0].req.replace = true
+	case "reload":
+		if err := s.reload(j.i); err != nil {
+			s.refuse("not reloaded: %s: %v", name, err)
+			return nil
+		}
+		s.say("reloaded %s (enter, then u, brings back the edits made here)", name)
+		if len(jobs) == 1 {
+			return nil
+		}
+		return saveWalls(jobs[1:], quit)
+	case "elsewhere":
+		s.sel = j.i
+		s.say("save %s elsewhere; the storey file still names %s", name, name)
+		return s.openThen(j.i, func(e *elevation) { e.openSaveAs(false) })
+	default:
+		s.say("not saved")
+		return nil
+	}
+	return saveWalls(jobs, quit)
+}
+
+// reload reads wall i from its file again as a change of its document,
+// and analyses the storey anew.
+func (s *storeyScreen) reload(i int) error {
+	f, err := readWallFile(s.st.Walls[i])
+	if err != nil {
+		return err
+	}
+	d := s.docs[i]
+	_ = d.change(func(w *geometry.Wall) error { *w = *f.wall; return nil })
+	d.saved, d.sum, d.own = d.version, &f.sum, f.own
+	s.analyse()
 	return nil
 }
 
@@ -377,6 +514,8 @@ func (s *storeyScreen) view() string {
 
 	var hint string
 	switch {
+	case s.ask != nil:
+		hint = s.ask.view(st)
 	case s.confirmQuit:
 		hint = st.errText.Render("unsaved walls: " + strings.Join(s.dirty(), ", ") + " — s save and quit, y quit without saving, n stay")
 	default:

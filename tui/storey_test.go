@@ -76,7 +76,7 @@ func (d *storeyDriver) run(cmd tea.Cmd) {
 		for _, c := range msg {
 			d.run(c)
 		}
-	case pushScreenMsg, popScreenMsg, storeySavedMsg, storeyReportMsg:
+	case pushScreenMsg, popScreenMsg, storeySavedMsg, storeyReportMsg, chosenMsg, cancelledMsg, savedMsg:
 		_, next := d.m.Update(msg)
 		d.run(next)
 	default:
@@ -339,5 +339,124 @@ func TestStoreyOpensWallUnderDesignShear(t *testing.T) {
 	}
 	if sc := d.screen(); sc.docs[1].dirty() || sc.docs[1].wall.Load.Shear != 0 {
 		t.Errorf("the wall document changed: dirty %v, load %g", sc.docs[1].dirty(), float64(sc.docs[1].wall.Load.Shear))
+	}
+}
+
+// editPartitionBehindTheBack widens the partition's door in the storey
+// screen, then another program changes the partition's title on disk.
+func editPartitionBehindTheBack(t *testing.T) (d *storeyDriver, file string, edited geometry.Length) {
+	t.Helper()
+	path := copyWorkshop(t)
+	file = filepath.Join(filepath.Dir(path), "partition.toml")
+	d = newStoreyDriver(t, path, 100, 30)
+	for i := 0; i < 4; i++ {
+		d.press(runes("j"))
+	}
+	d.press(keyEnter, runes("L"), keyEsc)
+	edited = d.screen().docs[4].wall.Openings()[0].Width
+	data, err := os.ReadFile(file)
+	if err != nil {
+		t.Fatal(err)
+	}
+	changed := strings.Replace(string(data), `title = "Tool room partition"`, `title = "Changed elsewhere"`, 1)
+	if changed == string(data) {
+		t.Fatal("the partition's title line is not in the file")
+	}
+	if err := os.WriteFile(file, []byte(changed), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	return d, file, edited
+}
+
+func fileHolds(t *testing.T, file, text string) bool {
+	t.Helper()
+	data, err := os.ReadFile(file)
+	if err != nil {
+		t.Fatal(err)
+	}
+	return strings.Contains(string(data), text)
+}
+
+// A wall file changed on disk since the storey read it: s asks (reload,
+// overwrite, save elsewhere) and writes nothing; o overwrites it with the
+// edited wall.
+func TestStoreySaveChangedOnDiskOverwrite(t *testing.T) {
+	d, file, edited := editPartitionBehindTheBack(t)
+	s := d.screen()
+	d.press(runes("s"))
+	if v := d.view(); !strings.Contains(v, "partition.toml changed on disk") || !strings.Contains(v, "overwrite") {
+		t.Fatalf("no question:\n%s", v)
+	}
+	if !fileHolds(t, file, "Changed elsewhere") || !s.docs[4].dirty() {
+		t.Fatal("the changed file was written over before the answer")
+	}
+	d.press(runes("x")) // another key changes nothing
+	if s.ask == nil || !fileHolds(t, file, "Changed elsewhere") {
+		t.Fatal("a key other than the answers closed the question or saved")
+	}
+	d.press(runes("o"))
+	if s.ask != nil || s.docs[4].dirty() || fileHolds(t, file, "Changed elsewhere") {
+		t.Fatalf("o did not overwrite:\n%s", d.view())
+	}
+	w, err := geometry.LoadFile(file)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if got := w.Openings()[0].Width; !near(float64(got), float64(edited)) {
+		t.Errorf("the file's door is %v wide, the edited one %v", got, edited)
+	}
+	// The hash is the saved file's now: the next save asks nothing.
+	d.press(keyEnter, runes("L"), keyEsc, runes("s"))
+	if s.ask != nil || s.docs[4].dirty() {
+		t.Errorf("a second save asked again:\n%s", d.view())
+	}
+}
+
+// r reloads the wall from its file (the edit stays in its undo history);
+// esc keeps both as they are.
+func TestStoreySaveChangedOnDiskReload(t *testing.T) {
+	d, file, edited := editPartitionBehindTheBack(t)
+	s := d.screen()
+	d.press(runes("s"), keyEsc)
+	if s.ask != nil || !s.docs[4].dirty() || !fileHolds(t, file, "Changed elsewhere") {
+		t.Fatal("esc did not leave the question with nothing written")
+	}
+	d.press(runes("s"), runes("r"))
+	doc := s.docs[4]
+	if s.ask != nil || doc.dirty() || doc.wall.Title != "Changed elsewhere" || !fileHolds(t, file, "Changed elsewhere") {
+		t.Fatalf("r did not reload: title %q, dirty %v\n%s", doc.wall.Title, doc.dirty(), d.view())
+	}
+	if w := doc.wall; w.Layouts[w.Active].Name != geometry.DefaultLayout || near(float64(w.Openings()[0].Width), float64(edited)) {
+		t.Error("the reloaded wall is not the file's")
+	}
+	if !doc.undoChange() || !near(float64(doc.wall.Openings()[0].Width), float64(edited)) {
+		t.Error("undo does not bring the edit back")
+	}
+}
+
+// S opens the wall's editor with the save-as form.
+func TestStoreySaveChangedOnDiskElsewhere(t *testing.T) {
+	d, file, _ := editPartitionBehindTheBack(t)
+	d.press(runes("s"), runes("S"))
+	top, ok := d.m.top().(*storeyWall)
+	if !ok || top.e.mode != modeForm || !strings.Contains(d.view(), "Save as") {
+		t.Fatalf("S: top %T\n%s", d.m.top(), d.view())
+	}
+	if !fileHolds(t, file, "Changed elsewhere") {
+		t.Error("the changed file was written over")
+	}
+}
+
+// The wall's own editor, opened from the storey, knows the file's hash
+// too: its save asks the same question.
+func TestStoreyWallEditorSaveChangedOnDisk(t *testing.T) {
+	d, file, _ := editPartitionBehindTheBack(t)
+	d.press(keyEnter, runes("s"))
+	top, ok := d.m.top().(*storeyWall)
+	if !ok || top.e.mode != modeAsk || !strings.Contains(d.view(), "changed on disk") {
+		t.Fatalf("s in the wall's editor: top %T\n%s", d.m.top(), d.view())
+	}
+	if !fileHolds(t, file, "Changed elsewhere") {
+		t.Error("the changed file was written over")
 	}
 }
