@@ -5,6 +5,7 @@ import (
 	"strings"
 
 	"github.com/charmbracelet/lipgloss"
+	"github.com/charmbracelet/x/ansi"
 
 	"github.com/charmbracelet/bubbles/key"
 	tea "github.com/charmbracelet/bubbletea"
@@ -74,8 +75,9 @@ func (c *choice) update(msg tea.KeyMsg) tea.Cmd {
 	return nil
 }
 
-// view is the status line of the question.
-func (c *choice) view(st *styles) string {
+// view is the status line of the question in width cells: the text gives
+// way (cut with an ellipsis) so that the answers' keys always show.
+func (c *choice) view(st *styles, width int) string {
 	bs := make([]key.Binding, 0, len(c.answers)+1)
 	for _, a := range c.answers {
 		bs = append(bs, a.key)
@@ -83,7 +85,12 @@ func (c *choice) view(st *styles) string {
 	if c.ask != askQuit {
 		bs = append(bs, c.cancel)
 	}
-	return st.errText.Render(c.text) + " " + keyHint(st, bs...)
+	keys := keyHint(st, bs...)
+	text := c.text
+	if room := width - lipgloss.Width(keys) - 1; lipgloss.Width(text) > room {
+		text = ansi.Truncate(text, max(room, 1), "…")
+	}
+	return st.errText.Render(text) + " " + keys
 }
 
 // helpPage is the full key help as a sub-model: it sends helpClosedMsg on

@@ -573,7 +573,7 @@ func (e *elevation) tableView(l elevLayout) string {
 func (e *elevation) statusView() string {
 	st := e.c.styles
 	if e.mode == modeAsk {
-		return e.ask.view(st)
+		return e.ask.view(st, e.width)
 	}
 	if e.msg != "" {
 		if e.msgBad {

@@ -137,10 +137,15 @@ func TestCommentsLostAsks(t *testing.T) {
 		t.Fatal(err)
 	}
 	ed.m = newModel(w, Options{Path: path, Content: data2})
-	ed.m.Update(tea.WindowSizeMsg{Width: 100, Height: 30})
+	ed.m.Update(tea.WindowSizeMsg{Width: 80, Height: 24})
 	ed.do(runes("l"), runes("s"))
 	if e := ed.elev(); e.mode != modeAsk || e.ask.ask != askComments {
 		t.Skipf("comments were kept (mode %v, %q): nothing to ask", e.mode, e.msg)
+	}
+	// At 80 columns the question's text gives way to its keys.
+	lines := strings.Split(ed.view(), "\n")
+	if q := lines[len(lines)-2]; !strings.Contains(q, "S save elsewhere") || !strings.Contains(q, "esc cancel") {
+		t.Errorf("the question's keys do not show at 80 columns:\n%s", q)
 	}
 	ed.do(runes("y"))
 	if ed.m.c.doc.dirty() {

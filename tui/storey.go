@@ -515,7 +515,7 @@ func (s *storeyScreen) view() string {
 	var hint string
 	switch {
 	case s.ask != nil:
-		hint = s.ask.view(st)
+		hint = s.ask.view(st, W)
 	case s.confirmQuit:
 		hint = st.errText.Render("unsaved walls: " + strings.Join(s.dirty(), ", ") + " — s save and quit, y quit without saving, n stay")
 	default:
