@@ -144,7 +144,7 @@ func TestCommentsLostAsks(t *testing.T) {
 	}
 	// At 80 columns the question's text gives way to its keys.
 	lines := strings.Split(ed.view(), "\n")
-	if q := lines[len(lines)-2]; !strings.Contains(q, "S save elsewhere") || !strings.Contains(q, "esc cancel") {
+	if q := lines[len(lines)-2]; !strings.Contains(q, "S save as") || !strings.Contains(q, "esc cancel") {
 		t.Errorf("the question's keys do not show at 80 columns:\n%s", q)
 	}
 	ed.do(runes("y"))

@@ -139,11 +139,11 @@ func (e *elevation) saved(msg savedMsg) tea.Cmd {
 		return nil
 	case msg.ask == askChanged:
 		e.openChoice(newChoice(askChanged, name+" changed on disk.",
-			ans("r", "reload", "reload"), ans("o", "overwrite", "overwrite"), ans("S", "save elsewhere", "elsewhere")), r)
+			ans("r", "reload", "reload"), ans("o", "overwrite", "overwrite"), ans("S", "save as", "elsewhere")), r)
 		return nil
 	case msg.ask == askComments:
 		e.openChoice(newChoice(askComments, "Saving drops the comments of "+name+" (dotted keys, inline tables or multi-line strings).",
-			ans("y", "save anyway", "save"), ans("S", "save elsewhere", "elsewhere")), r)
+			ans("y", "save anyway", "save"), ans("S", "save as", "elsewhere")), r)
 		return nil
 	}
 	d := e.c.doc

@@ -381,10 +381,10 @@ func (s *storeyScreen) saved(msg storeySavedMsg) tea.Cmd {
 	switch msg.stop.ask {
 	case askChanged:
 		s.ask = newChoice(askChanged, name+" changed on disk.",
-			ans("r", "reload", "reload"), ans("o", "overwrite", "overwrite"), ans("S", "save elsewhere", "elsewhere"))
+			ans("r", "reload", "reload"), ans("o", "overwrite", "overwrite"), ans("S", "save as", "elsewhere"))
 	case askComments:
 		s.ask = newChoice(askComments, "Saving drops the comments of "+name+" (dotted keys, inline tables or multi-line strings).",
-			ans("y", "save anyway", "save"), ans("S", "save elsewhere", "elsewhere"))
+			ans("y", "save anyway", "save"), ans("S", "save as", "elsewhere"))
 	case askReplace:
 		s.ask = newChoice(askReplace, fmt.Sprintf("%s exists (%s). Replace it?", name, msg.stop.info),
 			ans("y", "replace", "replace"), ans("n", "keep it", "cancel"))

@@ -348,7 +348,7 @@ func editPartitionBehindTheBack(t *testing.T) (d *storeyDriver, file string, edi
 	t.Helper()
 	path := copyWorkshop(t)
 	file = filepath.Join(filepath.Dir(path), "partition.toml")
-	d = newStoreyDriver(t, path, 100, 30)
+	d = newStoreyDriver(t, path, 80, 24)
 	for i := 0; i < 4; i++ {
 		d.press(runes("j"))
 	}
@@ -384,7 +384,7 @@ func TestStoreySaveChangedOnDiskOverwrite(t *testing.T) {
 	d, file, edited := editPartitionBehindTheBack(t)
 	s := d.screen()
 	d.press(runes("s"))
-	if v := d.view(); !strings.Contains(v, "partition.toml changed on disk") || !strings.Contains(v, "overwrite") {
+	if v := d.view(); !strings.Contains(v, "partition.toml changed on disk.") || !strings.Contains(v, "o overwrite  S save as  esc cancel") {
 		t.Fatalf("no question:\n%s", v)
 	}
 	if !fileHolds(t, file, "Changed elsewhere") || !s.docs[4].dirty() {
