@@ -225,6 +225,9 @@ func (s *storeyScreen) update(msg tea.Msg) (screen, tea.Cmd) {
 				s.say("storey updated after the edit of %s", s.st.Walls[s.sel].File)
 			}
 		}
+		if d, ref := s.docs[s.sel], s.st.Walls[s.sel]; d.path != ref.Path && !d.dirty() {
+			s.say("saved as %s; the storey file still names %s", geometry.Visible(filepath.Base(d.path)), ref.File)
+		}
 		return s, nil
 	case tea.KeyMsg:
 		if s.showHelp {

@@ -86,6 +86,12 @@ func (d *storeyDriver) run(cmd tea.Cmd) {
 			for i := range v.Len() {
 				d.run(v.Index(i).Interface().(tea.Cmd))
 			}
+			return
+		}
+		switch msg.(type) {
+		case formSubmitted, saveAsMsg, reloadedMsg:
+			_, next := d.m.Update(msg)
+			d.run(next)
 		}
 	}
 }
@@ -455,6 +461,26 @@ func TestStoreyWallEditorSaveChangedOnDisk(t *testing.T) {
 	top, ok := d.m.top().(*storeyWall)
 	if !ok || top.e.mode != modeAsk || !strings.Contains(d.view(), "changed on disk") {
 		t.Fatalf("s in the wall's editor: top %T\n%s", d.m.top(), d.view())
+	}
+	if !fileHolds(t, file, "Changed elsewhere") {
+		t.Error("the changed file was written over")
+	}
+}
+
+// Saved elsewhere through the wall's save as: back on the storey, the
+// screen says which file now holds the wall.
+func TestStoreySaveElsewhereSays(t *testing.T) {
+	d, file, _ := editPartitionBehindTheBack(t)
+	other := filepath.Join(filepath.Dir(file), "partition2.toml")
+	d.press(runes("s"), runes("S"), keyCtrlU, tea.KeyMsg{Type: tea.KeyRunes, Runes: []rune(other), Paste: true}, keyEnter, keyEsc)
+	if _, ok := d.m.top().(*storeyScreen); !ok {
+		t.Fatalf("top %T\n%s", d.m.top(), d.view())
+	}
+	if v := d.view(); !strings.Contains(v, "saved as partition2.toml") || !strings.Contains(v, "still names partition.toml") {
+		t.Errorf("no word of the new file:\n%s", v)
+	}
+	if _, err := os.Stat(other); err != nil {
+		t.Error(err)
 	}
 	if !fileHolds(t, file, "Changed elsewhere") {
 		t.Error("the changed file was written over")
