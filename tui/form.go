@@ -8,6 +8,8 @@ import (
 	"github.com/charmbracelet/bubbles/textinput"
 	tea "github.com/charmbracelet/bubbletea"
 	"github.com/charmbracelet/lipgloss"
+
+	"pierwise/geometry"
 )
 
 // form is a small dialog of text fields (bubbles textinput) used to type
@@ -39,7 +41,8 @@ type formCancelled struct{}
 type formField struct {
 	label string
 	hint  string // what may be typed, shown dim
-	first string // the value the form opened with
+	first string // the value the form opened with, as shown (geometry.Visible)
+	raw   string // the value as given, which an unchanged field answers with
 	input textinput.Model
 	err   string
 }
@@ -78,9 +81,13 @@ func newForm(title string, specs []fieldSpec) *form {
 	for _, s := range specs {
 		in := textinput.New()
 		in.Prompt = ""
-		in.SetValue(s.value)
+		// A value from a file may hold control characters: the field shows
+		// them escaped, and answers with the value as given while it is
+		// not edited (a name is not changed by opening its form).
+		shown := geometry.Visible(s.value)
+		in.SetValue(shown)
 		in.CharLimit = 200
-		f.fields = append(f.fields, formField{label: s.label, hint: s.hint, first: s.value, input: in})
+		f.fields = append(f.fields, formField{label: s.label, hint: s.hint, first: shown, raw: s.value, input: in})
 	}
 	f.setFocus(0)
 	return f
@@ -139,6 +146,9 @@ func (f *form) update(msg tea.Msg) (event tea.Msg, cmd tea.Cmd) {
 			for i, fl := range f.fields {
 				s.vals[i] = strings.TrimSpace(fl.input.Value())
 				s.changed[i] = s.vals[i] != strings.TrimSpace(fl.first)
+				if !s.changed[i] {
+					s.vals[i] = strings.TrimSpace(fl.raw)
+				}
 			}
 			return s, nil
 		}
@@ -166,7 +176,7 @@ func (f *form) showErrors(r formResult) {
 // view draws the form in w × h cells.
 func (f *form) view(st *styles, w, h int) string {
 	var b strings.Builder
-	b.WriteString(st.heading.Render(f.title))
+	b.WriteString(st.heading.Render(geometry.Visible(f.title)))
 	b.WriteString("\n\n")
 	lw := f.labelWidth()
 	iw := f.inputWidth()
@@ -177,7 +187,7 @@ func (f *form) view(st *styles, w, h int) string {
 	first, last := f.window(rows)
 	if first > 0 {
 		b.Reset()
-		b.WriteString(st.heading.Render(f.title))
+		b.WriteString(st.heading.Render(geometry.Visible(f.title)))
 		b.WriteString(st.dim.Render("  ↑ " + strconv.Itoa(first) + " more above"))
 		b.WriteString("\n\n")
 	}

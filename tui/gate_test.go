@@ -10,6 +10,7 @@ import (
 	tea "github.com/charmbracelet/bubbletea"
 
 	"pierwise/demo"
+	"pierwise/geometry"
 )
 
 // The comparison's FE check goes through the program's one gate: a second
@@ -147,5 +148,46 @@ func TestElevationAsksAgainAfterAScreen(t *testing.T) {
 	}
 	if strings.Contains(ed.view(), "updating...") {
 		t.Errorf("still updating:\n%s", ed.view())
+	}
+}
+
+// An opening whose name holds an escape sequence: the sweep screen shows it
+// escaped, and sends no escape of the file's to the terminal.
+func TestSweepShowsNamesEscaped(t *testing.T) {
+	w := demo.Wall()
+	w.Active = 0
+	w.Layouts[0].Openings[0].Name = "D\x1b[31m1"
+	c := newCommon(newDocument(w, "annex.toml"), nil)
+	s := newSweepScreen(c)
+	s.setSize(100, 30)
+	drive(s, s.start())
+	v := s.view()
+	if strings.Contains(v, "\x1b[31m1") || strings.Contains(v, "\x07") {
+		t.Errorf("the file's escape reached the screen:\n%q", v)
+	}
+	if !strings.Contains(v, `D\x1b[31m1`) {
+		t.Errorf("the name is not shown escaped:\n%s", v)
+	}
+}
+
+// The opening form of an opening whose name holds control characters shows
+// the name escaped, and applying the form with another field edited keeps
+// the name as it was.
+func TestFormKeepsAControlName(t *testing.T) {
+	w := annex()
+	name := "D\x1b[31m1"
+	w.Layouts[w.Active].Openings[0].Name = name
+	ed := newEditor(t, w, "", 100, 30)
+	ed.elev().sel = 0
+	ed.press(runes("e"))
+	if v := ed.view(); !strings.Contains(v, `D\x1b[31m1`) || strings.Contains(v, "\x1b[31m1") {
+		t.Fatalf("the form does not show the name escaped:\n%q", v)
+	}
+	ed.press(keyTab, keyTab, keyTab, keyCtrlU)
+	ed.typeText("5ft")
+	ed.do(keyEnter)
+	o := ed.wall().Openings()[0]
+	if o.Name != name || !near(float64(o.Width), float64(5*geometry.Foot)) {
+		t.Errorf("after the form: name %q, width %v", o.Name, o.Width)
 	}
 }

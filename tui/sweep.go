@@ -317,7 +317,7 @@ func (s *sweepScreen) view() string {
 	if s.running {
 		ctl += "   sweeping..."
 	}
-	lines = append(lines, st.heading.Render(truncate(ctl, s.width)))
+	lines = append(lines, st.heading.Render(truncate(geometry.Visible(ctl), s.width)))
 
 	// Fixed rows: title, controls, axis, marks, axis ends, two info lines,
 	// legend, message, help = 10; the plots share the rest, 2:3.
@@ -331,7 +331,7 @@ func (s *sweepScreen) view() string {
 	shareRows := max(3, plotRows-rigRows)
 	switch {
 	case s.err != nil:
-		lines = append(lines, st.errText.Render(truncate(s.err.Error(), s.width)))
+		lines = append(lines, st.errText.Render(truncate(geometry.Visible(s.err.Error()), s.width)))
 	case len(s.pts) == 0 && !s.running:
 		lines = append(lines, "The opening fits nowhere along this axis.")
 	case len(s.pts) > 0:
@@ -344,9 +344,9 @@ func (s *sweepScreen) view() string {
 	lines = lines[:s.height-2]
 	switch {
 	case s.msg != "" && s.msgBad:
-		lines = append(lines, st.errText.Render(truncate(s.msg, s.width)))
+		lines = append(lines, st.errText.Render(truncate(geometry.Visible(s.msg), s.width)))
 	case s.msg != "":
-		lines = append(lines, st.note.Render(truncate(s.msg, s.width)))
+		lines = append(lines, st.note.Render(truncate(geometry.Visible(s.msg), s.width)))
 	case s.weakHere() != "":
 		lines = append(lines, st.errText.Render(ansi.Truncate(s.weakHere(), s.width, "…")))
 	default:
@@ -368,7 +368,7 @@ func (s *sweepScreen) info() []string {
 		where = fmt.Sprintf(" ^ sill %s  ", geometry.FormatLength(p.Y, w.Units))
 	}
 	if p.Err != nil {
-		return []string{truncate(where+"no classic answer: "+p.Err.Error(), s.width), "", sweepLegend(s.pts, s.width)}
+		return []string{truncate(geometry.Visible(where+"no classic answer: "+p.Err.Error()), s.width), "", sweepLegend(s.pts, s.width)}
 	}
 	if len(p.Weak) > 0 {
 		where += "! "
@@ -414,7 +414,7 @@ func (s *sweepScreen) info() []string {
 	if len(marks) > 0 {
 		line1 += "  [" + strings.Join(marks, ", ") + "]"
 	}
-	return []string{truncate(line1, s.width), truncate(line2, s.width), sweepLegend(s.pts, s.width)}
+	return []string{truncate(geometry.Visible(line1), s.width), truncate(geometry.Visible(line2), s.width), sweepLegend(s.pts, s.width)}
 }
 
 // weakHere explains the ! of the position under the cursor in one line, or
@@ -452,7 +452,7 @@ func sweepLegend(pts []study.Point, width int) string {
 	}
 	// The marks first: they are few and always matter; the series list
 	// may be cut on a narrow screen (the readout names the piers too).
-	return truncate(marks+"   "+strings.Join(parts, "  "), width)
+	return truncate(geometry.Visible(marks+"   "+strings.Join(parts, "  ")), width)
 }
 
 // sweepPlot draws the two plots, the position axis and the marks row:
