@@ -475,12 +475,14 @@ type storeyReportMsg struct {
 	err  error
 }
 
+// say and refuse set the message line; what they show is made visible
+// (geometry.Visible): file names and errors may quote a file.
 func (s *storeyScreen) say(format string, a ...any) {
-	s.msg, s.msgBad = fmt.Sprintf(format, a...), false
+	s.msg, s.msgBad = geometry.Visible(fmt.Sprintf(format, a...)), false
 }
 
 func (s *storeyScreen) refuse(format string, a ...any) {
-	s.msg, s.msgBad = fmt.Sprintf(format, a...), true
+	s.msg, s.msgBad = geometry.Visible(fmt.Sprintf(format, a...)), true
 }
 
 // storeyWall is the elevation editor opened from the storey screen: esc or
@@ -520,7 +522,7 @@ func (s *storeyScreen) view() string {
 	case s.ask != nil:
 		hint = s.ask.view(st, W)
 	case s.confirmQuit:
-		hint = st.errText.Render("unsaved walls: " + strings.Join(s.dirty(), ", ") + " — s save and quit, y quit without saving, n stay")
+		hint = st.errText.Render(geometry.Visible("unsaved walls: " + strings.Join(s.dirty(), ", ") + " — s save and quit, y quit without saving, n stay"))
 	default:
 		hint = s.help.View(s.keys)
 	}
@@ -538,7 +540,7 @@ func (s *storeyScreen) view() string {
 	case s.showHelp:
 		body = s.help.FullHelpView(s.keys.FullHelp())
 	case s.err != nil:
-		body = st.errText.Render("The storey cannot be analysed:") + "\n" + lipgloss.NewStyle().Width(W).Render(s.err.Error()) +
+		body = st.errText.Render("The storey cannot be analysed:") + "\n" + lipgloss.NewStyle().Width(W).Render(geometry.Visible(s.err.Error())) +
 			"\n\n" + st.note.Render("Open the wall again (enter) and fix it, or undo the change there (u).") + "\n\n" + s.wallList(W)
 	default:
 		planW := min(W*2/5, W-52)
@@ -697,7 +699,7 @@ func (s *storeyScreen) wallList(w int) string {
 		if ref.HasRigidity {
 			name = ref.Name + ", given by rigidity"
 		}
-		row := fmt.Sprintf("%c %s (%s)", storey.WallKey(i), name, ref.Direction)
+		row := fmt.Sprintf("%c %s (%s)", storey.WallKey(i), geometry.Visible(name), ref.Direction)
 		if s.docs[i].dirty() {
 			row += " *"
 		}
