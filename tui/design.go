@@ -19,9 +19,6 @@ type designState struct {
 	on  bool
 	res *design.Result
 	err error
-	// of maps an index into pier.Result.Piers to one into res.Piers, -1
-	// for a pier that is not checked (a parent, a cut pier).
-	of []int
 }
 
 // designInput is the editor's one place where a wall and its piers' forces
@@ -44,17 +41,6 @@ func checkDesign(w *geometry.Wall, res *pier.Result) designState {
 		return d
 	}
 	d.res = &r
-	idx := map[string]int{}
-	for i, p := range r.Piers {
-		idx[p.Name] = i
-	}
-	d.of = make([]int, len(res.Piers))
-	for i, p := range res.Piers {
-		d.of[i] = -1
-		if k, ok := idx[p.Name]; ok && p.Leaf {
-			d.of[i] = k
-		}
-	}
 	return d
 }
 
@@ -69,14 +55,6 @@ func (d *designState) named(name string) *design.PierResult {
 		}
 	}
 	return nil
-}
-
-// pier returns the design of res.Piers[i], or nil.
-func (d *designState) pier(i int) *design.PierResult {
-	if d.res == nil || i < 0 || i >= len(d.of) || d.of[i] < 0 {
-		return nil
-	}
-	return &d.res.Piers[d.of[i]]
 }
 
 // Ratio tint levels: the upper bounds of each level's demand/capacity
@@ -176,14 +154,4 @@ func (e *elevation) designLines(l elevLayout) []string {
 		lines = append(lines, "  "+st.dim.Render(s))
 	}
 	return lines
-}
-
-// pierIndex is the index of the pier called name in res.Piers, -1 if none.
-func pierIndex(res *pier.Result, name string) int {
-	for i, p := range res.Piers {
-		if p.Name == name {
-			return i
-		}
-	}
-	return -1
 }
