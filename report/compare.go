@@ -1,6 +1,8 @@
 package report
 
 import (
+	"bytes"
+	"errors"
 	"fmt"
 	"io"
 	"math"
@@ -25,11 +27,38 @@ type CompareInfo struct {
 // cmpDash stands for a value that does not exist on one side.
 const cmpDash = "-"
 
-// CompareReport writes the text report of a comparison of two layouts: title
-// block, both elevations side by side, the differences table, the pier
-// table with piers matched by position, warnings and the caution. It
-// computes nothing: every number comes from c.
+// CompareReport writes the text report of a comparison of two layouts, in
+// sheets of SheetLines lines under the [project] table of the walls
+// compared (report.Paginate): title block, both elevations side by side,
+// the differences table, the pier table with piers matched by position,
+// warnings and the caution. It computes nothing: every number comes from c.
 func CompareReport(out io.Writer, c *study.Comparison, info CompareInfo) error {
+	return CompareReports(out, []*study.Comparison{c}, info)
+}
+
+// CompareReports writes several comparisons (the first layout against each
+// of the others) as one report: each comparison begins a sheet of its own,
+// and the sheets are numbered through ("sheet 3 of 5") under the project
+// of the first comparison's walls.
+func CompareReports(out io.Writer, cs []*study.Comparison, info CompareInfo) error {
+	if len(cs) == 0 {
+		return errors.New("report: no comparison to write")
+	}
+	var body bytes.Buffer
+	for i, c := range cs {
+		if i > 0 {
+			body.WriteString(SheetBreak + "\n")
+		}
+		if err := compareBody(&body, c, info); err != nil {
+			return err
+		}
+	}
+	b := &cs[0].Before
+	subject := "layout comparison: " + orDefault(b.Wall.Title, orDefault(filePart(b.Path), "built-in demo wall"))
+	return Paginate(out, body.String(), Heading{Project: b.Wall.Project, Subject: subject})
+}
+
+func compareBody(out io.Writer, c *study.Comparison, info CompareInfo) error {
 	w := NewText(out)
 	b, a := &c.Before, &c.After
 	sys := b.Wall.Units
@@ -39,6 +68,17 @@ func CompareReport(out io.Writer, c *study.Comparison, info CompareInfo) error {
 	}
 	if a.Wall.Title != b.Wall.Title && a.Wall.Title != "" {
 		w.KV("Other wall", a.Wall.Title)
+	}
+	for _, e := range b.Wall.Project.Entries() {
+		w.KV(strings.ToUpper(e[0][:1])+e[0][1:], e[1])
+	}
+	if pa := a.Wall.Project; pa != b.Wall.Project && len(pa.Entries()) > 0 {
+		// Walls of two projects: the sheets carry the first one's.
+		var parts []string
+		for _, e := range pa.Entries() {
+			parts = append(parts, e[0]+" "+e[1])
+		}
+		w.KV("After wall", strings.Join(parts, ", "))
 	}
 	w.KV("Before", cmpSideName(b))
 	w.KV("After", cmpSideName(a))
@@ -214,16 +254,15 @@ func CompareRows(c *study.Comparison) []CompareRow {
 		}
 		add(k, q, sb, sa, ch)
 	}
-	sig := func(v float64) string { return cmpSig(v, 4) }
-	row("rigidity_relative", "Relative rigidity (E t)", func(r *pier.Result) (float64, bool) { return r.Rigidity, true }, sig)
-	row("rigidity", "Rigidity, "+u.Rigidity, func(r *pier.Result) (float64, bool) { return u.RigidityOf(r.RigidityAbs), r.RigidityAbs > 0 }, sig)
-	row("deflection_relative", "Relative deflection", func(r *pier.Result) (float64, bool) { return r.Deflection, true }, sig)
+	row("rigidity_relative", "Relative rigidity (E t)", func(r *pier.Result) (float64, bool) { return r.Rigidity, true }, Sig)
+	row("rigidity", "Rigidity, "+u.Rigidity, func(r *pier.Result) (float64, bool) { return u.RigidityOf(r.RigidityAbs), r.RigidityAbs > 0 }, Sig)
+	row("deflection_relative", "Relative deflection", func(r *pier.Result) (float64, bool) { return r.Deflection, true }, Sig)
 	row("deflection", "Deflection, "+u.Deflection, func(r *pier.Result) (float64, bool) {
 		return u.DeflectionOf(r.DeflectionAbs), r.HasLoad && r.DeflectionAbs > 0
-	}, func(v float64) string { return cmpSig(v, 3) })
+	}, Sig)
 	row("drift", "Design drift, "+u.Deflection, func(r *pier.Result) (float64, bool) {
 		return u.DeflectionOf(r.Drift.Design), r.HasLoad && r.Drift.Design > 0
-	}, func(v float64) string { return cmpSig(v, 3) })
+	}, Sig)
 	if (rb != nil && rb.HasLoad && rb.Drift.Allowable > 0) || (ra != nil && ra.HasLoad && ra.Drift.Allowable > 0) {
 		check := func(r *pier.Result) string {
 			switch {
@@ -234,9 +273,9 @@ func CompareRows(c *study.Comparison) []CompareRow {
 			case r.Drift.Missing != "":
 				return "no verdict: no " + r.Drift.Missing
 			case r.Drift.OK:
-				return fmt.Sprintf("OK, limit %s", cmpSig(u.DeflectionOf(r.Drift.Allowable), 3))
+				return "OK, limit " + Sig(u.DeflectionOf(r.Drift.Allowable))
 			}
-			return fmt.Sprintf("EXCEEDS limit %s", cmpSig(u.DeflectionOf(r.Drift.Allowable), 3))
+			return "EXCEEDS limit " + Sig(u.DeflectionOf(r.Drift.Allowable))
 		}
 		add("drift_check", "Drift check", check(rb), check(ra), "")
 	}
@@ -250,7 +289,7 @@ func CompareRows(c *study.Comparison) []CompareRow {
 			}
 			return cmpDash
 		}
-		rel := func(r *fe.Result) string { return cmpSig(r.Rigidity, 4) }
+		rel := func(r *fe.Result) string { return Sig(r.Rigidity) }
 		ch := ""
 		if b.FE != nil && a.FE != nil {
 			ch = cmpPct(b.FE.Rigidity, a.FE.Rigidity)
@@ -261,7 +300,7 @@ func CompareRows(c *study.Comparison) []CompareRow {
 				if s.Basis == nil || s.Basis.Classic == nil {
 					return "no answer", 0
 				}
-				return cmpSig(s.Basis.Classic.Rigidity, 4), s.Basis.Classic.Rigidity
+				return Sig(s.Basis.Classic.Rigidity), s.Basis.Classic.Rigidity
 			}
 			sb, vb := cl(b)
 			sa, va := cl(a)
@@ -465,7 +504,7 @@ func cmpOr(s string) string {
 	return s
 }
 
-func cmpShare(s float64) string { return fmt.Sprintf("%.1f %%", 100*s) }
+func cmpShare(s float64) string { return SigPercent(s) }
 
 // cmpSpan shows where a pier runs along the wall in the wall's own units:
 // 7'-0" to 12'-0", or 2.100 to 3.600 m.

@@ -117,7 +117,7 @@ func TestCompareRowsMatchResults(t *testing.T) {
 	if rel == nil {
 		t.Fatal("no relative rigidity row")
 	}
-	if rel.Before != cmpSig(c.Before.Result.Rigidity, 4) || rel.After != cmpSig(c.After.Result.Rigidity, 4) {
+	if rel.Before != Sig(c.Before.Result.Rigidity) || rel.After != Sig(c.After.Result.Rigidity) {
 		t.Errorf("row %+v, results %g %g", *rel, c.Before.Result.Rigidity, c.After.Result.Rigidity)
 	}
 }
@@ -140,7 +140,7 @@ func TestCompareReportFE(t *testing.T) {
 	}
 	text := buf.String()
 	for _, want := range []string{
-		"FE relative rigidity", cmpSig(c.Before.FE.Rigidity, 4), cmpSig(c.After.FE.Rigidity, 4),
+		"FE relative rigidity", Sig(c.Before.FE.Rigidity), Sig(c.After.FE.Rigidity),
 		"Leaf piers, finite-element shares", cmpShare(c.Before.FE.Piers[0].Share),
 	} {
 		if !strings.Contains(text, want) {
@@ -174,5 +174,76 @@ func TestCompareWarningsSolidLayout(t *testing.T) {
 	text := strings.Join(CompareWarnings(c), "\n")
 	if !strings.Contains(text, "that layout has no openings, so the whole wall works as one solid pier") || strings.Contains(text, "check its reinforcement against the piers of") {
 		t.Errorf("warnings:\n%s", text)
+	}
+}
+
+// The comparison is printed on sheets like the wall report: every sheet
+// headed by the walls' project and "sheet k of n"; several comparisons
+// (the first layout against each other one) each begin a sheet of their
+// own, numbered through.
+func TestCompareReportSheets(t *testing.T) {
+	w := cmpTestWall()
+	w.Project = geometry.Project{Name: "Test building (invented)", Job: "T-12", Engineer: "A. Engineer"}
+	third := w.Layouts[1]
+	third.Name = "no W1"
+	third.Openings = append([]geometry.Opening{third.Openings[0]}, third.Openings[2:]...)
+	w.Layouts = append(w.Layouts, third)
+	var cs []*study.Comparison
+	for i := 1; i < 3; i++ {
+		c, err := study.Compare(study.WithLayout(w, 0), study.WithLayout(w, i))
+		if err != nil {
+			t.Fatal(err)
+		}
+		cs = append(cs, c)
+	}
+	var one, two bytes.Buffer
+	if err := CompareReport(&one, cs[0], CompareInfo{}); err != nil {
+		t.Fatal(err)
+	}
+	if err := CompareReports(&two, cs, CompareInfo{}); err != nil {
+		t.Fatal(err)
+	}
+	nOne := len(strings.Split(one.String(), "\f"))
+	sheets := strings.Split(two.String(), "\f")
+	if len(sheets) < 2*nOne {
+		t.Fatalf("two comparisons on %d sheets, one on %d: each should begin a sheet", len(sheets), nOne)
+	}
+	titles := 0
+	for k, s := range sheets {
+		lines := strings.Split(strings.TrimSuffix(s, "\n"), "\n")
+		if len(lines) > SheetLines {
+			t.Errorf("sheet %d has %d lines, more than %d", k+1, len(lines), SheetLines)
+		}
+		if want := fmt.Sprintf("sheet %d of %d", k+1, len(sheets)); !strings.HasSuffix(lines[1], want) {
+			t.Errorf("sheet %d heading %q, want it to end with %q", k+1, lines[1], want)
+		}
+		if !strings.HasPrefix(lines[0], "project Test building (invented) · job T-12 · engineer A. Engineer") {
+			t.Errorf("sheet %d project line %q", k+1, lines[0])
+		}
+		// A comparison begins right under the heading of its sheet.
+		if len(lines) > 4 && lines[4] == "PIERWISE LAYOUT COMPARISON" {
+			titles++
+		}
+	}
+	if titles != 2 {
+		t.Errorf("%d comparisons begin a sheet, want 2", titles)
+	}
+	if err := CompareReports(&two, nil, CompareInfo{}); err == nil {
+		t.Error("no comparison: no error")
+	}
+}
+
+// A break line in the body ends the sheet; the numbering runs through.
+func TestPaginateSheetBreak(t *testing.T) {
+	var b strings.Builder
+	if err := Paginate(&b, "a\nb\n"+SheetBreak+"\nc\n", Heading{Subject: "s"}); err != nil {
+		t.Fatal(err)
+	}
+	sheets := strings.Split(b.String(), "\f")
+	if len(sheets) != 2 {
+		t.Fatalf("%d sheets, want 2:\n%q", len(sheets), b.String())
+	}
+	if !strings.HasSuffix(sheets[0], "\na\nb\n") || !strings.HasSuffix(sheets[1], "\nc\n") || !strings.Contains(sheets[1], "sheet 2 of 2") {
+		t.Errorf("sheets %q", sheets)
 	}
 }

@@ -60,21 +60,33 @@ func clip(s string, n int) string {
 	return string([]rune(s)[:n-1]) + "…"
 }
 
+// SheetBreak, a line of its own in the body given to Paginate, ends the
+// sheet there: what follows begins the next sheet (one comparison of
+// several per sheet, for instance).
+const SheetBreak = "\f"
+
 // Paginate writes body, the lines of a report, as sheets of SheetLines
-// lines, each under the heading h with its number ("sheet 2 of 5").
+// lines, each under the heading h with its number ("sheet 2 of 5"). A
+// line that is SheetBreak starts a new sheet.
 func Paginate(out io.Writer, body string, h Heading) error {
-	lines := strings.Split(strings.TrimRight(body, "\n"), "\n")
 	per := SheetLines - headingLines
-	n := max((len(lines)+per-1)/per, 1)
+	var sheets [][]string
+	for _, part := range strings.Split(strings.TrimRight(body, "\n"), "\n"+SheetBreak+"\n") {
+		lines := strings.Split(strings.TrimRight(part, "\n"), "\n")
+		for k := 0; k*per < len(lines) || k == 0; k++ {
+			sheets = append(sheets, lines[k*per:min((k+1)*per, len(lines))])
+		}
+	}
+	n := len(sheets)
 	var b strings.Builder
-	for k := 0; k < n; k++ {
+	for k, sheet := range sheets {
 		if k > 0 {
 			b.WriteString("\f")
 		}
 		for _, l := range h.lines(k+1, n) {
 			b.WriteString(strings.TrimRight(l, " ") + "\n")
 		}
-		for _, l := range lines[k*per : min((k+1)*per, len(lines))] {
+		for _, l := range sheet {
 			b.WriteString(l + "\n")
 		}
 	}
