@@ -15,6 +15,7 @@ import (
 
 	"pierwise/demo"
 	"pierwise/internal/testkit"
+	"pierwise/report"
 	"pierwise/study"
 )
 
@@ -244,7 +245,7 @@ func TestCompareScreenFE(t *testing.T) {
 	}
 	v := ansi.Strip(s.view())
 	cmpCheckSize(t, v, 120, 36)
-	for _, want := range []string{"FE relative rigidity", fmt.Sprintf("%.4f", s.cmp.Before.FE.Rigidity), "FE before"} {
+	for _, want := range []string{"FE relative rigidity", report.Sig(s.cmp.Before.FE.Rigidity), "FE before"} {
 		if !strings.Contains(v, want) {
 			t.Errorf("view lacks %q:\n%s", want, v)
 		}

@@ -8,6 +8,7 @@ import (
 	"testing"
 
 	"pierwise/internal/testkit"
+	"pierwise/report"
 )
 
 // round4 rounds every number of a decoded JSON value to 4 significant
@@ -194,7 +195,7 @@ func TestCompareFEBasis(t *testing.T) {
 		if err := json.Unmarshal([]byte(js), &w); err != nil {
 			t.Fatal(err)
 		}
-		rel := strconv.FormatFloat(w["rigidity_relative"].(float64), 'g', 4, 64)
+		rel := report.Sig(w["rigidity_relative"].(float64))
 		if !strings.Contains(out, rel) {
 			t.Errorf("%s: the model's relative rigidity %s is not in the comparison", layout, rel)
 		}

@@ -79,6 +79,7 @@ func runCompare(e *env, args []string) error {
 	var noAnswer []string
 	var feFailures []string // a check asked for that failed: exit status 1 too
 	seen := map[string]bool{}
+	var cs []*study.Comparison
 	for i := 1; i < len(walls); i++ {
 		c, err := study.CompareWith(walls[0].wall, walls[i].wall, opt)
 		if err != nil {
@@ -95,12 +96,11 @@ func runCompare(e *env, args []string) error {
 		}
 		c.Before.Path, c.Before.Label = walls[0].path, walls[0].label
 		c.After.Path, c.After.Label = walls[i].path, walls[i].label
-		if i > 1 {
-			fmt.Fprint(out, "\n\f\n")
-		}
-		if err := report.CompareReport(out, c, info); err != nil {
-			return err
-		}
+		cs = append(cs, c)
+	}
+	// One report: each comparison begins a sheet, numbered through.
+	if err := report.CompareReports(out, cs, info); err != nil {
+		return err
 	}
 	if *outPath == "" {
 		if _, err := e.stdout.Write(buf.Bytes()); err != nil {

@@ -3,7 +3,6 @@ package main
 import (
 	"bytes"
 	"fmt"
-	"math"
 	"os"
 	"path/filepath"
 	"strings"
@@ -47,8 +46,8 @@ func TestCompareCommand(t *testing.T) {
 			t.Fatal(err)
 		}
 		for _, want := range []string{
-			fmtSig4(r.Rigidity),
-			fmtSig4(u.RigidityOf(r.RigidityAbs)),
+			report.Sig(r.Rigidity),
+			report.Sig(u.RigidityOf(r.RigidityAbs)),
 		} {
 			if !strings.Contains(out, want) {
 				t.Errorf("layout %q: %s not in the output", w.Layouts[i].Name, want)
@@ -66,12 +65,6 @@ func TestCompareCommand(t *testing.T) {
 	if code != exitOK || !strings.Contains(out2, "annex.toml:wide entrance") {
 		t.Errorf("one file: exit %d", code)
 	}
-}
-
-// fmtSig4 formats v with four significant digits, as the report does.
-func fmtSig4(v float64) string {
-	dec := max(0, 3-int(math.Floor(math.Log10(math.Abs(v)))))
-	return fmt.Sprintf("%.*f", dec, v)
 }
 
 func TestCompareCommandErrors(t *testing.T) {
