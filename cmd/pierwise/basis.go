@@ -173,14 +173,14 @@ func writeSolveTableFE(out io.Writer, s *solved) {
 	}
 	m := s.fe
 	t.Line(fmt.Sprintf("  basis: finite-element model (%s, mesh %s, %d elements)", m.Element, L(m.Mesh), m.Elements))
-	t.Line(fmt.Sprintf("  relative deflection %.4f /(E·t), relative rigidity %.4f E·t", r.Deflection(), r.Rigidity()))
+	t.Line(fmt.Sprintf("  relative deflection %s /(E·t), relative rigidity %s E·t", report.Sig(r.Deflection()), report.Sig(r.Rigidity())))
 	if r.RigidityAbs() > 0 {
-		t.Line(fmt.Sprintf("  rigidity %s %s", report.Number(u.RigidityOf(r.RigidityAbs())), u.Rigidity))
+		t.Line(fmt.Sprintf("  rigidity %s %s", report.Sig(u.RigidityOf(r.RigidityAbs())), u.Rigidity))
 	}
 	if c, ok := r.Check(); ok {
-		line := fmt.Sprintf("classic relative rigidity %.4f E·t", c.Rigidity)
+		line := fmt.Sprintf("classic relative rigidity %s E·t", report.Sig(c.Rigidity))
 		if c.RigidityAbs > 0 {
-			line += fmt.Sprintf(" (%s %s)", report.Number(u.RigidityOf(c.RigidityAbs)), u.Rigidity)
+			line += fmt.Sprintf(" (%s %s)", report.Sig(u.RigidityOf(c.RigidityAbs)), u.Rigidity)
 		}
 		t.Wrapped("  check: ", line+fmt.Sprintf(", %s the finite-element rigidity", report.ClassicVersusFE(c.Difference)))
 	} else if s.err != nil {
@@ -190,7 +190,7 @@ func writeSolveTableFE(out io.Writer, s *solved) {
 		driftLines(t, w, r.DeflectionAbs(), r.Drift())
 	}
 	if w.Load.Shear > 0 {
-		t.Line(fmt.Sprintf("  overturning moment at the base %s %s", report.Number(u.MomentOf(r.Overturning())), u.Moment))
+		t.Line(fmt.Sprintf("  overturning moment at the base %s %s", report.Sig(u.MomentOf(r.Overturning())), u.Moment))
 	}
 	for _, n := range m.Notes {
 		t.Wrapped("  note: ", n)
@@ -211,9 +211,9 @@ func writeSolveTableFE(out io.Writer, s *solved) {
 			case !p.Leaf:
 				name += "*"
 			}
-			row := []string{name, Lm(p.H()), Lm(p.L()), fmt.Sprintf("%.2f", p.Ratio()), p.Support.String(), fmt.Sprintf("%.1f%%", 100*p.Share)}
+			row := []string{name, Lm(p.H()), Lm(p.L()), fmt.Sprintf("%.2f", p.Ratio()), p.Support.String(), report.Sig(100*p.Share) + "%"}
 			if w.Load.Shear > 0 && !p.Cut {
-				row = append(row, fmt.Sprintf("%.2f", u.ForceOf(p.Shear)), fmt.Sprintf("%.2f", u.MomentOf(p.Moment)), fmt.Sprintf("%.2f", u.ForceOf(p.Loads.Lateral.Middle.Axial)))
+				row = append(row, report.Sig(u.ForceOf(p.Shear)), report.Sig(u.MomentOf(p.Moment)), report.Sig(u.ForceOf(p.Loads.Lateral.Middle.Axial)))
 			} else if w.Load.Shear > 0 {
 				row = append(row, "-", "-", "-")
 			}

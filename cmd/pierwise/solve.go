@@ -262,18 +262,18 @@ func writeSolveTable(out io.Writer, s *solved) {
 		return
 	}
 	r := s.res
-	t.Line(fmt.Sprintf("  relative deflection %.4f /(E·t), relative rigidity %.4f E·t", r.Deflection, r.Rigidity))
+	t.Line(fmt.Sprintf("  relative deflection %s /(E·t), relative rigidity %s E·t", report.Sig(r.Deflection), report.Sig(r.Rigidity)))
 	if d := r.Split.Total(); d > 0 {
 		t.Line(fmt.Sprintf("  bending %.0f %%, shear %.0f %% of the wall's deflection", 100*r.Split.Bending/d, 100*r.Split.Shear/d))
 	}
 	if r.Moduli.E > 0 {
-		t.Line(fmt.Sprintf("  E = %s, E_v = %s; rigidity %s %s", geometry.FormatStress(r.Moduli.E, w.Units), geometry.FormatStress(r.Moduli.Ev, w.Units), report.Number(u.RigidityOf(r.RigidityAbs)), u.Rigidity))
+		t.Line(fmt.Sprintf("  E = %s, E_v = %s; rigidity %s %s", geometry.FormatStress(r.Moduli.E, w.Units), geometry.FormatStress(r.Moduli.Ev, w.Units), report.Sig(u.RigidityOf(r.RigidityAbs)), u.Rigidity))
 	}
 	if r.HasLoad {
 		driftLines(t, w, r.DeflectionAbs, r.Drift)
 	}
 	if r.HasLoad {
-		t.Line(fmt.Sprintf("  overturning moment at the base %s %s", report.Number(u.MomentOf(r.Overturning)), u.Moment))
+		t.Line(fmt.Sprintf("  overturning moment at the base %s %s", report.Sig(u.MomentOf(r.Overturning)), u.Moment))
 	}
 	t.Blank()
 	pierRows(t, r, w)
@@ -291,14 +291,14 @@ func driftLines(t *report.Text, w *geometry.Wall, elastic geometry.Length, d pie
 	u := report.UnitsFor(w.Units)
 	if d.Missing != "" {
 		t.Line(fmt.Sprintf("  V = %s: δe = %s %s; no design drift: %s not given", geometry.FormatForce(w.Load.Shear, w.Units),
-			report.Number(u.DeflectionOf(elastic)), u.Deflection, d.Missing))
+			report.Sig(u.DeflectionOf(elastic)), u.Deflection, d.Missing))
 	} else {
 		t.Line(fmt.Sprintf("  V = %s: δe = %s %s; δ = Cd·δe/Ie = %s %s = %s h_sx", geometry.FormatForce(w.Load.Shear, w.Units),
-			report.Number(u.DeflectionOf(elastic)), u.Deflection, report.Number(u.DeflectionOf(d.Design)), u.Deflection, report.Fraction(d.Ratio)))
+			report.Sig(u.DeflectionOf(elastic)), u.Deflection, report.Sig(u.DeflectionOf(d.Design)), u.Deflection, report.Fraction(d.Ratio)))
 	}
 	check := "  drift limit: none set"
 	if d.Allowable > 0 {
-		check = fmt.Sprintf("  drift limit %s h_sx = %s %s: %s", report.Fraction(w.Drift.Limit), report.Number(u.DeflectionOf(d.Allowable)), u.Deflection, d.Verdict())
+		check = fmt.Sprintf("  drift limit %s h_sx = %s %s: %s", report.Fraction(w.Drift.Limit), report.Sig(u.DeflectionOf(d.Allowable)), u.Deflection, d.Verdict())
 	}
 	t.Line(check)
 }
@@ -317,16 +317,16 @@ func pierRows(t *report.Text, r *pier.Result, w *geometry.Wall) {
 		tab.Right = append(tab.Right, true, true, true)
 	}
 	for _, p := range r.Piers {
-		name, rel := p.Name, fmt.Sprintf("%.4f", p.Rigidity)
+		name, rel := p.Name, report.Sig(p.Rigidity)
 		switch {
 		case p.Cut:
 			name, rel = name+"†", "-"
 		case !p.Leaf:
 			name += "*"
 		}
-		row := []string{name, L(p.H()), L(p.L()), fmt.Sprintf("%.2f", p.Ratio()), p.Support.String(), rel, fmt.Sprintf("%.1f%%", 100*p.Share)}
+		row := []string{name, L(p.H()), L(p.L()), fmt.Sprintf("%.2f", p.Ratio()), p.Support.String(), rel, report.Sig(100*p.Share) + "%"}
 		if r.HasLoad && !p.Cut {
-			row = append(row, fmt.Sprintf("%.2f", u.ForceOf(p.Shear)), fmt.Sprintf("%.2f", u.MomentOf(p.Moment)), fmt.Sprintf("%.2f", u.ForceOf(p.Loads.Lateral.Middle.Axial)))
+			row = append(row, report.Sig(u.ForceOf(p.Shear)), report.Sig(u.MomentOf(p.Moment)), report.Sig(u.ForceOf(p.Loads.Lateral.Middle.Axial)))
 		} else if r.HasLoad {
 			row = append(row, "-", "-", "-")
 		}
@@ -344,13 +344,13 @@ func writeFETable(t *report.Text, s *solved) {
 	}
 	f := s.fe
 	t.Line(fmt.Sprintf("  finite-element check (%s, mesh %s, %d elements):", f.Element, geometry.FormatLength(f.Mesh, s.wall.Units), f.Elements))
-	t.Line(fmt.Sprintf("    relative deflection %.4f /(E·t), relative rigidity %.4f E·t", f.Deflection, f.Rigidity))
+	t.Line(fmt.Sprintf("    relative deflection %s /(E·t), relative rigidity %s E·t", report.Sig(f.Deflection), report.Sig(f.Rigidity)))
 	if u := report.UnitsFor(s.wall.Units); f.RigidityAbs > 0 {
-		line := fmt.Sprintf("    rigidity %s %s", report.Number(u.RigidityOf(f.RigidityAbs)), u.Rigidity)
+		line := fmt.Sprintf("    rigidity %s %s", report.Sig(u.RigidityOf(f.RigidityAbs)), u.Rigidity)
 		if f.HasLoad {
-			line += fmt.Sprintf("; δe = %s %s", report.Number(u.DeflectionOf(f.DeflectionAbs)), u.Deflection)
+			line += fmt.Sprintf("; δe = %s %s", report.Sig(u.DeflectionOf(f.DeflectionAbs)), u.Deflection)
 			if f.Drift.Missing == "" {
-				line += fmt.Sprintf(", δ = %s %s", report.Number(u.DeflectionOf(f.Drift.Design)), u.Deflection)
+				line += fmt.Sprintf(", δ = %s %s", report.Sig(u.DeflectionOf(f.Drift.Design)), u.Deflection)
 			}
 		}
 		t.Line(line)
@@ -361,7 +361,7 @@ func writeFETable(t *report.Text, s *solved) {
 	if len(f.Piers) > 0 {
 		parts := make([]string, len(f.Piers))
 		for i, p := range f.Piers {
-			parts[i] = fmt.Sprintf("%s %.1f%%", p.Name, 100*p.Share)
+			parts[i] = p.Name + " " + report.Sig(100*p.Share) + "%"
 		}
 		t.Wrapped("    shares: ", strings.Join(parts, ", "))
 	}

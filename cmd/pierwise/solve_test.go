@@ -8,6 +8,8 @@ import (
 	"path/filepath"
 	"strings"
 	"testing"
+
+	"pierwise/report"
 )
 
 // runCLI runs one command line in-process and returns its exit status and
@@ -269,5 +271,52 @@ func TestVisibleWriter(t *testing.T) {
 	}
 	if got, want := b.String(), `Hi\x1b]0;x\x07\x00 ok`+"\n\tpage\f"; got != want {
 		t.Errorf("got %q, want %q", got, want)
+	}
+}
+
+// The table prints the method's results to three significant figures
+// (report.Sig) while the JSON keeps them whole: every figure of the table
+// is the JSON's value through report.Sig. The wall is the Masonry
+// Chronicles example (Concrete Masonry Association of California and
+// Nevada): relative rigidity 0.1315 E·t in its working, 0.131 here.
+func TestSolveTableThreeFigures(t *testing.T) {
+	_, js, _ := runCLI("solve", "../../testdata/walls/nested.toml", "--json")
+	var w struct {
+		Rigidity   float64 `json:"rigidity_relative"`
+		Deflection float64 `json:"deflection_relative"`
+		Piers      []struct {
+			Name     string  `json:"name"`
+			Rigidity float64 `json:"rigidity_relative"`
+			Share    float64 `json:"share"`
+			Shear    float64 `json:"shear"`
+			Moment   float64 `json:"moment"`
+		} `json:"piers"`
+	}
+	if err := json.Unmarshal([]byte(js), &w); err != nil {
+		t.Fatal(err)
+	}
+	_, out, _ := runCLI("solve", "../../testdata/walls/nested.toml")
+	if want := "relative deflection " + report.Sig(w.Deflection) + " /(E·t), relative rigidity 0.131 E·t"; !strings.Contains(out, want) {
+		t.Errorf("table lacks %q:\n%s", want, out)
+	}
+	if len(w.Piers) == 0 {
+		t.Fatal("no piers in the JSON")
+	}
+	for _, p := range w.Piers {
+		var row []string
+		for _, l := range strings.Split(out, "\n") {
+			if f := strings.Fields(l); len(f) > 0 && strings.TrimRight(f[0], "*†") == p.Name {
+				row = f
+			}
+		}
+		// pier, h, L, h/L, support, R rel, share, V, M, N
+		if len(row) != 10 {
+			t.Errorf("%s: row %q", p.Name, row)
+			continue
+		}
+		want := []string{report.Sig(p.Rigidity), report.Sig(100*p.Share) + "%", report.Sig(p.Shear), report.Sig(p.Moment)}
+		if got := row[5:9]; strings.Join(got, " ") != strings.Join(want, " ") {
+			t.Errorf("%s: R rel, share, V, M %q, want %q", p.Name, got, want)
+		}
 	}
 }
