@@ -616,11 +616,13 @@ func tintLegend(st *styles) string {
 	lo := 0.0
 	for i, b := range tintBounds {
 		label := fmt.Sprintf("%.0f-%.0f%%", 100*lo, math.Min(100, 100*b))
-		sample := st.tint[i].Render("  ")
+		// Non-breaking spaces inside a swatch and after it: wrap keeps
+		// "[swatch] label" on one line and shows them as spaces.
+		sample := st.tint[i].Render(nbsp + nbsp)
 		if st.mono {
-			sample = strings.Repeat(string(tintTexture[i]), 2)
+			sample = strings.Repeat(strings.ReplaceAll(string(tintTexture[i]), " ", nbsp), 2)
 		}
-		parts = append(parts, "["+sample+"] "+label)
+		parts = append(parts, "["+sample+"]"+nbsp+label)
 		lo = b
 	}
 	return "(" + strings.Join(parts, ", ") + ")"
@@ -647,22 +649,31 @@ func num(v float64) string { return report.Sig(v) }
 func wrap(s string, w int) []string {
 	var lines []string
 	var cur string
-	for _, word := range strings.Fields(s) {
+	curW := 0
+	words := strings.FieldsFunc(s, func(r rune) bool { return r == ' ' || r == '\n' || r == '\t' || r == '\r' })
+	for _, word := range words {
+		// The visible width: a styled word (a legend's swatch) counts its
+		// cells, not the bytes of its colour codes.
+		ww := lipgloss.Width(word)
 		switch {
 		case cur == "":
-			cur = word
-		case len(cur)+1+len(word) <= w:
+			cur, curW = word, ww
+		case curW+1+ww <= w:
 			cur += " " + word
+			curW += 1 + ww
 		default:
-			lines = append(lines, cur)
-			cur = word
+			lines = append(lines, strings.ReplaceAll(cur, nbsp, " "))
+			cur, curW = word, ww
 		}
 	}
 	if cur != "" {
-		lines = append(lines, cur)
+		lines = append(lines, strings.ReplaceAll(cur, nbsp, " "))
 	}
 	return lines
 }
+
+// nbsp joins words that wrap keeps on one line; wrap prints it as a space.
+const nbsp = "\u00a0"
 
 func plural(n int) string {
 	if n == 1 {

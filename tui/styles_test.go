@@ -62,3 +62,41 @@ func TestTintsDistinctIn256(t *testing.T) {
 		}
 	}
 }
+
+// The help's colour legend wraps on the cells a reader sees: the colour
+// codes of a swatch do not count, every line fits the width, and each
+// swatch stays whole beside its label ("[  ] 0-10%" on one line), in
+// colour and in monochrome.
+func TestHelpLegendWraps(t *testing.T) {
+	for _, p := range []termenv.Profile{termenv.TrueColor, termenv.ANSI256, termenv.Ascii} {
+		r := lipgloss.NewRenderer(io.Discard)
+		r.SetColorProfile(p)
+		st := newStyles(r)
+		page := &helpPage{keys: newKeyMap()}
+		for _, width := range []int{60, 80, 120} {
+			lines := page.content(st, width, 0)
+			text := ansi.Strip(strings.Join(lines, "\n"))
+			for _, l := range lines {
+				if w := ansi.StringWidth(l); w > width {
+					t.Errorf("profile %v, width %d: line of %d cells: %q", p, width, w, ansi.Strip(l))
+				}
+			}
+			for _, want := range []string{"[  ] 0-10%", "10-25%", "25-40%", "40-60%", "60-100%"} {
+				if !strings.Contains(text, want) {
+					t.Errorf("profile %v, width %d: legend lacks %q whole:\n%s", p, width, want, text)
+				}
+			}
+			if strings.Contains(text, "\u00a0") {
+				t.Errorf("profile %v, width %d: a non-breaking space left in the help", p, width)
+			}
+		}
+	}
+	// A styled word counts its visible cells.
+	red := lipgloss.NewStyle().Foreground(lipgloss.Color("#ff0000"))
+	r := lipgloss.NewRenderer(io.Discard)
+	r.SetColorProfile(termenv.TrueColor)
+	word := red.Renderer(r).Render("abc")
+	if got := wrap(word+" "+word+" "+word, 7); len(got) != 2 {
+		t.Errorf("wrap of three styled 3-cell words at 7 cells: %d lines %q, want 2", len(got), got)
+	}
+}
