@@ -515,15 +515,3 @@ func cmpSpan(r geometry.Rect, sys geometry.System) string {
 	}
 	return x0 + " to " + x1
 }
-
-// cmpSig formats v with sig significant digits in plain notation.
-func cmpSig(v float64, sig int) string {
-	if v == 0 || math.IsNaN(v) || math.IsInf(v, 0) {
-		return fmt.Sprint(v)
-	}
-	dec := sig - 1 - int(math.Floor(math.Log10(math.Abs(v))))
-	if dec < 0 {
-		dec = 0
-	}
-	return fmt.Sprintf("%.*f", dec, v)
-}

@@ -72,23 +72,23 @@ func SweepTable(out io.Writer, w *geometry.Wall, name string, axis study.Axis, s
 		if cur >= 0 && pts[cur].Err == nil {
 			ch = cmpPct(pts[cur].Rigidity, p.Rigidity)
 		}
-		r = append(r, strconv.FormatFloat(p.Rigidity, 'f', 4, 64), ch)
+		r = append(r, Sig(p.Rigidity), ch)
 		shares := map[string]float64{}
 		for _, ps := range p.Piers {
 			shares[ps.Key] = ps.Share
 		}
 		for _, n := range names {
 			if s, ok := shares[n]; ok {
-				r = append(r, fmt.Sprintf("%.1f%%", 100*s))
+				r = append(r, Sig(100*s)+"%")
 			} else {
 				r = append(r, "")
 			}
 		}
 		var st string
 		if p.MaxStress > 0 {
-			st = cmpSig(float64(p.MaxStress)/float64(w.Units.BaseStress()), 3) + " " + p.StressPier
+			st = Sig(float64(p.MaxStress)/float64(w.Units.BaseStress())) + " " + p.StressPier
 		} else {
-			st = cmpSig(p.StressIndex*float64(w.Units.BaseLength()), 3) + " " + p.StressPier
+			st = Sig(p.StressIndex*float64(w.Units.BaseLength())) + " " + p.StressPier
 		}
 		var marks []string
 		if designed {

@@ -153,3 +153,43 @@ func TestSweepTableDesign(t *testing.T) {
 		t.Errorf("table lacks the best ratio, the rule or the caution:\n%s", out)
 	}
 }
+
+// The sweep table prints the method's results to three significant figures
+// (report.Sig): every position's R rel and its piers' shares are those of
+// the sweep through Sig; at the current position the 8 ft piers take 29.3 %
+// and the 6 ft piers 20.7 % (hand arithmetic of TestSweepTableStressOrShare:
+// 0.6154 / 2.1017 and 0.4355 / 2.1017).
+func TestSweepTableThreeFigures(t *testing.T) {
+	w := sweepWall(true)
+	pts, err := study.Sweep(w, "W2", study.AlongX, 12*geometry.Foot)
+	if err != nil {
+		t.Fatal(err)
+	}
+	var b bytes.Buffer
+	if err := SweepTable(&b, w, "W2", study.AlongX, 12*geometry.Foot, pts); err != nil {
+		t.Fatal(err)
+	}
+	rows := strings.Split(b.String(), "\n")[2:] // below the title and the heading
+	n := 0
+	for _, p := range pts {
+		if p.Err != nil {
+			continue
+		}
+		row := strings.Fields(rows[n])
+		n++
+		if row[2] != Sig(p.Rigidity) {
+			t.Errorf("x %v: R rel %q, want %q", p.X, row[2], Sig(p.Rigidity))
+		}
+		for _, ps := range p.Piers {
+			if want := Sig(100*ps.Share) + "%"; !strings.Contains(rows[n-1], " "+want) {
+				t.Errorf("x %v: pier %s share %s not in %q", p.X, ps.Key, want, rows[n-1])
+			}
+		}
+		if p.Current && (!strings.Contains(rows[n-1], " 29.3%") || !strings.Contains(rows[n-1], " 20.7%")) {
+			t.Errorf("current position %q, want shares 29.3%% and 20.7%%", rows[n-1])
+		}
+	}
+	if n == 0 {
+		t.Fatal("no position answered")
+	}
+}

@@ -382,7 +382,7 @@ func (s *sweepScreen) info() []string {
 		}
 		line1 += fmt.Sprintf("D/C %s %s, %s  ", report.Ratio(p.Ratio), p.RatioPier, verdict)
 	}
-	line1 += fmt.Sprintf("rigidity %.4f", p.Rigidity)
+	line1 += "rigidity " + report.Sig(p.Rigidity)
 	if c := study.CurrentIndex(s.pts); c >= 0 && s.pts[c].Err == nil {
 		if ch := report.ComparePct(s.pts[c].Rigidity, p.Rigidity); ch != "" {
 			line1 += " (" + ch + ")"
@@ -401,7 +401,7 @@ func (s *sweepScreen) info() []string {
 	}
 	var sh []string
 	for _, ps := range p.Piers {
-		sh = append(sh, fmt.Sprintf("%s %.1f%%", ps.Key, 100*ps.Share))
+		sh = append(sh, ps.Key+" "+report.Sig(100*ps.Share)+"%")
 	}
 	line2 := "   shares: " + strings.Join(sh, "  ")
 	var marks []string
@@ -570,7 +570,7 @@ func sweepPlot(st *styles, pts []study.Point, axis study.Axis, sys geometry.Syst
 			}
 			b.WriteRune(ch)
 		}
-		top, bottom, name := fmt.Sprintf("%.4f", hi), fmt.Sprintf("%.4f", lo), "rigidity"
+		top, bottom, name := report.Sig(hi), report.Sig(lo), "rigidity"
 		if designed {
 			top, bottom, name = fmt.Sprintf("%.2f", hi), "0", "D/C"
 		}
