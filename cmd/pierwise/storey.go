@@ -126,7 +126,7 @@ func writeStoreyTables(out io.Writer, a *storey.Analysis) {
 	}
 	if s.Diaphragm != storey.Flexible {
 		for _, c := range d.Cases {
-			fmt.Fprintf(out, "\ncase %s: e = %.2f %s, V·e = %.1f %s; shears in %s\n", c.Name(), u.CoordOf(c.Eccentricity), u.Coord, u.MomentOf(c.Torque), u.Moment, u.Force)
+			fmt.Fprintf(out, "\ncase %s: e = %.2f %s, V·e = %s %s; shears in %s\n", c.Name(), u.CoordOf(c.Eccentricity), u.Coord, report.Sig(u.MomentOf(c.Torque)), u.Moment, u.Force)
 			// The distribution uses R = E·t·R rel: when the walls' moduli or
 			// thicknesses differ, only that column explains the direct shears.
 			head := []string{"wall", "dir", "R rel"}
@@ -138,14 +138,14 @@ func writeStoreyTables(out io.Writer, a *storey.Analysis) {
 				sh := c.Shares[i]
 				direct := "-"
 				if w.Ref.Direction == c.Load || sh.Direct != 0 {
-					direct = fmt.Sprintf("%.2f", u.ForceOf(geometry.Force(sh.Direct)))
+					direct = report.Sig(u.ForceOf(geometry.Force(sh.Direct)))
 				}
 				cells := []string{w.Name, dirText(w.Ref), relText(s, w)}
 				if a.Absolute {
-					cells = append(cells, report.Grouped(u.RigidityOf(w.Rigidity)))
+					cells = append(cells, report.Sig(u.RigidityOf(w.Rigidity)))
 				}
 				tw.Add(append(cells, direct,
-					fmt.Sprintf("%.2f", u.ForceOf(geometry.Force(sh.Torsional))), fmt.Sprintf("%.2f", u.ForceOf(geometry.Force(sh.Total()))))...)
+					report.Sig(u.ForceOf(geometry.Force(sh.Torsional))), report.Sig(u.ForceOf(geometry.Force(sh.Total()))))...)
 			}
 			tw.Write(report.NewText(out), "  ")
 		}
@@ -170,7 +170,7 @@ func writeStoreyTables(out io.Writer, a *storey.Analysis) {
 		for _, lines := range a.Flexible.Lines {
 			for _, ln := range lines {
 				tw.Add(ln.Load.String(), fmt.Sprintf("%.2f", u.CoordOf(ln.Position)),
-					fmt.Sprintf("%.2f to %.2f", u.CoordOf(ln.Tributary[0]), u.CoordOf(ln.Tributary[1])), fmt.Sprintf("%.2f", u.ForceOf(geometry.Force(ln.Shear))))
+					fmt.Sprintf("%.2f to %.2f", u.CoordOf(ln.Tributary[0]), u.CoordOf(ln.Tributary[1])), report.Sig(u.ForceOf(geometry.Force(ln.Shear))))
 			}
 		}
 		tw.Write(report.NewText(out), "  ")
@@ -180,23 +180,23 @@ func writeStoreyTables(out io.Writer, a *storey.Analysis) {
 		fmt.Fprintln(out, "\ndesign shears (the larger of rigid and flexible, per wall)")
 		tw := newTextTable("wall", "dir", "rigid "+u.Force, "flexible "+u.Force, "design "+u.Force, "governs")
 		for _, w := range a.Walls {
-			tw.Add(w.Name, dirText(w.Ref), fmt.Sprintf("%.2f", u.ForceOf(geometry.Force(w.Rigid.Shear))), fmt.Sprintf("%.2f", u.ForceOf(geometry.Force(w.Flexible))),
-				fmt.Sprintf("%.2f", u.ForceOf(geometry.Force(w.Design.Shear))), storey.CaseName(d, w.Design.Case))
+			tw.Add(w.Name, dirText(w.Ref), report.Sig(u.ForceOf(geometry.Force(w.Rigid.Shear))), report.Sig(u.ForceOf(geometry.Force(w.Flexible))),
+				report.Sig(u.ForceOf(geometry.Force(w.Design.Shear))), storey.CaseName(d, w.Design.Case))
 		}
 		tw.Write(report.NewText(out), "  ")
 	case storey.Flexible:
 		fmt.Fprintln(out, "\ndesign shears (flexible diaphragm: the line's shear shared by rigidity)")
 		tw := newTextTable("wall", "dir", "design "+u.Force)
 		for _, w := range a.Walls {
-			tw.Add(w.Name, dirText(w.Ref), fmt.Sprintf("%.2f", u.ForceOf(geometry.Force(w.Design.Shear))))
+			tw.Add(w.Name, dirText(w.Ref), report.Sig(u.ForceOf(geometry.Force(w.Design.Shear))))
 		}
 		tw.Write(report.NewText(out), "  ")
 	default:
 		fmt.Fprintln(out, "\ndesign shears (worst case, never below the direct shear)")
 		tw := newTextTable("wall", "dir", "direct "+u.Force, "design "+u.Force, "governs")
 		for _, w := range a.Walls {
-			tw.Add(w.Name, dirText(w.Ref), fmt.Sprintf("%.2f", u.ForceOf(geometry.Force(w.Design.Direct))),
-				fmt.Sprintf("%.2f", u.ForceOf(geometry.Force(w.Design.Shear))), storey.CaseName(d, w.Design.Case))
+			tw.Add(w.Name, dirText(w.Ref), report.Sig(u.ForceOf(geometry.Force(w.Design.Direct))),
+				report.Sig(u.ForceOf(geometry.Force(w.Design.Shear))), storey.CaseName(d, w.Design.Case))
 		}
 		tw.Write(report.NewText(out), "  ")
 	}
@@ -206,12 +206,12 @@ func writeStoreyTables(out io.Writer, a *storey.Analysis) {
 		row := func(name string, dr storey.Drift) {
 			lim, verdict := "-", "-"
 			if dr.Allowable > 0 {
-				lim, verdict = fmt.Sprintf("%.3f", u.DeflectionOf(geometry.Length(dr.Allowable))), "OK"
+				lim, verdict = report.Sig(u.DeflectionOf(geometry.Length(dr.Allowable))), "OK"
 				if !dr.OK {
 					verdict = "EXCEEDS"
 				}
 			}
-			tw.Add(name, fmt.Sprintf("%.4f", u.DeflectionOf(geometry.Length(dr.Design))), fmt.Sprintf("%.5f", dr.Ratio), lim, verdict)
+			tw.Add(name, report.Sig(u.DeflectionOf(geometry.Length(dr.Design))), report.Fraction(dr.Ratio), lim, verdict)
 		}
 		for _, w := range a.Walls {
 			row(w.Name, w.Drift)
@@ -253,8 +253,8 @@ func writeStoreyTables(out io.Writer, a *storey.Analysis) {
 		tw := newTextTable("pier", "h/L", "support", "share", "V "+u.Force, "M "+u.Moment)
 		for _, p := range w.Piers {
 			support := p.Support.String()
-			tw.Add(p.Name, fmt.Sprintf("%.2f", p.Ratio()), support, fmt.Sprintf("%.1f%%", 100*p.Share),
-				fmt.Sprintf("%.2f", u.ForceOf(p.Shear)), fmt.Sprintf("%.1f", u.MomentOf(p.Moment)))
+			tw.Add(p.Name, fmt.Sprintf("%.2f", p.Ratio()), support, report.Sig(100*p.Share)+"%",
+				report.Sig(u.ForceOf(p.Shear)), report.Sig(u.MomentOf(p.Moment)))
 		}
 		tw.Write(report.NewText(out), "  ")
 	}
@@ -275,18 +275,18 @@ func dirText(r storey.WallRef) string {
 func relText(s *storey.Storey, w storey.Wall) string {
 	switch {
 	case s.Basis == geometry.BasisFE && w.FE != nil:
-		return fmt.Sprintf("%.4f", w.FE.Rigidity)
+		return report.Sig(w.FE.Rigidity)
 	case w.Unit != nil:
-		return fmt.Sprintf("%.4f", w.Unit.Rigidity)
+		return report.Sig(w.Unit.Rigidity)
 	}
 	return "given"
 }
 
 func rigidityText(a *storey.Analysis, u report.Units, r float64) string {
 	if a.Absolute {
-		return report.Grouped(u.RigidityOf(r))
+		return report.Sig(u.RigidityOf(r))
 	}
-	return fmt.Sprintf("%.4f", u.CoordOf(r))
+	return report.Sig(u.CoordOf(r))
 }
 
 // newTextTable is a table of the storey command: the first two columns,

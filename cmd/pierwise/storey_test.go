@@ -166,8 +166,8 @@ func TestStoreyTableAbsoluteRigidity(t *testing.T) {
 	if code != exitOK {
 		t.Fatalf("exit %d: %s", code, errs)
 	}
-	if !strings.Contains(out, "R kip/in") || !strings.Contains(out, report.Grouped(north.Rigidity)) {
-		t.Errorf("table lacks the R kip/in column with %s:\n%s", report.Grouped(north.Rigidity), out)
+	if !strings.Contains(out, "R kip/in") || !strings.Contains(out, report.Sig(north.Rigidity)) {
+		t.Errorf("table lacks the R kip/in column with %s:\n%s", report.Sig(north.Rigidity), out)
 	}
 	if !strings.Contains(out, "kip·ft per radian") {
 		t.Errorf("no J line:\n%s", out)
