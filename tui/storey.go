@@ -662,7 +662,7 @@ func (s *storeyScreen) tableView(w, h int) string {
 				verdict = " EXCEEDS"
 			}
 		}
-		lines = append(lines, truncate(fmt.Sprintf("storey drift δ %.3f %s (%.4f h)%s", u.DeflectionOf(geometry.Length(sel.Drift.Design)), u.Deflection, sel.Drift.Ratio, verdict), w))
+		lines = append(lines, truncate(fmt.Sprintf("storey drift δ %s %s (%s h)%s", report.Sig(u.DeflectionOf(geometry.Length(sel.Drift.Design))), u.Deflection, report.Fraction(sel.Drift.Ratio), verdict), w))
 	}
 	if g := sel.Governing; g != nil {
 		lines = append(lines, truncate(fmt.Sprintf("governing pier %s (%s), ratio %.2f", g.Pier, g.Check, g.Ratio), w))
