@@ -160,12 +160,7 @@ func writeSolveTableFE(out io.Writer, s *solved) {
 	w, u, r := s.wall, report.UnitsFor(s.wall.Units), s.b
 	t := report.NewText(out)
 	L := func(l geometry.Length) string { return geometry.FormatLength(l, w.Units) }
-	title := w.Title
-	if title == "" {
-		title = displayName(s.arg)
-	}
-	t.Line(fmt.Sprintf("%s  [%s, layout %q]", title, displayName(s.arg), w.Layouts[w.Active].Name))
-	t.Wrapped("  ", fmt.Sprintf("wall %s long × %s high × %s thick, %s, %s", L(w.Length), L(w.Height), L(w.Thickness), supportLong(w.Support), plural(len(w.Openings()), "opening")))
+	solveHeading(t, s)
 	if err := r.Err(); err != nil {
 		t.Line("  basis: " + basis.Name(r.Basis))
 		t.Wrapped("  ", fmt.Sprintf("no answer: %v", s.feErr))

@@ -241,20 +241,23 @@ func displayName(arg string) string {
 	return arg
 }
 
-func writeSolveTable(out io.Writer, s *solved) {
-	w, u := s.wall, report.UnitsFor(s.wall.Units)
-	t := report.NewText(out)
+// solveHeading writes the first lines of a solve table, on either basis:
+// the wall's title, file and layout, and its size, support and openings.
+func solveHeading(t *report.Text, s *solved) {
+	w := s.wall
 	L := func(l geometry.Length) string { return geometry.FormatLength(l, w.Units) }
 	title := w.Title
 	if title == "" {
 		title = displayName(s.arg)
 	}
 	t.Line(fmt.Sprintf("%s  [%s, layout %q]", title, displayName(s.arg), w.Layouts[w.Active].Name))
-	support := "cantilever"
-	if w.Support == geometry.Fixed {
-		support = "fixed-fixed"
-	}
-	t.Wrapped("  ", fmt.Sprintf("wall %s long × %s high × %s thick, %s, %s", L(w.Length), L(w.Height), L(w.Thickness), support, plural(len(w.Openings()), "opening")))
+	t.Wrapped("  ", fmt.Sprintf("wall %s long × %s high × %s thick, %s, %s", L(w.Length), L(w.Height), L(w.Thickness), supportLong(w.Support), plural(len(w.Openings()), "opening")))
+}
+
+func writeSolveTable(out io.Writer, s *solved) {
+	w, u := s.wall, report.UnitsFor(s.wall.Units)
+	t := report.NewText(out)
+	solveHeading(t, s)
 	t.Line("  basis: " + basis.Name(s.b.Basis))
 	if s.res == nil {
 		t.Wrapped("  ", fmt.Sprintf("classic method: no answer: %v", s.err))
