@@ -24,9 +24,12 @@ func nearAbs(t *testing.T, what string, got, want, tol float64) {
 
 // spreadsheetWall is the concrete masonry shear wall of the published
 // spreadsheet "Strength Interaction Diagram by Spreadsheet — CMU Masonry
-// Shear Wall — Example Problem 20.4" (a textbook chapter 20 spreadsheet,
-// published on Scribd as "ch20.xlsx"; the textbook is not named in the
-// copy read). Its title line says f'm = 1500 psi, 24.67 ft, 7.625 in, but
+// Shear Wall — Example Problem 20.4" (published on Scribd as "ch20.xlsx";
+// the textbook is not named in the copy read, but its title line, f'm =
+// 1500 psi, 24.67 ft, 7.625 in, is the wall of Example 20.4 of McCormac and
+// Brown, Design of Reinforced Concrete, 9th ed., whose Chapter 20 provides a
+// spreadsheet; that example's printed table is checked in
+// published_shear_test.go). Its title line says f'm = 1500 psi, 24.67 ft, 7.625 in, but
 // every cell is computed with the inputs printed in its input block, which
 // are used here: d_v = 216 in, f'm = 2.5 ksi, t_sp = 11.625 in, f_y = 60 ksi,
 // E_s = 29,000 ksi, ε_mu = 0.0025, seven rows of 1.00 in² bars at d_i = 4.00,
@@ -87,8 +90,9 @@ var spreadsheetRows = []struct {
 //   - through the exported MomentAt, the factored axial load
 //     φ (C_masonry + Σ A_s f_s) finds the same neutral axis (±0.01 in).
 //
-// The moments of the rows are off the edge of the copy read, so the
-// moment arm is checked by the hand tests of design_test.go instead.
+// The moments of the rows are off the edge of the copy read; the moment arm
+// is checked by the hand tests of design_test.go and against the printed
+// moments of McCormac and Brown's Table 20.3 (TestPublishedMasonryPMMcCormac).
 func TestPublishedMasonryPMSpreadsheet(t *testing.T) {
 	s := spreadsheetWall(t)
 	const d1 = 212.0
