@@ -29,8 +29,7 @@ func nearAbs(t *testing.T, what string, got, want, tol float64) {
 // 1500 psi, 24.67 ft, 7.625 in, is the wall of Example 20.4 of McCormac and
 // Brown, Design of Reinforced Concrete, 9th ed., whose Chapter 20 provides a
 // spreadsheet; that example's printed table is checked in
-// published_shear_test.go). Its title line says f'm = 1500 psi, 24.67 ft, 7.625 in, but
-// every cell is computed with the inputs printed in its input block, which
+// published_shear_test.go). Despite its title line, every cell is computed with the inputs printed in its input block, which
 // are used here: d_v = 216 in, f'm = 2.5 ksi, t_sp = 11.625 in, f_y = 60 ksi,
 // E_s = 29,000 ksi, ε_mu = 0.0025, seven rows of 1.00 in² bars at d_i = 4.00,
 // 38.67, 73.33, 108.00, 142.67, 177.33, 212.00 in from the compressed end
