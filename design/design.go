@@ -301,6 +301,7 @@ func notes(in *Input) []string {
 	var n []string
 	if in.Settings.Code == TMS402 {
 		n = append(n, "Bars in compression are ignored: masonry bars are not laterally confined (TMS 402-22 §9.3.2, clause number from memory).")
+		n = append(n, "Flexure uses φ = 0.90 and the maximum-reinforcement rule of TMS 402-16 §9.3.3.2: TMS 402-22 is reported to add compression-controlled sections with a smaller φ and to change γ_g, which this check does not yet apply; for a pier whose tension bars do not yield, verify φM_n against the 2022 text (docs/method.md §8).")
 		if in.Reinforcement != nil && in.Reinforcement.Grout == PartialGrout {
 			n = append(n, "Partially grouted: the net section is the face shells plus one grouted cell module at each bar (common practice).")
 		}
