@@ -6,6 +6,7 @@ import (
 	"time"
 
 	"pierwise/drawing"
+	"pierwise/geometry"
 	"pierwise/pier/fe"
 	"pierwise/storey"
 )
@@ -73,7 +74,7 @@ func runDraw(e *env, args []string) error {
 		if err != nil {
 			return err
 		}
-		if svg, err = drawing.Storey(drawing.StoreyInput{Analysis: a, Now: now, Version: version}); err != nil {
+		if svg, err = drawing.Storey(drawing.StoreyInput{Analysis: a, Project: projectEntries(a.Storey.Project), Now: now, Version: version}); err != nil {
 			return err
 		}
 	} else {
@@ -87,7 +88,7 @@ func runDraw(e *env, args []string) error {
 		view := s.b.View()
 		in := drawing.WallInput{
 			Path: arg, Wall: s.wall, Basis: "classic strip method", Piers: drawing.LeafPiers(view),
-			Show: sh, Component: comp, Now: now, Version: version,
+			Show: sh, Component: comp, Project: projectEntries(s.wall.Project), Now: now, Version: version,
 		}
 		if s.b.IsFE() {
 			in.Basis = "plane-stress finite-element model"
@@ -138,4 +139,14 @@ func runDraw(e *env, args []string) error {
 		return fmt.Errorf("%s: %w", displayName(arg), classicErr)
 	}
 	return nil
+}
+
+// projectEntries is the [project] table of a wall or storey file for the
+// drawing's title block.
+func projectEntries(p geometry.Project) []drawing.Entry {
+	var out []drawing.Entry
+	for _, e := range p.Entries() {
+		out = append(out, drawing.Entry{Key: e[0], Value: e[1]})
+	}
+	return out
 }

@@ -118,3 +118,33 @@ func TestDrawFEBasis(t *testing.T) {
 		t.Error("the fe sheet does not carry the model's shares")
 	}
 }
+
+// The title block carries the file's [project] table, for a wall and for a
+// storey, as the report's heading does (a sheet of the calculation package
+// must say whose job it is).
+func TestDrawProjectTable(t *testing.T) {
+	dir := t.TempDir()
+	project := "\n[project]\nname = \"Annex <east> & yard\"\njob = \"24-117\"\n"
+	for _, f := range []string{"north.toml", "south.toml", "east.toml", "west.toml", "partition.toml", "workshop.toml"} {
+		b, err := os.ReadFile(filepath.Join("../../testdata/storey", f))
+		if err != nil {
+			t.Fatal(err)
+		}
+		if f == "workshop.toml" || f == "north.toml" {
+			b = append(b, project...)
+		}
+		if err := os.WriteFile(filepath.Join(dir, f), b, 0o644); err != nil {
+			t.Fatal(err)
+		}
+	}
+	for _, f := range []string{"north.toml", "workshop.toml"} {
+		code, out, errs := runCLI("draw", filepath.Join(dir, f))
+		if code != exitOK {
+			t.Fatalf("%s: exit %d: %s", f, code, errs)
+		}
+		parses(t, out)
+		if !strings.Contains(out, "Annex &lt;east&gt; &amp; yard") || !strings.Contains(out, "24-117") {
+			t.Errorf("%s: the title block does not carry the [project] table", f)
+		}
+	}
+}
