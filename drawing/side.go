@@ -222,8 +222,11 @@ func (s *wallSheet) noteLines(in WallInput, w float64) []string {
 	if s.unlabelled > 0 {
 		notes = append(notes, fmt.Sprintf("%d piers too small at this scale for a label are in the table only.", s.unlabelled))
 	}
-	notes = append(notes, support+" V acts toward the right at the top.",
-		"Pier moments: V·h at the base of a cantilever pier, V·h/2 at each end of a fixed-fixed pier.")
+	moments := "Pier moments: V·h at the base of a cantilever pier, V·h/2 at each end of a fixed-fixed pier."
+	if in.FE {
+		moments = "Pier V at mid-height, M the larger of the bottom and top moments, each the resultant of the model's nodal forces along the section."
+	}
+	notes = append(notes, support+" V acts toward the right at the top.", moments)
 	if wall.Units == geometry.SI {
 		notes = append(notes, "Dimensions in millimetres.")
 	}

@@ -78,6 +78,7 @@ type WallInput struct {
 	Path  string // the wall file as given ("" for the built-in demo)
 	Wall  *geometry.Wall
 	Basis string // the model the values come from, as the title block names it
+	FE    bool   // the values are the finite-element model's (docs/method.md §5)
 	Piers []Pier // leaf piers; empty for a solid wall or a wall without an answer
 	// NoAnswer says why the basis has no pier values (a wall the openings
 	// cut), printed on the sheet; "" when there is an answer.

@@ -686,7 +686,7 @@ func (e *elevation) snapshot() tea.Cmd {
 		draw.Project = append(draw.Project, drawing.Entry{Key: p[0], Value: p[1]})
 	}
 	if e.onFE() {
-		draw.Basis = "plane-stress finite-element model"
+		draw.Basis, draw.FE = "plane-stress finite-element model", true
 	}
 	if r := e.bs.shown; r != nil {
 		draw.HasLoad, draw.Warnings = r.HasLoad, pier.Texts(e.res.Warnings)

@@ -91,7 +91,7 @@ func runDraw(e *env, args []string) error {
 			Show: sh, Component: comp, Project: projectEntries(s.wall.Project), Now: now, Version: version,
 		}
 		if s.b.IsFE() {
-			in.Basis = "plane-stress finite-element model"
+			in.Basis, in.FE = "plane-stress finite-element model", true
 		}
 		switch {
 		case view != nil:

@@ -117,6 +117,11 @@ func TestDrawFEBasis(t *testing.T) {
 	if !strings.Contains(classic, "25.4") || strings.Contains(fe, "25.4") || !strings.Contains(fe, "31.") {
 		t.Error("the fe sheet does not carry the model's shares")
 	}
+	// The model's pier moments are not the classic V·h or V·h/2: the note
+	// must say what they are (docs/method.md §5).
+	if strings.Contains(fe, "V·h/2 at each end") || !strings.Contains(classic, "V·h/2 at each end") {
+		t.Error("the fe sheet explains its moments by the classic rule")
+	}
 }
 
 // The title block carries the file's [project] table, for a wall and for a
