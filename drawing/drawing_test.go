@@ -9,6 +9,7 @@ import (
 	"image/color"
 	"io"
 	"math"
+	"os"
 	"path/filepath"
 	"strings"
 	"testing"
@@ -543,6 +544,62 @@ func TestHatch(t *testing.T) {
 		}
 		if pt.Cross && (rising == 0 || rising == len(segs)) {
 			t.Errorf("%s: a cross hatch lacks a diagonal", pt.Fill)
+		}
+	}
+}
+
+// A wall given by its rigidity with a length, along x or at an angle, is
+// drawn on the plan as the text report's plan sketch places it: along its
+// line from its start, or centred on its given point (the invented
+// workshop with its mezzanine frame, plus an angled brace).
+func TestStoreyGivenAndAngledWalls(t *testing.T) {
+	dir := t.TempDir()
+	src := filepath.Join("..", "testdata", "storey")
+	entries, err := os.ReadDir(src)
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, e := range entries {
+		b, err := os.ReadFile(filepath.Join(src, e.Name()))
+		if err != nil {
+			t.Fatal(err)
+		}
+		if e.Name() == "workshop-frame.toml" {
+			b = append(b, "\n[[wall]]\nname = \"Angled brace\"\nrigidity = \"300kip/in\"\ndirection = 30\nposition = [\"60ft\", \"20ft\"]\nlength = \"20ft\"\n"...)
+		}
+		if err := os.WriteFile(filepath.Join(dir, e.Name()), b, 0o644); err != nil {
+			t.Fatal(err)
+		}
+	}
+	a, err := storey.Load(filepath.Join(dir, "workshop-frame.toml"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	svg, err := Storey(StoreyInput{Analysis: a, Now: fixedNow, Version: "test"})
+	if err != nil {
+		t.Fatal(err)
+	}
+	wellFormed(t, svg)
+	text := strings.Join(strings.Fields(allText(t, svg)), " ")
+	for _, want := range []string{"Mezzanine frame", "Angled brace", "30°", "given"} {
+		if !strings.Contains(text, want) {
+			t.Errorf("%q missing from the plan", want)
+		}
+	}
+	img := raster(t, svg)
+	ws := storeySheet(a.Storey)
+	ft := 0.3048
+	for _, p := range []struct {
+		name string
+		x, y float64
+	}{
+		{"Mezzanine frame (50 to 74 ft along y = 35 ft)", 62 * ft, 35 * ft},
+		{"Angled brace (centred on 60, 20 ft)", 60 * ft, 20 * ft},
+		{"Angled brace, 8 ft from its centre at 30°", (60 + 8*math.Cos(math.Pi/6)) * ft, (20 + 8*math.Sin(math.Pi/6)) * ft},
+	} {
+		x, y := ws.at(p.x, p.y)
+		if f := patch(img, x, y, 0, color.RGBA{0, 0, 0, 255}, 40); f < 1 {
+			t.Errorf("%s: no heavy bar", p.name)
 		}
 	}
 }

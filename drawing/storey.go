@@ -57,18 +57,44 @@ func Storey(in StoreyInput) ([]byte, error) {
 	d.open("g", "id", "walls", "font-family", fontFamily, "fill", inkColour)
 	for i, wl := range a.Walls {
 		ref := wl.Ref
-		if wl.Wall == nil {
+		// A wall given by its rigidity is drawn when its length is given,
+		// as in the text report's plan sketch.
+		length := float64(ref.Length)
+		if wl.Wall != nil {
+			length = float64(wl.Wall.Length)
+		}
+		if !(length > 0) {
 			continue
 		}
-		length := float64(wl.Wall.Length)
+		label := wl.Name
+		value := "V = " + geometry.FormatForce(geometry.Force(wl.Design.Shear), sys)
+		if ref.Direction == storey.Angled {
+			// Centred on its given point, along its angle (counter-clockwise
+			// from +x; the sheet's y grows downward).
+			c, sn := math.Cos(ref.Angle), math.Sin(ref.Angle)
+			px, py := float64(ref.At[0]), float64(ref.At[1])
+			x0, y0 := at(px-length/2*c, py-length/2*sn)
+			x1, y1 := at(px+length/2*c, py+length/2*sn)
+			// A filled bar 1.4 mm wide, as the other walls (a polygon: every
+			// renderer fills it at its true width).
+			nx, ny := -(y1-y0)/math.Hypot(x1-x0, y1-y0)*0.7, (x1-x0)/math.Hypot(x1-x0, y1-y0)*0.7
+			pts := fmt.Sprintf("%s,%s %s,%s %s,%s %s,%s", num(x0+nx), num(y0+ny), num(x1+nx), num(y1+ny), num(x1-nx), num(y1-ny), num(x0-nx), num(y0-ny))
+			d.el("polygon", "points", pts, "fill", inkColour, "id", fmt.Sprintf("wall-%d", i+1))
+			cx, cy := at(px, py)
+			ly := cy + 4.4 // beside the half of the wall that runs down-left
+			if c*sn < 0 {
+				ly = cy - 4.4
+			}
+			d.text(cx+2.5, ly, 2.8, label, "start", "font-weight", "bold")
+			d.text(cx+2.5, ly+3.2, 2.6, value, "start")
+			continue
+		}
 		along := float64(s.Size[ref.Direction])
 		start := (along - length) / 2
 		if ref.HasStart {
 			start = float64(ref.Start)
 		}
 		pos := float64(ref.Position)
-		label := wl.Name
-		value := "V = " + geometry.FormatForce(geometry.Force(wl.Design.Shear), sys)
 		if ref.Direction == storey.X {
 			x0, y0 := at(start, pos)
 			x1, _ := at(start+length, pos)
@@ -261,15 +287,19 @@ func storeySide(d *doc, ws *wallSheet, a *storey.Analysis) {
 	y += 3.6
 	dist := a.Distribution
 	for _, wl := range a.Walls {
-		rel := 0.0
+		rel := "given" // a wall given by its rigidity, as in the storey report
 		if wl.Unit != nil {
-			rel = wl.Unit.Rigidity
+			rel = fmt.Sprintf("%.4f", wl.Unit.Rigidity)
+		}
+		dir := wl.Ref.Direction.String()
+		if wl.Ref.Direction == storey.Angled {
+			dir = fmt.Sprintf("%g°", wl.Ref.AngleDeg)
 		}
 		governs := "direct"
 		if dist != nil {
 			governs = storey.CaseName(dist, wl.Design.Case)
 		}
-		cells := []string{wl.Name, wl.Ref.Direction.String(), fmt.Sprintf("%.4f", rel),
+		cells := []string{wl.Name, dir, rel,
 			fmt.Sprintf("%.2f", u.ForceOf(geometry.Force(wl.Design.Direct))), fmt.Sprintf("%.2f", u.ForceOf(geometry.Force(wl.Design.Shear))), governs}
 		cx := x
 		for i, c := range cols {
