@@ -603,3 +603,21 @@ func TestStoreyGivenAndAngledWalls(t *testing.T) {
 		}
 	}
 }
+
+// A drawing of a wall with unsaved edits (the editor's snapshot) says so
+// beside its file name, as the snapshot's report heading does; a saved one
+// does not.
+func TestUnsavedTitleBlock(t *testing.T) {
+	w, r := loadWall(t, "nested.toml")
+	for _, unsaved := range []bool{false, true} {
+		in := wallInput("nested.toml", w, r)
+		in.Unsaved = unsaved
+		svg, err := Wall(in)
+		if err != nil {
+			t.Fatal(err)
+		}
+		if got := strings.Contains(allText(t, svg), "unsaved changes"); got != unsaved {
+			t.Errorf("unsaved %v: the title block says unsaved changes: %v", unsaved, got)
+		}
+	}
+}

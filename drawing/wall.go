@@ -75,11 +75,14 @@ type RatioFunc func(pier string) (ratio float64, ok bool)
 // mechanics: piers, forces, ratios and the stress field come from the
 // caller's basis.
 type WallInput struct {
-	Path  string // the wall file as given ("" for the built-in demo)
-	Wall  *geometry.Wall
-	Basis string // the model the values come from, as the title block names it
-	FE    bool   // the values are the finite-element model's (docs/method.md §5)
-	Piers []Pier // leaf piers; empty for a solid wall or a wall without an answer
+	Path string // the wall file as given ("" for the built-in demo)
+	// Unsaved says the wall has edits not yet saved to Path: the title
+	// block says so, as the snapshot's report heading does.
+	Unsaved bool
+	Wall    *geometry.Wall
+	Basis   string // the model the values come from, as the title block names it
+	FE      bool   // the values are the finite-element model's (docs/method.md §5)
+	Piers   []Pier // leaf piers; empty for a solid wall or a wall without an answer
 	// NoAnswer says why the basis has no pier values (a wall the openings
 	// cut), printed on the sheet; "" when there is an answer.
 	NoAnswer string
@@ -187,7 +190,11 @@ func Wall(in WallInput) ([]byte, error) {
 	s.pierLabels(d, in)
 	s.side(d, in, stress)
 
-	lines := [][2]string{{"File", orText(in.Path, "(built-in demo wall)")}}
+	file := orText(in.Path, "(built-in demo wall)")
+	if in.Unsaved {
+		file += " (unsaved changes: the wall as edited)"
+	}
+	lines := [][2]string{{"File", file}}
 	if w.Active >= 0 && w.Active < len(w.Layouts) && w.Layouts[w.Active].Name != "" {
 		lines = append(lines, [2]string{"Layout", w.Layouts[w.Active].Name})
 	}

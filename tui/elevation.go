@@ -680,7 +680,7 @@ func (e *elevation) snapshot() tea.Cmd {
 		}
 		in.Basis = &basis.Result{Basis: geometry.BasisFE, Wall: d.wall, Classic: e.res, ClassicErr: e.solveErr, FE: e.fe.res, FEErr: e.fe.err}
 	}
-	draw := drawing.WallInput{Path: d.path, Wall: d.wall, Basis: "classic strip method", Piers: drawing.LeafPiers(e.bs.shown),
+	draw := drawing.WallInput{Path: d.path, Unsaved: in.Unsaved, Wall: d.wall, Basis: "classic strip method", Piers: drawing.LeafPiers(e.bs.shown),
 		Now: in.Now, Version: e.c.version}
 	for _, p := range d.wall.Project.Entries() {
 		draw.Project = append(draw.Project, drawing.Entry{Key: p[0], Value: p[1]})
