@@ -30,7 +30,7 @@ const cmpDash = "-"
 // CompareReport writes the text report of a comparison of two layouts, in
 // sheets of SheetLines lines under the [project] table of the walls
 // compared (report.Paginate): title block, both elevations side by side,
-// the differences table, the pier table with piers matched by position,
+// the differences table, the pier table with piers matched by their bounds,
 // warnings and the caution. It computes nothing: every number comes from c.
 func CompareReport(out io.Writer, c *study.Comparison, info CompareInfo) error {
 	return CompareReports(out, []*study.Comparison{c}, info)
@@ -114,7 +114,7 @@ func compareBody(out io.Writer, c *study.Comparison, info CompareInfo) error {
 	}
 	t.Write(w, "  ")
 
-	section("Leaf piers, matched by position")
+	section("Leaf piers, matched by the openings beside them")
 	if len(c.Piers) == 0 {
 		w.Line("  No pier table: the classic method has no answer for one of the layouts.")
 	} else {
@@ -128,7 +128,8 @@ func compareBody(out io.Writer, c *study.Comparison, info CompareInfo) error {
 		pt.Write(w, "  ")
 		w.Blank()
 		w.Wrapped("  ", "Shares are fractions of the wall shear. Change is in percentage points. "+
-			"A pier of one layout matches the pier of the other that overlaps it most; "+
+			"A pier of one layout matches the pier of the other that stands between the same openings (or wall ends), "+
+			"else the one it overlaps most; "+
 			"the names P1, P2, ... are given left to right in each layout and may differ.")
 	}
 

@@ -267,9 +267,10 @@ func (s *compareScreen) view() string {
 		lines = append(lines, "", st.heading.Render("Compare layouts"), "")
 		lines = append(lines, strings.Split(s.help.FullHelpView(s.keys.FullHelp()), "\n")...)
 		lines = append(lines, "",
-			"Piers are matched by position: a pier of one layout is the pier of the",
-			"other that overlaps it most. Names are given left to right in each",
-			"layout and may differ. Share changes are in percentage points.",
+			"Piers are matched by the openings beside them: a pier of one layout is",
+			"the pier of the other between the same openings (or wall ends), else",
+			"the one it overlaps most. Names are given left to right in each layout",
+			"and may differ. Share changes are in percentage points.",
 			"", "Any key closes this help.")
 		return fit(strings.Join(lines, "\n"), s.width, s.height)
 	}
