@@ -2,6 +2,7 @@ package main
 
 import (
 	"bytes"
+	"errors"
 	"fmt"
 	"os"
 	"strings"
@@ -85,6 +86,10 @@ func runReport(e *env, args []string) error {
 		fmt.Fprintln(e.stderr, "report written to", *outPath)
 	}
 	if classicErr != nil {
+		var le *locatedError
+		if errors.As(classicErr, &le) {
+			return classicErr // it names the file already
+		}
 		return fmt.Errorf("%s: %w", displayName(arg), classicErr)
 	}
 	return feErr

@@ -127,6 +127,9 @@ func TestSolveCutWall(t *testing.T) {
 		if !strings.Contains(errs+out, "SLOT") || !strings.Contains(errs+out, "load path") {
 			t.Errorf("%v: the message does not name the cutting opening:\n%s%s", args, errs, out)
 		}
+		if strings.Count(errs, "cut.toml") != 1 {
+			t.Errorf("%v: the message names the file %d times, want once:\n%s", args, strings.Count(errs, "cut.toml"), errs)
+		}
 		for _, bad := range []string{"NaN", "Inf", "+Inf"} {
 			if strings.Contains(out, bad) {
 				t.Errorf("%v: output contains %s:\n%s", args, bad, out)
