@@ -5,6 +5,7 @@ import (
 	"math"
 	"path/filepath"
 	"strings"
+	"unicode/utf8"
 
 	"github.com/charmbracelet/bubbles/help"
 	"github.com/charmbracelet/bubbles/key"
@@ -600,7 +601,11 @@ func (s *storeyScreen) tableView(w, h int) string {
 		}
 		dir := wl.Ref.Direction.String()
 		if wl.Ref.Direction == storey.Angled {
-			dir = "a"
+			// Its angle when it fits the column (30°), else "a".
+			dir = fmt.Sprintf("%g°", wl.Ref.AngleDeg)
+			if utf8.RuneCountInString(dir) > 3 {
+				dir = "a"
+			}
 		}
 		rel := "  given"
 		switch {

@@ -486,3 +486,16 @@ func TestStoreySaveElsewhereSays(t *testing.T) {
 		t.Error("the changed file was written over")
 	}
 }
+
+// An angled wall's row gives its angle in the direction column ("30°"),
+// not a bare "a" that the screen explains nowhere.
+func TestStoreyScreenAngledWall(t *testing.T) {
+	dir := filepath.Dir(copyWorkshop(t))
+	path := filepath.Join(dir, "workshop-frame.toml")
+	appendFile(t, path, "\n[[wall]]\nname = \"Brace\"\nrigidity = \"300kip/in\"\ndirection = 30\nposition = [\"60ft\", \"20ft\"]\nlength = \"20ft\"\n")
+	d := newStoreyDriver(t, path, 80, 24)
+	view := ansi.Strip(d.m.View())
+	if !strings.Contains(view, "7 Brace") || !strings.Contains(view, "30°") {
+		t.Errorf("the angled wall's row lacks its angle:\n%s", view)
+	}
+}
