@@ -703,11 +703,23 @@ func collectorWarnings(a *Analysis) []string {
 	var out []string
 	for _, load := range []Direction{X, Y} {
 		for _, ln := range a.Flexible.Lines[load] {
-			cover := 0.0
+			cover, unknown := 0.0, 0
 			for _, i := range ln.Members {
-				cover += float64(wallLength(a.Walls[i]))
+				l := float64(wallLength(a.Walls[i]))
+				cover += l
+				if !(l > 0) {
+					unknown++
+				}
 			}
-			if along := float64(s.Size[load]); cover < along/2 {
+			along := float64(s.Size[load])
+			if unknown > 0 && cover < along/2 {
+				// A wall given by its rigidity without a length: its cover
+				// is not known, so the line's cover cannot be measured.
+				out = append(out, fmt.Sprintf("flexible diaphragm: the %s-wall line at %s = %s has %d wall(s) given by rigidity without a length: give its length to check the cover, or check that a collector brings the line's %s to them",
+					load, load.other(), fmtLen(geometry.Length(ln.Position), s.Units), unknown, geometry.FormatForce(geometry.Force(ln.Shear), s.Units)))
+				continue
+			}
+			if cover < along/2 {
 				out = append(out, fmt.Sprintf("flexible diaphragm: the %s-wall line at %s = %s has walls along %s of the plan's %s: a collector must bring the line's %s to them",
 					load, load.other(), fmtLen(geometry.Length(ln.Position), s.Units), fmtLen(geometry.Length(cover), s.Units),
 					fmtLen(geometry.Length(along), s.Units), geometry.FormatForce(geometry.Force(ln.Shear), s.Units)))

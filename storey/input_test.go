@@ -304,3 +304,26 @@ length = "8ft"
 		t.Errorf("flexible with a wall at 30°: %v", err)
 	}
 }
+
+// A flexible diaphragm's wall line holding a wall given by its rigidity
+// without a length: the collector warning says the length is not known
+// rather than that the walls cover 0 in of the plan.
+func TestCollectorWarningUnknownLength(t *testing.T) {
+	text := boxStorey + "\n[[wall]]\nname = \"frame\"\nrigidity = \"500kip/in\"\ndirection = \"y\"\nposition = \"20ft\"\n"
+	a, err := Load(writeStorey(t, text))
+	if err != nil {
+		t.Fatal(err)
+	}
+	found := false
+	for _, w := range a.Warnings {
+		if strings.Contains(w, "x = 20'-0\"") {
+			found = true
+			if !strings.Contains(w, "without a length") || strings.Contains(w, "walls along 0\"") {
+				t.Errorf("collector warning: %s", w)
+			}
+		}
+	}
+	if !found {
+		t.Errorf("no warning about the frame's line; warnings: %q", a.Warnings)
+	}
+}
