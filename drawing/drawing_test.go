@@ -621,3 +621,42 @@ func TestUnsavedTitleBlock(t *testing.T) {
 		}
 	}
 }
+
+// The plan's note on the design shear follows the diaphragm: on a flexible
+// diaphragm it is the wall line's tributary shear, not "the worst case,
+// never below the direct shear" of the rigid one (the invented workshop).
+func TestStoreyFlexibleNote(t *testing.T) {
+	dir := t.TempDir()
+	src := filepath.Join("..", "testdata", "storey")
+	entries, err := os.ReadDir(src)
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, e := range entries {
+		b, err := os.ReadFile(filepath.Join(src, e.Name()))
+		if err != nil {
+			t.Fatal(err)
+		}
+		if e.Name() == "workshop.toml" {
+			b = []byte(strings.Replace(string(b), "[storey]\n", "[storey]\ndiaphragm = \"flexible\"\n", 1))
+		}
+		if err := os.WriteFile(filepath.Join(dir, e.Name()), b, 0o644); err != nil {
+			t.Fatal(err)
+		}
+	}
+	a, err := storey.Load(filepath.Join(dir, "workshop.toml"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	if a.Storey.Diaphragm != storey.Flexible {
+		t.Fatal("the copy is not flexible")
+	}
+	svg, err := Storey(StoreyInput{Analysis: a, Now: fixedNow, Version: "test"})
+	if err != nil {
+		t.Fatal(err)
+	}
+	text := strings.Join(strings.Fields(allText(t, svg)), " ")
+	if strings.Contains(text, "torsion does not relieve") || !strings.Contains(text, "tributary shear") {
+		t.Errorf("the flexible plan's note is the rigid one:\n%s", text)
+	}
+}

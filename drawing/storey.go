@@ -321,7 +321,14 @@ func storeySide(d *doc, ws *wallSheet, a *storey.Analysis) {
 			notes = append(notes, fmt.Sprintf("Case %s: e = %s.", c.Name(), signedLength(c.Eccentricity, s.Units)))
 		}
 	}
-	notes = append(notes, "Design shear: the worst case, never below the direct shear (torsion does not relieve a wall).")
+	switch s.Diaphragm {
+	case storey.Flexible:
+		notes = append(notes, "Flexible diaphragm: the eccentricities above are the rigid idealisation's, for comparison; the design shear is the wall line's tributary shear shared by rigidity within the line, and the direct column gives it too.")
+	case storey.Envelope:
+		notes = append(notes, "Design shear: the larger of the rigid (worst case, never below the direct shear) and the flexible (tributary) shear of each wall.")
+	default:
+		notes = append(notes, "Design shear: the worst case, never below the direct shear (torsion does not relieve a wall).")
+	}
 	if !a.Absolute {
 		notes = append(notes, "Rigidities are relative × thickness: not every wall has a modulus.")
 	}
