@@ -11,11 +11,14 @@ import (
 // (docs/method.md §7) when one is asked for (a limit, C_d or I_e given):
 // a limit preset whose row of ASCE 7-22 Table 12.12-1 does not fit the
 // wall, a single top load on a wall with openings at more than one level,
-// and gross-section stiffness.
+// gross-section stiffness, and a wind load (the check is a seismic one).
 func (s *solver) driftNotes(w *geometry.Wall, root *node) {
 	d := w.Drift
 	if d.Limit <= 0 && d.Preset == "" && d.Cd == 0 && d.Ie == 0 {
 		return
+	}
+	if w.Load.Kind == geometry.Wind {
+		s.warn(WarnDriftWind, SeverityCaution, "drift", "the wall's lateral load is wind: the design drift δ = C_d·δe/I_e and the limits of ASCE 7-22 Table 12.12-1 belong to the seismic load effect (ASCE 7-22 §12.8.6, §12.12.1); under wind, drift is a serviceability check with limits the engineer chooses (ASCE 7-22 Appendix C, from memory), so read this check as a seismic one only (docs/method.md §7)")
 	}
 	if msg := PresetMisfit(w, s.res); msg != "" {
 		s.warn(WarnDriftRow, SeverityCaution, "drift", msg)

@@ -134,3 +134,40 @@ func TestDriftStoreysAndGross(t *testing.T) {
 		t.Error("storey warning with openings at one level")
 	}
 }
+
+// A drift check on a wall whose lateral load is wind warns that C_d, I_e
+// and the limits of ASCE 7-22 Table 12.12-1 belong to the seismic effect
+// (common practice: wind drift is a serviceability check).
+func TestDriftWindWarns(t *testing.T) {
+	const ft = geometry.Foot
+	w := &geometry.Wall{
+		Units: geometry.US, Length: 20 * ft, Height: 10 * ft, Thickness: 8 * geometry.Inch,
+		Material:  geometry.Material{Kind: geometry.ConcreteMasonry, Strength: 2000 * geometry.PSI},
+		Load:      geometry.Load{Shear: 10 * geometry.Kip},
+		Stiffness: geometry.Stiffness{Flexure: 1, Shear: 1},
+		Drift:     geometry.Drift{Cd: 4, Ie: 1, Limit: 0.01},
+		Layouts:   []geometry.Layout{{Name: "a"}},
+	}
+	has := func(r *Result) bool {
+		for _, x := range r.Warnings {
+			if x.Kind == WarnDriftWind {
+				return true
+			}
+		}
+		return false
+	}
+	r, err := Solve(w)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if has(r) {
+		t.Error("seismic load: a wind drift warning")
+	}
+	w.Load.Kind = geometry.Wind
+	if r, err = Solve(w); err != nil {
+		t.Fatal(err)
+	}
+	if !has(r) {
+		t.Error("wind load with C_d: no warning that the drift check is a seismic one")
+	}
+}

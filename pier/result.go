@@ -217,10 +217,12 @@ const (
 
 	// Drift warnings (docs/method.md §7): a limit preset whose row of
 	// ASCE 7-22 Table 12.12-1 does not fit the wall, a single top load on a
-	// wall with openings at more than one level, gross-section stiffness.
+	// wall with openings at more than one level, gross-section stiffness,
+	// a wind load under a seismic drift check.
 	WarnDriftRow     = "drift limit row"
 	WarnDriftStoreys = "drift over storeys"
 	WarnDriftGross   = "drift on gross sections"
+	WarnDriftWind    = "seismic drift under wind"
 )
 
 // FixedPiersAssumption is the method's rigid-spandrel assumption, which
@@ -234,7 +236,7 @@ const FixedPiersAssumption = "Piers marked fixed are assumed held against rotati
 // of the wall shares, or from the drift check's settings.
 func LayoutWarning(kind string) bool {
 	switch kind {
-	case WarnFixedPiers, WarnFixedTop, WarnDriftRow, WarnDriftStoreys, WarnDriftGross:
+	case WarnFixedPiers, WarnFixedTop, WarnDriftRow, WarnDriftStoreys, WarnDriftGross, WarnDriftWind:
 		return false
 	}
 	return true
