@@ -328,7 +328,7 @@ func TestMoveChangesSharesAsSolver(t *testing.T) {
 	}
 	changed := false
 	for _, p := range res.Piers {
-		want := fmt.Sprintf("%.0f%%", 100*p.Share)
+		want := report.Sig(100*p.Share) + "%" // three significant figures (docs/method.md §1)
 		if after[p.Name] != want {
 			t.Errorf("%s: table shows %q, pier.Solve gives %s", p.Name, after[p.Name], want)
 		}

@@ -522,11 +522,13 @@ func (e *elevation) tableView(l elevLayout) string {
 			total += widths[i] + 2
 		}
 	}
-	barW := max(4, min(30, e.width-total-5-1))
-	widths[5] = 5 + barW
+	// The share to three significant figures (docs/method.md §1), then
+	// its bar.
+	barW := max(4, min(30, e.width-total-7-1))
+	widths[5] = 7 + barW
 	for k, p := range piers {
 		n := int(math.Round(p.Share * float64(barW)))
-		rows[k][5] = fmt.Sprintf("%3.0f%% ", 100*p.Share) + strings.Repeat("#", n) + strings.Repeat(".", barW-n)
+		rows[k][5] = fmt.Sprintf("%6s ", report.Sig(100*p.Share)+"%") + strings.Repeat("#", n) + strings.Repeat(".", barW-n)
 		if e.showRatios() {
 			rows[k][5] = e.ratioCell(p.Name, barW)
 		}
