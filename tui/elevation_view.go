@@ -420,6 +420,9 @@ func (e *elevation) feLines(l elevLayout) []string {
 		return []string{head, st.dim.Render("solving...")}
 	}
 	r := f.res
+	if e.onFE() && !stale {
+		return e.classicCheckLines(l, r)
+	}
 	lines := []string{head}
 	if stale {
 		kv := func(k, v string) { lines = append(lines, l.kv(k, st.dim.Render(v))...) }
@@ -430,18 +433,41 @@ func (e *elevation) feLines(l elevLayout) []string {
 	kv := func(k, v string) { lines = append(lines, l.kv(k, v)...) }
 	kv("relative", num(r.Rigidity)+" x E t")
 	if e.res != nil && r.Rigidity > 0 {
-		d := r.Difference
-		word := "stiffer"
-		if d < 0 {
-			word = "softer"
-		}
-		text := fmt.Sprintf("%+.1f%% %s", 100*d, word)
-		if math.Abs(d) > fe.WarnDifference {
-			text = st.fail.Render(text + " !")
-		}
-		kv("classic is", text)
+		kv("classic is", classicIs(st, r.Difference))
 	}
 	kv("mesh", fmt.Sprintf("%s %s, %d el.", geometry.FormatLength(r.Mesh, e.wall().Units), r.Element, r.Elements))
+	return lines
+}
+
+// classicIs says how the classic rigidity stands to the model's,
+// (classic − FE)/FE, marked beyond fe.WarnDifference.
+func classicIs(st *styles, d float64) string {
+	word := "stiffer"
+	if d < 0 {
+		word = "softer"
+	}
+	text := fmt.Sprintf("%+.1f%% %s", 100*d, word)
+	if math.Abs(d) > fe.WarnDifference {
+		text = st.fail.Render(text + " !")
+	}
+	return text
+}
+
+// classicCheckLines is the check part of the panel on the fe basis: the
+// results above are the model's, so the check is the classic method's
+// rigidity beside it (docs/method.md §5).
+func (e *elevation) classicCheckLines(l elevLayout, r *fe.Result) []string {
+	st := e.c.styles
+	lines := []string{st.heading.Render("Check") + st.dim.Render(" (classic method)")}
+	kv := func(k, v string) { lines = append(lines, l.kv(k, v)...) }
+	if e.res == nil {
+		return append(lines, st.dim.Render("no answer for this layout"))
+	}
+	kv("relative", num(e.res.Rigidity)+" x E t")
+	if r.Rigidity > 0 {
+		kv("classic is", classicIs(st, r.Difference))
+	}
+	kv("model", fmt.Sprintf("%s %s, %d el.", geometry.FormatLength(r.Mesh, e.wall().Units), r.Element, r.Elements))
 	return lines
 }
 
