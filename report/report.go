@@ -11,7 +11,6 @@ import (
 	"io"
 	"math"
 	"pierwise/basis"
-	"strconv"
 	"strings"
 	"time"
 	"unicode"
@@ -369,12 +368,10 @@ func sectionForces(w *Text, res *pier.Result, wall *geometry.Wall) Units {
 // gravityLine describes the gravity loads of a wall: the line loads along
 // its top and its self weight, given or by default.
 func gravityLine(wall *geometry.Wall) string {
-	u := UnitsFor(wall.Units)
 	g := wall.Gravity
-	line := func(l geometry.LineLoad) string {
-		return fmt.Sprintf("%s %s/%s", Number(u.ForceOf(geometry.Force(l))/u.CoordOf(1)), u.Force, u.Coord)
-	}
-	s := "dead " + line(g.Dead) + ", live " + line(g.Live) + " along the top; "
+	// One formatting for every figure on the line: the geometry's own
+	// three-significant-figure load formatter, the same one the settings use.
+	s := "dead " + geometry.FormatLineLoad(g.Dead, wall.Units) + ", live " + geometry.FormatLineLoad(g.Live, wall.Units) + " along the top; "
 	sw, err := pier.SelfWeightOf(wall)
 	switch {
 	case err != nil:
@@ -382,12 +379,7 @@ func gravityLine(wall *geometry.Wall) string {
 	case sw.Weight == 0:
 		return s + "no self weight: " + sw.Source
 	}
-	how := sw.Source
-	if wall.Units == geometry.SI {
-		return s + fmt.Sprintf("self weight %s kN/m² of face (%s)", Number(float64(sw.Weight)/1e3), how)
-	}
-	psf := float64(geometry.Pound) / float64(geometry.Foot*geometry.Foot)
-	return s + fmt.Sprintf("self weight %s lb/ft² of face (%s)", Number(float64(sw.Weight)/psf), how)
+	return s + fmt.Sprintf("self weight %s of face (%s)", geometry.FormatAreaLoad(sw.Weight, wall.Units), sw.Source)
 }
 
 func results(w *Text, res *pier.Result, wall *geometry.Wall, u Units, f *fe.Result) {
@@ -581,22 +573,9 @@ func orDefault(s, d string) string {
 }
 
 // Fraction prints a drift limit or ratio as a decimal fraction to three
-// significant figures and at least three decimals: 0.010, 0.0075, 0.0001.
-func Fraction(x float64) string {
-	r, err := strconv.ParseFloat(fmt.Sprintf("%.3g", x), 64)
-	if err != nil {
-		return fmt.Sprintf("%.3f", x)
-	}
-	s := strconv.FormatFloat(r, 'f', -1, 64)
-	dot := strings.IndexByte(s, '.')
-	if dot < 0 {
-		s, dot = s+".", len(s)
-	}
-	for len(s)-dot-1 < 3 {
-		s += "0"
-	}
-	return s
-}
+// significant figures, trailing zeros kept, so that ratios side by side read
+// alike: 0.0100, 0.00750, 0.000170, 0.000218 (docs/method.md §1).
+func Fraction(x float64) string { return Sig(x) }
 
 // Grouped prints a large quantity as a whole number with its thousands
 // grouped: 752,179,465.

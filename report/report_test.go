@@ -132,7 +132,9 @@ func TestFraction(t *testing.T) {
 	for _, tc := range []struct {
 		x    float64
 		want string
-	}{{0.01, "0.010"}, {0.025, "0.025"}, {0.0075, "0.0075"}, {0.0001, "0.0001"}, {0.0125, "0.0125"}, {0.007, "0.007"}} {
+	}{{0.01, "0.0100"}, {0.025, "0.0250"}, {0.0075, "0.00750"}, {0.0001, "0.000100"}, {0.0125, "0.0125"}, {0.007, "0.00700"},
+		// A drift ratio keeps its trailing zero beside one that has none.
+		{0.000170, "0.000170"}, {0.000218, "0.000218"}, {0.0002184, "0.000218"}, {0, "0"}} {
 		if got := Fraction(tc.x); got != tc.want {
 			t.Errorf("Fraction(%g) = %q, want %q", tc.x, got, tc.want)
 		}
@@ -261,5 +263,26 @@ func TestWallReportSheets(t *testing.T) {
 		if !strings.Contains(lines[0], "project Library annex (invented) · job DEMO-01") {
 			t.Errorf("sheet %d project line %q", k+1, lines[0])
 		}
+	}
+}
+
+// The gravity line prints every load with one formatting, three significant
+// figures (docs/method.md §1): 12 and 5 kN/m read "12.0" and "5.00", not
+// "12.00" beside "5". The values are invented for the check.
+func TestWallReportGravityOneFormatting(t *testing.T) {
+	w, err := geometry.LoadFile("../testdata/walls/si.toml")
+	if err != nil {
+		t.Fatal(err)
+	}
+	w.Gravity.Dead = 12 * geometry.KilonewtonPerMetre
+	w.Gravity.Live = 5 * geometry.KilonewtonPerMetre
+	got := gravityLine(w)
+	for _, want := range []string{"dead 12.0 kN/m", "live 5.00 kN/m"} {
+		if !strings.Contains(got, want) {
+			t.Errorf("gravity line %q lacks %q", got, want)
+		}
+	}
+	if strings.Contains(got, "12.00") {
+		t.Errorf("gravity line %q mixes precisions", got)
 	}
 }
