@@ -150,22 +150,33 @@ func writeStoreyTables(out io.Writer, a *storey.Analysis) {
 			tw.Write(report.NewText(out), "  ")
 		}
 	}
-	fmt.Fprintln(out, "\ntorsional irregularity (ASCE 7-22 Table 12.3-1; A_x by §12.8.4.3)")
-	tw := newTextTable("case", "edges", "dmax/davg", "type", "A_x")
-	for _, c := range d.Cases {
-		edges := "south, north"
-		if c.Load == storey.Y {
-			edges = "west, east"
+	if s.Diaphragm == storey.Flexible {
+		// The rigid cases and the irregularity check are the rigid
+		// diaphragm's; on a flexible one they do not apply (docs/method.md §9).
+		fmt.Fprintln(out)
+		report.NewText(out).Wrapped("", "The diaphragm is flexible: the flexible distribution below governs. The rigid diaphragm's load cases and its torsional irregularity check (ASCE 7-22 Table 12.3-1, rigid or semirigid diaphragms) do not apply; --diaphragm rigid or envelope shows them.")
+	} else {
+		fmt.Fprintln(out, "\ntorsional irregularity (ASCE 7-22 Table 12.3-1; A_x by §12.8.4.3)")
+		tw := newTextTable("case", "edges", "dmax/davg", "type", "A_x")
+		for _, c := range d.Cases {
+			edges := "south, north"
+			if c.Load == storey.Y {
+				edges = "west, east"
+			}
+			ratio := "n/a"
+			if !math.IsInf(c.Torsion.Ratio, 0) {
+				ratio = fmt.Sprintf("%.3f", c.Torsion.Ratio)
+			}
+			tw.Add(c.Name(), edges, ratio, c.Torsion.Type.String(), fmt.Sprintf("%.3f", c.Torsion.Amplification))
 		}
-		ratio := "n/a"
-		if !math.IsInf(c.Torsion.Ratio, 0) {
-			ratio = fmt.Sprintf("%.3f", c.Torsion.Ratio)
-		}
-		tw.Add(c.Name(), edges, ratio, c.Torsion.Type.String(), fmt.Sprintf("%.3f", c.Torsion.Amplification))
+		tw.Write(report.NewText(out), "  ")
 	}
-	tw.Write(report.NewText(out), "  ")
 	if a.Flexible != nil {
-		fmt.Fprintf(out, "\nflexible diaphragm: shear to the wall lines (tributary spans), %s\n", u.Force)
+		governs := ""
+		if s.Diaphragm == storey.Flexible {
+			governs = " (governs)"
+		}
+		fmt.Fprintf(out, "\nflexible diaphragm%s: shear to the wall lines (tributary spans), %s\n", governs, u.Force)
 		tw := newTextTable("load", "line "+u.Coord, "tributary "+u.Coord, "shear "+u.Force)
 		for _, lines := range a.Flexible.Lines {
 			for _, ln := range lines {
@@ -226,7 +237,11 @@ func writeStoreyTables(out io.Writer, a *storey.Analysis) {
 			}
 			if best >= 0 {
 				e := a.Edges[best]
-				row(e.Edge+" edge, "+d.Cases[e.Case].Name(), e.Drift)
+				name := e.Edge + " edge, " + d.Cases[e.Case].Name()
+				if s.Diaphragm == storey.Flexible {
+					name += " (rigid, comparison)"
+				}
+				row(name, e.Drift)
 			}
 		}
 		tw.Write(report.NewText(out), "  ")

@@ -277,3 +277,31 @@ func TestStoreyWorkshopFrame(t *testing.T) {
 		}
 	}
 }
+
+// On a flexible diaphragm the storey table gives the flexible distribution
+// as the governing result and leaves out the rigid diaphragm's cases and
+// torsional irregularity table: Types 1a and 1b apply to rigid or
+// semirigid diaphragms (ASCE 7-22 Table 12.3-1). The envelope keeps both.
+func TestStoreyTableFlexibleGoverns(t *testing.T) {
+	code, out, errs := runCLI("storey", workshop, "--diaphragm", "flexible")
+	if code != exitOK {
+		t.Fatalf("exit %d: %s", code, errs)
+	}
+	if !strings.Contains(out, "flexible diaphragm (governs)") || !strings.Contains(out, "the flexible distribution below governs") {
+		t.Errorf("flexible output does not say the flexible distribution governs:\n%s", out)
+	}
+	for _, no := range []string{"torsional irregularity (ASCE", "case x +acc:", "dmax/davg"} {
+		if strings.Contains(out, no) {
+			t.Errorf("flexible output prints the rigid diaphragm's %q:\n%s", no, out)
+		}
+	}
+	code, out, errs = runCLI("storey", workshop, "--diaphragm", "envelope")
+	if code != exitOK {
+		t.Fatalf("exit %d: %s", code, errs)
+	}
+	for _, want := range []string{"torsional irregularity (ASCE", "case x +acc:", "flexible diaphragm: shear"} {
+		if !strings.Contains(out, want) {
+			t.Errorf("envelope output lacks %q", want)
+		}
+	}
+}
