@@ -26,8 +26,14 @@ type JSON struct {
 	Walls            []JSONWall `json:"walls"`
 	Warnings         []string   `json:"warnings"`
 
-	Diaphragm             string             `json:"diaphragm"` // "rigid", "flexible" or "envelope"
-	Basis                 string             `json:"basis"`     // "classic" or "fe"
+	Diaphragm string `json:"diaphragm"` // "rigid", "flexible" or "envelope"
+	// Governing names the distribution that gives the walls' design shears:
+	// "rigid", "flexible", or "envelope" (each wall's larger; its case says
+	// which). On "flexible", cases, torsional_irregularity, the walls' rigid
+	// shears and storey_drift's edges are the rigid diaphragm's, for
+	// comparison only.
+	Governing             string             `json:"governing"`
+	Basis                 string             `json:"basis"` // "classic" or "fe"
 	SDC                   string             `json:"sdc,omitempty"`
 	TorsionalIrregularity []JSONIrregularity `json:"torsional_irregularity"` // one per rigid-diaphragm case
 	Flexible              *JSONFlexible      `json:"flexible,omitempty"`
@@ -184,6 +190,7 @@ func (a *Analysis) JSON() JSON {
 		j.Cases = append(j.Cases, JSONCase{Name: cs.Name(), Load: cs.Load.String(), Eccentricity: c(cs.Eccentricity), Torque: report.Tidy(u.MomentOf(cs.Torque))})
 	}
 	j.Diaphragm, j.Basis, j.SDC = s.Diaphragm.String(), s.Basis.String(), s.SDC
+	j.Governing = s.Diaphragm.String() // the diaphragm chosen gives the design shears
 	for _, cs := range d.Cases {
 		ji := JSONIrregularity{Case: cs.Name(), Type: cs.Torsion.Type.String(), Amplification: report.Tidy(cs.Torsion.Amplification)}
 		if r := cs.Torsion.Ratio; !math.IsInf(r, 0) {

@@ -181,7 +181,17 @@ func reportBody(out io.Writer, a *Analysis, now time.Time, version string) error
 	w.Lines(Plan(s, a, 72, 20).String(), "  ")
 	w.Line(fmt.Sprintf("  x from 0 to %s %s (east), y from 0 to %s %s (north)", coord(u, s.Size[0]), u.Coord, coord(u, s.Size[1]), u.Coord))
 
-	w.Section("3. Centre of rigidity and torsional rigidity (rigid diaphragm)")
+	// On a flexible diaphragm sections 3 to 5 are the rigid diaphragm's,
+	// kept for comparison; the flexible distribution governs (docs/method.md §9).
+	comparison, heading := "", "3. Centre of rigidity and torsional rigidity (rigid diaphragm)"
+	if s.Diaphragm == Flexible {
+		comparison = " (rigid diaphragm, for comparison only)"
+		heading = "3. Centre of rigidity and J" + comparison
+	}
+	w.Section(heading)
+	if s.Diaphragm == Flexible {
+		w.Wrapped("  ", "The diaphragm is flexible: the flexible distribution of section 6 governs. Sections 3 to 5 are the rigid diaphragm's, shown for comparison only; they do not give the design shears.")
+	}
 	w.KV("x_R", fmt.Sprintf("%s %s  (Σ R·x / Σ R over the y-walls, Σ R = %s %s)", num(u.CoordOf(d.CenterOfRigidity[X]), 2), u.Coord, rigidity(a, u, d.SumRigidity[Y]), rigUnit(a, u)))
 	w.KV("y_R", fmt.Sprintf("%s %s  (Σ R·y / Σ R over the x-walls, Σ R = %s %s)", num(u.CoordOf(d.CenterOfRigidity[Y]), 2), u.Coord, rigidity(a, u, d.SumRigidity[X]), rigUnit(a, u)))
 	w.KV("J", fmt.Sprintf("%s  (Σ R·arm², all walls)", torsional(a, u, d.J)))
@@ -191,7 +201,7 @@ func reportBody(out io.Writer, a *Analysis, now time.Time, version string) error
 	for _, c := range d.Cases {
 		across := c.Load.other()
 		e0 := float64(s.MassCenter[across]) - d.CenterOfRigidity[across]
-		w.Section(fmt.Sprintf("4.%d Load along %s, case %s", caseNumber(c), c.Load, c.Name()))
+		w.Section(fmt.Sprintf("4.%d Load along %s, case %s%s", caseNumber(c), c.Load, c.Name(), comparison))
 		sign := "+"
 		if c.Sign < 0 {
 			sign = "-"
@@ -364,7 +374,11 @@ func dirName(r WallRef) string {
 // torsionSection is the torsional irregularity check of each rigid case.
 func torsionSection(w *report.Text, a *Analysis, u report.Units) {
 	s, d := a.Storey, a.Distribution
-	w.Section("5. Torsional irregularity (ASCE 7-22 Table 12.3-1, §12.8.4.3)")
+	heading := "5. Torsional irregularity (ASCE 7-22 Table 12.3-1, §12.8.4.3)"
+	if s.Diaphragm == Flexible {
+		heading = "5. Torsional irregularity (rigid diaphragm, for comparison only)"
+	}
+	w.Section(heading)
 	w.Wrapped("  ", "Displacement along the load at the two plan edges perpendicular to it, rigid diaphragm, accidental torsion included with A_x = 1. Type 1a above 1.2, 1b above 1.4; A_x = (δmax/1.2 δavg)², from 1 to 3, in seismic design categories C to F.")
 	if s.Diaphragm == Flexible {
 		w.Wrapped("  ", "For information only: the diaphragm is flexible, and Types 1a and 1b apply to rigid or semirigid diaphragms.")
@@ -401,7 +415,11 @@ func torsionSection(w *report.Text, a *Analysis, u report.Units) {
 // flexibleSection shows the wall lines of the flexible diaphragm.
 func flexibleSection(w *report.Text, a *Analysis, u report.Units) {
 	s := a.Storey
-	w.Section("6. Flexible diaphragm: shear to the wall lines")
+	heading := "6. Flexible diaphragm: shear to the wall lines"
+	if s.Diaphragm == Flexible {
+		heading += " (governs)"
+	}
+	w.Section(heading)
 	w.Wrapped("  ", "The storey shear is spread across the plan as the mass is (uniform, or linear with its resultant at the mass centre), carried to the wall lines as simple spans between lines (the stretch from a plan edge to the outermost line goes to that line), and shared within a line by rigidity. No torsion.")
 	for _, load := range []Direction{X, Y} {
 		ld := a.Flexible.Load[load]

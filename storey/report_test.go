@@ -71,3 +71,46 @@ func TestWriteReportError(t *testing.T) {
 		t.Errorf("wrote %d bytes for a bad storey", buf.Len())
 	}
 }
+
+// On a flexible diaphragm the report heads the rigid diaphragm's sections
+// as shown for comparison only and the flexible distribution as governing;
+// the JSON says which governs. On the rigid workshop the JSON says rigid.
+func TestReportFlexibleGoverns(t *testing.T) {
+	a, err := Load(writeStorey(t, boxStorey))
+	if err != nil {
+		t.Fatal(err)
+	}
+	var buf bytes.Buffer
+	if err := Report(&buf, a, time.Date(2026, 12, 2, 12, 0, 0, 0, time.UTC), "test"); err != nil {
+		t.Fatal(err)
+	}
+	got := buf.String()
+	for _, want := range []string{
+		"3. Centre of rigidity and J (rigid diaphragm, for comparison only)",
+		"(rigid diaphragm, for comparison only)", // each rigid case
+		"5. Torsional irregularity (rigid diaphragm, for comparison only)",
+		"6. Flexible diaphragm: shear to the wall lines (governs)",
+	} {
+		if !strings.Contains(got, want) {
+			t.Errorf("flexible report lacks %q", want)
+		}
+	}
+	if n := strings.Count(got, "(rigid diaphragm, for comparison only)"); n != 6 {
+		t.Errorf("%d rigid sections marked for comparison, want 6 (3, four cases, 5)", n)
+	}
+	for i, l := range strings.Split(got, "\n") {
+		if n := len([]rune(l)); n > 78 {
+			t.Errorf("line %d has %d columns: %q", i+1, n, l)
+		}
+	}
+	if g := a.JSON().Governing; g != "flexible" {
+		t.Errorf("JSON governing %q, want flexible", g)
+	}
+	rigid, err := Load(filepath.Join("..", "testdata", "storey", "workshop.toml"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	if g := rigid.JSON().Governing; g != "rigid" {
+		t.Errorf("JSON governing %q on the rigid workshop, want rigid", g)
+	}
+}
