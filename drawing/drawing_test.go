@@ -11,6 +11,7 @@ import (
 	"math"
 	"os"
 	"path/filepath"
+	"strconv"
 	"strings"
 	"testing"
 	"time"
@@ -22,6 +23,7 @@ import (
 	"pierwise/internal/testkit"
 	"pierwise/pier"
 	"pierwise/pier/fe"
+	"pierwise/report"
 	"pierwise/storey"
 )
 
@@ -658,5 +660,68 @@ func TestStoreyFlexibleNote(t *testing.T) {
 	text := strings.Join(strings.Fields(allText(t, svg)), " ")
 	if strings.Contains(text, "torsion does not relieve") || !strings.Contains(text, "tributary shear") {
 		t.Errorf("the flexible plan's note is the rigid one:\n%s", text)
+	}
+}
+
+// The drawings print forces, moments, shares and relative rigidities to
+// three significant figures through report.Sig, as every other view does
+// (docs/method.md §1): each "V …"/"M …" label of the SI wall and each
+// number of the storey plan's wall table is already in Sig's form.
+func TestDrawingThreeFigures(t *testing.T) {
+	sigForm := func(s string) bool {
+		v, err := strconv.ParseFloat(s, 64)
+		return err == nil && report.Sig(v) == s
+	}
+	for _, file := range []string{"si.toml", "nested.toml"} {
+		w, r := loadWall(t, file)
+		in := wallInput("testdata/walls/"+file, w, r)
+		in.Show = Forces
+		svg, err := Wall(in)
+		if err != nil {
+			t.Fatal(err)
+		}
+		labels := 0
+		for _, l := range strings.Split(allText(t, svg), "\n") {
+			f := strings.Fields(l)
+			if len(f) == 3 && (f[0] == "V" || f[0] == "M") {
+				labels++
+				if !sigForm(f[1]) {
+					t.Errorf("%s: label %q is not three significant figures", file, l)
+				}
+			}
+		}
+		if labels == 0 {
+			t.Errorf("%s: no V or M label drawn", file)
+		}
+		// The pier table gives each pier's V and M as Sig prints them.
+		text := allText(t, svg)
+		u := report.UnitsFor(w.Units)
+		for _, p := range in.Piers {
+			if p.Cut {
+				continue
+			}
+			for _, want := range []string{report.Sig(u.ForceOf(p.Shear)), report.Sig(u.MomentOf(p.Moment)), report.SigPercent(p.Share)} {
+				if !strings.Contains(text, "\n"+want+"\n") {
+					t.Errorf("%s: pier %s: %q not in the drawing", file, p.Name, want)
+				}
+			}
+		}
+	}
+	a, err := storey.Load(filepath.Join("..", "testdata", "storey", "workshop.toml"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	svg, err := Storey(StoreyInput{Analysis: a, Now: fixedNow, Version: "test"})
+	if err != nil {
+		t.Fatal(err)
+	}
+	text := allText(t, svg)
+	u := report.UnitsFor(a.Storey.Units)
+	for _, wl := range a.Walls {
+		for _, want := range []string{report.Sig(wl.Unit.Rigidity), report.Sig(u.ForceOf(geometry.Force(wl.Design.Direct))), report.Sig(u.ForceOf(geometry.Force(wl.Design.Shear)))} {
+			if !strings.Contains(text, "\n"+want+"\n") {
+				t.Errorf("storey table: wall %s: %q not in the drawing", wl.Name, want)
+			}
+		}
 	}
 }

@@ -186,7 +186,7 @@ func (s *wallSheet) pierTable(d *doc, x, y, w float64, in WallInput, maxY float6
 			break
 		}
 		cells := []string{p.Name, dimText(p.Rect.W(), s.sys), dimText(p.Rect.H(), s.sys),
-			"–", fmt.Sprintf("%.1f %%", 100*p.Share)}
+			"–", report.SigPercent(p.Share)}
 		if p.Rect.W() > 0 {
 			cells[3] = fmt.Sprintf("%.2f", p.Rect.H()/p.Rect.W())
 		}
@@ -203,7 +203,7 @@ func (s *wallSheet) pierTable(d *doc, x, y, w float64, in WallInput, maxY float6
 			}
 			cells = append(cells, r)
 		case in.HasLoad:
-			cells = append(cells, fmt.Sprintf("%.2f", u.ForceOf(p.Shear)), fmt.Sprintf("%.1f", u.MomentOf(p.Moment)))
+			cells = append(cells, report.Sig(u.ForceOf(p.Shear)), report.Sig(u.MomentOf(p.Moment)))
 		}
 		row(cells, false)
 	}

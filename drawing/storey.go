@@ -289,7 +289,7 @@ func storeySide(d *doc, ws *wallSheet, a *storey.Analysis) {
 	for _, wl := range a.Walls {
 		rel := "given" // a wall given by its rigidity, as in the storey report
 		if wl.Unit != nil {
-			rel = fmt.Sprintf("%.4f", wl.Unit.Rigidity)
+			rel = report.Sig(wl.Unit.Rigidity)
 		}
 		dir := wl.Ref.Direction.String()
 		if wl.Ref.Direction == storey.Angled {
@@ -300,7 +300,7 @@ func storeySide(d *doc, ws *wallSheet, a *storey.Analysis) {
 			governs = storey.CaseName(dist, wl.Design.Case)
 		}
 		cells := []string{wl.Name, dir, rel,
-			fmt.Sprintf("%.2f", u.ForceOf(geometry.Force(wl.Design.Direct))), fmt.Sprintf("%.2f", u.ForceOf(geometry.Force(wl.Design.Shear))), governs}
+			report.Sig(u.ForceOf(geometry.Force(wl.Design.Direct))), report.Sig(u.ForceOf(geometry.Force(wl.Design.Shear))), governs}
 		cx := x
 		for i, c := range cols {
 			anchor, tx := "end", cx+c.width-0.5

@@ -545,11 +545,12 @@ func pierValue(in WallInput, p Pier, u report.Units) []string {
 	switch in.Show {
 	case Forces:
 		if !in.HasLoad {
-			return []string{fmt.Sprintf("%.1f %%", 100*p.Share)}
+			return []string{report.SigPercent(p.Share)}
 		}
+		// Three significant figures, as every other view (docs/method.md §1).
 		return []string{
-			fmt.Sprintf("V %.2f %s", u.ForceOf(p.Shear), u.Force),
-			fmt.Sprintf("M %.1f %s", u.MomentOf(p.Moment), u.Moment),
+			"V " + report.Sig(u.ForceOf(p.Shear)) + " " + u.Force,
+			"M " + report.Sig(u.MomentOf(p.Moment)) + " " + u.Moment,
 		}
 	case Ratios:
 		if in.Ratio == nil {
@@ -560,5 +561,5 @@ func pierValue(in WallInput, p Pier, u report.Units) []string {
 		}
 		return []string{"D/C –"}
 	}
-	return []string{fmt.Sprintf("%.1f %%", 100*p.Share)}
+	return []string{report.SigPercent(p.Share)}
 }
