@@ -96,7 +96,7 @@ func reportBody(out io.Writer, a *Analysis, now time.Time, version string) error
 	if s.Cd > 0 {
 		lim := "no limit given"
 		if s.DriftLimit > 0 {
-			lim = fmt.Sprintf("limit %.3g h", s.DriftLimit)
+			lim = "limit " + report.Fraction(s.DriftLimit) + " h"
 			if s.DriftPreset != "" {
 				lim += " (" + s.DriftPreset + ", ASCE 7-22 Table 12.12-1)"
 			}
@@ -462,7 +462,7 @@ func driftSection(w *report.Text, a *Analysis, u report.Units, n int) {
 				verdict = "EXCEEDS"
 			}
 		}
-		t.Add(name, report.Sig(u.DeflectionOf(geometry.Length(dr.Elastic))), report.Sig(u.DeflectionOf(geometry.Length(dr.Design))), fmt.Sprintf("%.5f", dr.Ratio), lim, verdict)
+		t.Add(name, report.Sig(u.DeflectionOf(geometry.Length(dr.Elastic))), report.Sig(u.DeflectionOf(geometry.Length(dr.Design))), report.Fraction(dr.Ratio), lim, verdict)
 	}
 	head := []string{"where", "δe " + u.Deflection, "δ " + u.Deflection, "δ/h", "limit " + u.Deflection, "check"}
 	right := []bool{false, true, true, true, true, false}
