@@ -1,7 +1,6 @@
 package main
 
 import (
-	"errors"
 	"fmt"
 	"time"
 
@@ -132,11 +131,7 @@ func runDraw(e *env, args []string) error {
 		fmt.Fprintln(e.stderr, "drawing written to", *outPath)
 	}
 	if classicErr != nil {
-		var le *locatedError
-		if errors.As(classicErr, &le) {
-			return classicErr // it names the file already
-		}
-		return fmt.Errorf("%s: %w", displayName(arg), classicErr)
+		return namedFailure(arg, classicErr)
 	}
 	return nil
 }

@@ -86,13 +86,20 @@ func runReport(e *env, args []string) error {
 		fmt.Fprintln(e.stderr, "report written to", *outPath)
 	}
 	if classicErr != nil {
-		var le *locatedError
-		if errors.As(classicErr, &le) {
-			return classicErr // it names the file already
-		}
-		return fmt.Errorf("%s: %w", displayName(arg), classicErr)
+		return namedFailure(arg, classicErr)
 	}
 	return feErr
+}
+
+// namedFailure is err, the reason a command's output has no answer for
+// arg, named by its file: as it is when it names its file and line
+// already, else headed by the file's name.
+func namedFailure(arg string, err error) error {
+	var le *locatedError
+	if errors.As(err, &le) {
+		return err
+	}
+	return fmt.Errorf("%s: %w", displayName(arg), err)
 }
 
 // reportInputs lists the files a report of arg reads: the wall file, or a

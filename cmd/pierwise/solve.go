@@ -183,11 +183,7 @@ func runSolve(e *env, args []string) error {
 			continue
 		}
 		if serr := s.basisErr(); serr != nil {
-			err := serr
-			var le *locatedError
-			if !errors.As(err, &le) {
-				err = fmt.Errorf("%s: %w", displayName(f), serr)
-			}
+			err := namedFailure(f, serr)
 			if len(files) > 1 {
 				fmt.Fprintln(e.stderr, "pierwise:", err)
 			}
