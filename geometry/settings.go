@@ -613,49 +613,61 @@ func checkThickness(s *Setting, w *Wall, l *ErrorList) {
 	}
 }
 
-func checkStrength(s *Setting, w *Wall, l *ErrorList) {
-	m, sys := w.Material, w.Units
-	if v := float64(m.Strength); !finite(v) {
-		l.add(s.Key, "is not a finite number")
-	} else if v < 0 || (v == 0 && m.Kind != Custom) {
-		l.add(s.Key, "must be greater than zero (is "+FormatStress(m.Strength, sys)+")")
-	} else if v > float64(maxStress) {
-		l.add(s.Key, tooLargeStress(m.Strength, sys))
-	} else if v > 0 && (m.Strength < minStrength || m.Strength > maxStrength) {
-		// f'm and f'c of real walls lie within a few MPa to about 100 MPa;
-		// far outside that, a unit was most likely left out or mistyped
-		// (strength = 2000 in an SI file is 2000 MPa, not psi).
-		l.add(s.Key, "is implausible for f'm or f'c ("+FormatStress(m.Strength, sys)+"); strengths run from 1 MPa to 250 MPa (145 psi to 36 ksi): check the unit")
+// stressCheck is what checkStress asks of a stress value: zero is an error
+// unless zeroOK (and then says required when it is set), and a positive
+// value outside [lo, hi] is implausible, with what naming the quantity and
+// ranges stating the plausible ones.
+type stressCheck struct {
+	zeroOK   bool
+	required string
+	lo, hi   Stress
+	what     string
+	ranges   string
+}
+
+// checkStress adds to l the one error of v for key, if any: not finite,
+// negative (or zero where it must not be), beyond the largest stress, or
+// implausible, which a unit left out or mistyped most often explains.
+func checkStress(key string, v Stress, sys System, c stressCheck, l *ErrorList) {
+	switch f := float64(v); {
+	case !finite(f):
+		l.add(key, "is not a finite number")
+	case f < 0 || (f == 0 && !c.zeroOK):
+		l.add(key, "must be greater than zero (is "+FormatStress(v, sys)+")")
+	case v > maxStress:
+		l.add(key, tooLargeStress(v, sys))
+	case f == 0 && c.required != "":
+		l.add(key, c.required)
+	case f > 0 && (v < c.lo || v > c.hi):
+		l.add(key, "is implausible for "+c.what+" ("+FormatStress(v, sys)+"); "+c.ranges+": check the unit")
 	}
 }
 
+// f'm and f'c of real walls lie within a few MPa to about 100 MPa; far
+// outside that, a unit was most likely left out or mistyped (strength =
+// 2000 in an SI file is 2000 MPa, not psi).
+func checkStrength(s *Setting, w *Wall, l *ErrorList) {
+	checkStress(s.Key, w.Material.Strength, w.Units, stressCheck{
+		zeroOK: w.Material.Kind == Custom, lo: minStrength, hi: maxStrength,
+		what: "f'm or f'c", ranges: "strengths run from 1 MPa to 250 MPa (145 psi to 36 ksi)",
+	}, l)
+}
+
+// modulus = 1500 in a US file is 1500 psi, a thousand times too soft.
 func checkModulus(s *Setting, w *Wall, l *ErrorList) {
-	m, sys := w.Material, w.Units
-	if e := float64(m.Modulus); !finite(e) {
-		l.add(s.Key, "is not a finite number")
-	} else if e < 0 {
-		l.add(s.Key, "must be greater than zero (is "+FormatStress(m.Modulus, sys)+")")
-	} else if e > float64(maxStress) {
-		l.add(s.Key, tooLargeStress(m.Modulus, sys))
-	} else if e == 0 && m.Kind == Custom {
-		l.add(s.Key, `is required for kind = "custom"`)
-	} else if e > 0 && (m.Modulus < minModulus || m.Modulus > maxModulus) {
-		// modulus = 1500 in a US file is 1500 psi, a thousand times too soft.
-		l.add(s.Key, "is implausible for E ("+FormatStress(m.Modulus, sys)+"); moduli run from 0.5 GPa to 500 GPa (73 ksi to 72,500 ksi): check the unit")
+	c := stressCheck{zeroOK: true, lo: minModulus, hi: maxModulus,
+		what: "E", ranges: "moduli run from 0.5 GPa to 500 GPa (73 ksi to 72,500 ksi)"}
+	if w.Material.Kind == Custom {
+		c.required = `is required for kind = "custom"`
 	}
+	checkStress(s.Key, w.Material.Modulus, w.Units, c, l)
 }
 
 func checkShearModulus(s *Setting, w *Wall, l *ErrorList) {
-	m, sys := w.Material, w.Units
-	if g := float64(m.ShearModulus); !finite(g) {
-		l.add(s.Key, "is not a finite number")
-	} else if g < 0 {
-		l.add(s.Key, "must be greater than zero (is "+FormatStress(m.ShearModulus, sys)+")")
-	} else if g > float64(maxStress) {
-		l.add(s.Key, tooLargeStress(m.ShearModulus, sys))
-	} else if g > 0 && (m.ShearModulus < minModulus/5 || m.ShearModulus > maxModulus/2) {
-		l.add(s.Key, "is implausible for E_v ("+FormatStress(m.ShearModulus, sys)+"); shear moduli run from 0.1 GPa to 250 GPa (15 ksi to 36,000 ksi): check the unit")
-	}
+	checkStress(s.Key, w.Material.ShearModulus, w.Units, stressCheck{
+		zeroOK: true, lo: minModulus / 5, hi: maxModulus / 2,
+		what: "E_v", ranges: "shear moduli run from 0.1 GPa to 250 GPa (15 ksi to 36,000 ksi)",
+	}, l)
 }
 
 // checkPoisson: ν of an isotropic material in plane stress lies below 0.5
