@@ -90,22 +90,13 @@ func (c *concrete) section() *Section { return c.sec }
 
 func (c *concrete) check(k *Check, combo Combination) {
 	pu, vu, mu := float64(k.Axial), float64(k.Shear), k.Moment
-	st := c.sec.MomentAt(pu, compRight(mu))
-	k.PhiMoment, k.PhiFlexValue = st.PhiM, st.Phi
+	st := flexure(c.sec, k, pu, mu)
+	k.PhiFlexValue = st.Phi
 	if st.Exceeded {
-		comp, tens := c.sec.PhiPMax()
-		if pu > 0 {
-			k.FlexureRatio = ratio(pu, comp)
-		} else {
-			k.FlexureRatio = ratio(pu, tens)
-		}
-		k.Governs = AxialMode
 		k.PhiFlexValue = 0.65
 		if pu < 0 {
 			k.PhiFlexValue = 0.90
 		}
-	} else {
-		k.FlexureRatio = ratio(mu, st.PhiM)
 	}
 	vn := ShearACI(c.acv, c.fc, c.hwlw, c.rhoT, c.fy)
 	phi := PhiConcreteShear

@@ -109,20 +109,8 @@ func ShearTMS(an, fm, pu, mvd, dv, avs, fy, gamma float64) float64 {
 
 func (m *masonry) check(c *Check, combo Combination) {
 	pu, vu, mu := float64(c.Axial), float64(c.Shear), c.Moment
-	st := m.sec.MomentAt(pu, compRight(mu))
+	flexure(m.sec, c, pu, mu)
 	c.PhiFlexValue = PhiMasonryFlex
-	c.PhiMoment = st.PhiM
-	if st.Exceeded {
-		comp, tens := m.sec.PhiPMax()
-		if pu > 0 {
-			c.FlexureRatio = ratio(pu, comp)
-		} else {
-			c.FlexureRatio = ratio(pu, tens)
-		}
-		c.Governs = AxialMode
-	} else {
-		c.FlexureRatio = ratio(mu, st.PhiM)
-	}
 	dv := m.L
 	vn := ShearTMS(m.an, m.fc, pu, mvd(mu, vu, dv), dv, m.avs, m.fy, m.gamma)
 	c.PhiShearValue = PhiMasonryShear
@@ -132,6 +120,26 @@ func (m *masonry) check(c *Check, combo Combination) {
 		c.DesignShear = geometry.Force(SpecialMasonryShear(vu, mu, m.sec.NominalMomentAt(pu, compRight(mu), false)))
 	}
 	c.ShearRatio = ratio(float64(c.DesignShear), float64(c.PhiShear))
+}
+
+// flexure fills the flexural part of check c of section sec under P_u = pu
+// and M_u = mu (both codes): φM_n at P_u and the flexure ratio, or, where P_u
+// lies beyond the section's axial strength, the axial ratio (AxialMode).
+func flexure(sec *Section, c *Check, pu, mu float64) Strength {
+	st := sec.MomentAt(pu, compRight(mu))
+	c.PhiMoment = st.PhiM
+	if !st.Exceeded {
+		c.FlexureRatio = ratio(mu, st.PhiM)
+		return st
+	}
+	comp, tens := sec.PhiPMax()
+	if pu > 0 {
+		c.FlexureRatio = ratio(pu, comp)
+	} else {
+		c.FlexureRatio = ratio(pu, tens)
+	}
+	c.Governs = AxialMode
+	return st
 }
 
 // SpecialMasonryShear is the shear a special reinforced masonry shear wall is
