@@ -3,7 +3,6 @@ package report
 import (
 	"fmt"
 	"math"
-	"strings"
 
 	"pierwise/basis"
 	"pierwise/geometry"
@@ -109,14 +108,8 @@ func piersFE(w *Text, b *basis.Result, u Units) {
 	}
 	var nested bool
 	for _, p := range b.Piers() {
-		name := strings.Repeat("  ", depth(p.Name)-1) + p.Name
-		switch {
-		case p.Cut:
-			name += "†"
-		case !p.Leaf:
-			name += "*"
-			nested = true
-		}
+		name := pierLabel(p.Name, p.Cut, p.Leaf)
+		nested = nested || (!p.Leaf && !p.Cut)
 		row := []string{name, L(p.H()), L(p.L()), fmt.Sprintf("%.2f", p.Ratio()), p.Support.String(), SigPercent(p.Share), SigPercent(p.Classic.Share)}
 		if loaded && !p.Cut {
 			row = append(row, Sig(u.ForceOf(p.Shear)), Sig(u.MomentOf(p.Moment)))

@@ -261,19 +261,23 @@ func pierList(names []string) string {
 	return fmt.Sprintf("%s … %s (%d)", names[0], names[len(names)-1], len(names))
 }
 
+// pierLabel is a pier's name in a table: indented by its depth, † when its
+// openings cut it (no load path), * when it has piers of its own.
+func pierLabel(name string, cut, leaf bool) string {
+	n := strings.Repeat("  ", depth(name)-1) + name
+	switch {
+	case cut:
+		n += "†"
+	case !leaf:
+		n += "*"
+	}
+	return n
+}
+
 func pierTable(w *Text, res *pier.Result, wall *geometry.Wall) {
 	u := UnitsFor(wall.Units)
 	L := func(x float64) string { return geometry.FormatLength(geometry.Length(x), wall.Units) }
-	name := func(p pier.Pier) string {
-		n := strings.Repeat("  ", depth(p.Name)-1) + p.Name
-		switch {
-		case p.Cut:
-			n += "†"
-		case !p.Leaf:
-			n += "*"
-		}
-		return n
-	}
+	name := func(p pier.Pier) string { return pierLabel(p.Name, p.Cut, p.Leaf) }
 	// Geometry and rigidity first; shares and forces in a second table, so
 	// each fits the report's width.
 	t := Table{Head: []string{"pier", "h", "L", "h/L", "support", "R rel"}, Right: []bool{false, true, true, true, false, true}}
